@@ -1,0 +1,42 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import cookieParser from 'cookie-parser';
+import express from 'express';
+import helmet from 'helmet';
+import { authRouter } from './auth/router';
+import { loadUser } from './auth/session';
+import type { AppContext } from './context';
+import { healthRouter } from './health/router';
+import { apiNotFound, errorMiddleware } from './lib/error-middleware';
+
+const clientDist = path.resolve(import.meta.dirname, '..', 'dist');
+
+export function createApp(ctx: AppContext) {
+  const { env, db, pool } = ctx;
+  const app = express();
+  app.disable('x-powered-by');
+  if (env.TRUST_PROXY) app.set('trust proxy', env.TRUST_PROXY);
+
+  app.use(helmet());
+  app.use(express.json({ limit: '100kb' }));
+  app.use(cookieParser());
+
+  const api = express.Router();
+  api.use('/health', healthRouter(pool));
+  api.use(loadUser(db, env));
+  api.use('/auth', authRouter(db, env));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  // The built client, with every other GET falling back to index.html for client-side routing.
+  if (existsSync(path.join(clientDist, 'index.html'))) {
+    app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
+    app.use('/assets', express.static(path.join(clientDist, 'assets'), { immutable: true, maxAge: '1y' }));
+    app.get('/{*path}', (_req, res) => {
+      res.set('Cache-Control', 'no-cache').sendFile(path.join(clientDist, 'index.html'));
+    });
+  }
+
+  app.use(errorMiddleware);
+  return app;
+}

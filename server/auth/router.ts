@@ -1,0 +1,65 @@
+import { Router } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { eq } from 'drizzle-orm';
+import { loginSchema, preferencesSchema, signupSchema } from '@shared/schemas/auth';
+import type { Db } from '../db/client';
+import { users } from '../db/schema';
+import type { Env } from '../env';
+import { handle } from '../lib/handle';
+import { createUser, verifyLogin } from './service';
+import { clearSession, currentUser, issueSession, loadSessionUser, requireUser, toMe } from './session';
+
+export function authRouter(db: Db, env: Env) {
+  const router = Router();
+  // In-memory counts: per instance. See README, "Beyond one machine", for the shared store.
+  const authLimiter = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: env.AUTH_RATE_LIMIT_MAX,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    message: { error: 'rate_limited', message: 'Too many attempts. Please wait a few minutes and try again.' },
+  });
+
+  router.post(
+    '/signup',
+    authLimiter,
+    handle({ body: signupSchema }, async ({ body }, _req, res) => {
+      const id = await createUser(db, body);
+      const user = await loadSessionUser(db, id);
+      issueSession(res, env, { id, tokenVersion: 0 });
+      res.status(201);
+      return toMe(user!);
+    }),
+  );
+
+  router.post(
+    '/login',
+    authLimiter,
+    handle({ body: loginSchema }, async ({ body }, _req, res) => {
+      const user = await verifyLogin(db, body);
+      issueSession(res, env, user);
+      return toMe((await loadSessionUser(db, user.id))!);
+    }),
+  );
+
+  router.post('/logout', (_req, res) => {
+    clearSession(res, env);
+    res.status(204).end();
+  });
+
+  router.get('/me', requireUser, (req, res) => {
+    res.json(toMe(currentUser(req)));
+  });
+
+  router.patch(
+    '/me',
+    requireUser,
+    handle({ body: preferencesSchema }, async ({ body }, req) => {
+      const user = currentUser(req);
+      if (Object.keys(body).length > 0) await db.update(users).set(body).where(eq(users.id, user.id));
+      return toMe((await loadSessionUser(db, user.id))!);
+    }),
+  );
+
+  return router;
+}

@@ -1,0 +1,12 @@
+import type { Pool } from 'mysql2/promise';
+import type { Db } from './db/client';
+import type { Env } from './env';
+import type { Mailer } from './mail/mailer';
+
+/** What every router and service may depend on; built once in index.ts (or by a test). */
+export interface AppContext {
+  env: Env;
+  db: Db;
+  pool: Pool;
+  mailer: Mailer;
+}

@@ -1,0 +1,3 @@
+// Every table of the product; drizzle-kit reads this file to generate migrations.
+export * from './users';
+export * from './clubs';

@@ -1,0 +1,2 @@
+// Each feature registers its demo data here, in order (recipes before brew days, and so on).
+export {};

@@ -1,0 +1,40 @@
+import { createApp } from './app';
+import type { AppContext } from './context';
+import { createDb } from './db/client';
+import { loadEnv } from './env';
+import { createMailer } from './mail/mailer';
+
+/** Starts the HTTP server; resolves with a function that shuts it down gracefully. */
+export async function startServer(env = loadEnv()) {
+  const { db, pool } = createDb(env.DATABASE_URL);
+  const ctx: AppContext = { env, db, pool, mailer: createMailer(env) };
+  const app = createApp(ctx);
+  const server = await new Promise<import('node:http').Server>((resolve) => {
+    const s = app.listen(env.PORT, env.HOST, () => resolve(s));
+  });
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : env.PORT;
+  console.log(`Wortwise is serving on http://${env.HOST}:${port}`);
+  return {
+    port,
+    ctx,
+    async stop() {
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        server.closeIdleConnections();
+      });
+      await pool.end();
+    },
+  };
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  const running = await startServer();
+  const shutdown = async (signal: string) => {
+    console.log(`${signal}: closing connections`);
+    await running.stop();
+    process.exit(0);
+  };
+  process.once('SIGINT', () => void shutdown('SIGINT'));
+  process.once('SIGTERM', () => void shutdown('SIGTERM'));
+}

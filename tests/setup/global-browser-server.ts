@@ -1,0 +1,48 @@
+/**
+ * Browser tests: build the client, then serve it with the real API on a free port, backed by
+ * this run's database and a fake SMTP server whose listing the tests read.
+ */
+import { execFileSync } from 'node:child_process';
+import type { TestProject } from 'vitest/node';
+import { seedDemo } from '../../server/db/seed';
+import '../../server/demo-seeds';
+import { createDb } from '../../server/db/client';
+import { loadEnv } from '../../server/env';
+import { startServer } from '../../server/index';
+import { startFakeSmtp } from '../../server/mail/fake-smtp';
+import { ensureChromium } from '../../scripts/lib/chromium';
+import { projectRoot } from '../../scripts/lib/mariadb';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string;
+    fakeSmtpApiUrl: string;
+  }
+}
+
+export default async function setup(project: TestProject) {
+  ensureChromium();
+  if (!process.env.SKIP_BUILD) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: projectRoot, stdio: 'inherit' });
+  const databaseUrl = project.getProvidedContext().databaseUrl;
+  const { db, pool } = createDb(databaseUrl);
+  await seedDemo(db);
+  await pool.end();
+  const smtp = await startFakeSmtp();
+  const server = await startServer(
+    loadEnv({
+      NODE_ENV: 'test',
+      PORT: '0',
+      DATABASE_URL: databaseUrl,
+      SMTP_PORT: String(smtp.smtpPort),
+      FAKE_SMTP_API_URL: smtp.apiUrl,
+      AUTH_RATE_LIMIT_MAX: '10000',
+      CALC_RATE_LIMIT_MAX: '10000',
+    }),
+  );
+  project.provide('baseUrl', `http://127.0.0.1:${server.port}`);
+  project.provide('fakeSmtpApiUrl', smtp.apiUrl);
+  return async () => {
+    await server.stop();
+    await smtp.close();
+  };
+}

@@ -1,0 +1,63 @@
+/**
+ * API test harness: the real app on the run's MariaDB database, mail going to a fake SMTP server
+ * started for this test file. No fake of our own backend.
+ */
+import request from 'supertest';
+import { afterAll, inject } from 'vitest';
+import { createApp } from '../../server/app';
+import type { AppContext } from '../../server/context';
+import { createDb } from '../../server/db/client';
+import { loadEnv } from '../../server/env';
+import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
+import { createMailer } from '../../server/mail/mailer';
+
+export interface TestHarness {
+  app: ReturnType<typeof createApp>;
+  ctx: AppContext;
+  smtp: FakeSmtp;
+  /** A supertest agent that keeps cookies, signed in as the given user. */
+  signIn(email: string, password?: string): Promise<ReturnType<typeof request.agent>>;
+}
+
+export const defaultPassword = 'correct horse battery';
+
+export async function createHarness(envOverrides: Record<string, string> = {}): Promise<TestHarness> {
+  const smtp = await startFakeSmtp();
+  const env = loadEnv({
+    NODE_ENV: 'test',
+    DATABASE_URL: inject('databaseUrl'),
+    SMTP_PORT: String(smtp.smtpPort),
+    FAKE_SMTP_API_URL: smtp.apiUrl,
+    AUTH_RATE_LIMIT_MAX: '10000',
+    CALC_RATE_LIMIT_MAX: '10000',
+    ...envOverrides,
+  });
+  const { db, pool } = createDb(env.DATABASE_URL);
+  const ctx: AppContext = { env, db, pool, mailer: createMailer(env) };
+  const app = createApp(ctx);
+  afterAll(async () => {
+    await pool.end();
+    await smtp.close();
+  });
+  return {
+    app,
+    ctx,
+    smtp,
+    async signIn(email, password = defaultPassword) {
+      const agent = request.agent(app);
+      await agent.post('/api/auth/login').send({ email, password }).expect(200);
+      return agent;
+    },
+  };
+}
+
+/** Waits for mail to a recipient to arrive at the fake SMTP server. */
+export async function waitForMail(smtp: FakeSmtp, to: string, timeoutMs = 5_000) {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const found = smtp.messages.filter((m) => m.to.includes(to.toLowerCase()));
+    if (found.length > 0) return found[found.length - 1];
+    if (Date.now() > deadline) throw new Error(`No mail to ${to} within ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
+}
