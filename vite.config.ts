@@ -22,6 +22,7 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     sourcemap: true,
+    manifest: true,
   },
   test: {
     projects: [

@@ -9,10 +9,11 @@ import type { AppContext } from './context';
 import { healthRouter } from './health/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 
-const clientDist = path.resolve(import.meta.dirname, '..', 'dist');
+const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
 
 export function createApp(ctx: AppContext) {
   const { env, db, pool } = ctx;
+  const clientDist = env.CLIENT_DIST ?? defaultClientDist;
   const app = express();
   app.disable('x-powered-by');
   if (env.TRUST_PROXY) app.set('trust proxy', env.TRUST_PROXY);
@@ -33,7 +34,7 @@ export function createApp(ctx: AppContext) {
     app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
     app.use('/assets', express.static(path.join(clientDist, 'assets'), { immutable: true, maxAge: '1y' }));
     app.get('/{*path}', (_req, res) => {
-      res.set('Cache-Control', 'no-cache').sendFile(path.join(clientDist, 'index.html'));
+      res.set('Cache-Control', 'no-cache').sendFile('index.html', { root: clientDist });
     });
   }
 

@@ -21,6 +21,8 @@ const envSchema = z
     AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(20),
     CALC_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(120),
     TRUST_PROXY: z.string().optional(),
+    /** Where the built client lives (tests build their own copy). */
+    CLIENT_DIST: z.string().optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.JWT_SECRET) {

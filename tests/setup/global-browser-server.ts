@@ -3,6 +3,8 @@
  * this run's database and a fake SMTP server whose listing the tests read.
  */
 import { execFileSync } from 'node:child_process';
+import { rmSync } from 'node:fs';
+import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { seedDemo } from '../../server/db/seed';
 import '../../server/demo-seeds';
@@ -22,7 +24,9 @@ declare module 'vitest' {
 
 export default async function setup(project: TestProject) {
   ensureChromium();
-  if (!process.env.SKIP_BUILD) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: projectRoot, stdio: 'inherit' });
+  // A private build per run, so parallel runs and a developer's own dist/ never collide.
+  const clientDist = path.join(projectRoot, '.data', `test-dist-${process.pid}`);
+  execFileSync('npx', ['vite', 'build', '--logLevel', 'error', '--outDir', clientDist, '--emptyOutDir'], { cwd: projectRoot, stdio: 'inherit' });
   const databaseUrl = project.getProvidedContext().databaseUrl;
   const { db, pool } = createDb(databaseUrl);
   await seedDemo(db);
@@ -37,6 +41,7 @@ export default async function setup(project: TestProject) {
       FAKE_SMTP_API_URL: smtp.apiUrl,
       AUTH_RATE_LIMIT_MAX: '10000',
       CALC_RATE_LIMIT_MAX: '10000',
+      CLIENT_DIST: clientDist,
     }),
   );
   project.provide('baseUrl', `http://127.0.0.1:${server.port}`);
@@ -44,5 +49,6 @@ export default async function setup(project: TestProject) {
   return async () => {
     await server.stop();
     await smtp.close();
+    rmSync(clientDist, { recursive: true, force: true });
   };
 }

@@ -1,0 +1,68 @@
+import { describe, expect, it } from 'vitest';
+import { can, canInClub, requireAccess, type Actor, type ResourceAction } from './permissions';
+import { Forbidden, NotFound } from '../lib/errors';
+
+// A brew day owned by user 1 and shared with club 10.
+const resource = { ownerId: 1, sharedWithClubIds: [10] };
+const privateResource = { ownerId: 1, sharedWithClubIds: [] };
+
+const actors: Record<string, Actor | null> = {
+  owner: { id: 1, siteRole: 'user', memberships: [{ clubId: 10, role: 'member' }] },
+  otherBrewer: { id: 2, siteRole: 'user', memberships: [] },
+  clubMember: { id: 3, siteRole: 'user', memberships: [{ clubId: 10, role: 'member' }] },
+  mentorOfClub: { id: 4, siteRole: 'user', memberships: [{ clubId: 10, role: 'mentor' }] },
+  mentorOfOtherClub: { id: 5, siteRole: 'user', memberships: [{ clubId: 20, role: 'mentor' }] },
+  organiser: { id: 6, siteRole: 'user', memberships: [{ clubId: 10, role: 'organiser' }] },
+  siteAdmin: { id: 7, siteRole: 'admin', memberships: [] },
+  anonymous: null,
+};
+
+const actions: ResourceAction[] = ['read', 'clone', 'comment', 'update', 'delete', 'share'];
+
+// Expected outcome per actor, in the order of `actions`. Y = allowed.
+const matrix: Record<string, string> = {
+  owner: 'YYYYYY',
+  otherBrewer: '------',
+  clubMember: 'YY----',
+  mentorOfClub: 'YYY---',
+  mentorOfOtherClub: '------',
+  organiser: 'YY----',
+  siteAdmin: '------',
+  anonymous: '------',
+};
+
+describe('who may do what with a shared brewer resource', () => {
+  for (const [name, actor] of Object.entries(actors)) {
+    it(`${name}: ${matrix[name]}`, () => {
+      const got = actions.map((a) => (can(actor, a, resource) ? 'Y' : '-')).join('');
+      expect(got).toBe(matrix[name]);
+    });
+  }
+
+  it('a private resource is visible to its owner only', () => {
+    for (const [name, actor] of Object.entries(actors)) {
+      expect(can(actor, 'read', privateResource), name).toBe(name === 'owner');
+    }
+  });
+
+  it('hides what a person may not see (404) and refuses what they may see but not do (403)', () => {
+    expect(() => requireAccess(actors.otherBrewer, 'read', resource)).toThrow(NotFound);
+    expect(() => requireAccess(actors.clubMember, 'update', resource)).toThrow(Forbidden);
+    expect(() => requireAccess(actors.mentorOfClub, 'comment', resource)).not.toThrow();
+    expect(() => requireAccess(actors.owner, 'update', null)).toThrow(NotFound);
+  });
+});
+
+describe('club actions', () => {
+  it.each([
+    ['organiser', 'YYYY'],
+    ['mentorOfClub', 'Y---'],
+    ['clubMember', 'Y---'],
+    ['mentorOfOtherClub', '----'],
+    ['siteAdmin', 'YYYY'],
+    ['anonymous', '----'],
+  ])('%s: %s', (name, expected) => {
+    const got = (['view', 'invite', 'remove-member', 'set-role'] as const).map((a) => (canInClub(actors[name], a, 10) ? 'Y' : '-')).join('');
+    expect(got).toBe(expected);
+  });
+});

@@ -1,0 +1,388 @@
+import { DEFAULT_APPARENT_ATTENUATION } from './abv';
+import { BrewMathError } from './errors';
+import {
+  EXTRACT_KINDS,
+  EXTRACT_POTENTIALS_POINTS_L_PER_KG,
+  EXTRACT_VOLUME_L_PER_KG,
+  requirePotential,
+  type ExtractKind,
+  type WortState,
+} from './extract';
+import { SG_MAX, requireFinite, requireNonNegative, requireRange, requireSg, requireVolume, requireWortSg, show, showSg } from './validate';
+
+/**
+ * The boil model (docs/decisions/0002-brewing-math-model.md):
+ * - volumes the brewer enters for the kettle are hot, as measured in the kettle during the boil;
+ * - gravities are as read on a cooled sample (a refractometer drop cools in seconds);
+ * - wort shrinks by `coolingShrinkage` (default 4 %, common practice) from boiling to pitching
+ *   temperature, so fermenterVolumeL = hot volume × (1 − shrinkage), before any kettle losses;
+ * - extract is conserved in gravity points × litres; boil-off removes water only, at a steady
+ *   rate in hot litres per hour.
+ */
+export const DEFAULT_COOLING_SHRINKAGE = 0.04;
+/** Within 0.001 (one gravity point) of target, no correction is worth making. */
+export const DEFAULT_TOLERANCE_SG = 0.001;
+
+export interface BoilProjectionInput {
+  /** Hot wort in the kettle now, litres. */
+  volumeL: number;
+  /** Current gravity, read cold. */
+  sg: number;
+  minutesLeft: number;
+  /** Hot litres lost per hour of boiling. */
+  boilOffLPerHour: number;
+}
+
+function requireBoil(volumeL: number, sg: number, minutesLeft: number, boilOffLPerHour: number): void {
+  requireVolume(volumeL, 'volumeL', 'Kettle volume');
+  requireWortSg(sg, 'sg', 'Current gravity');
+  requireNonNegative(minutesLeft, 'minutesLeft', 'Minutes left', 'min');
+  requireNonNegative(boilOffLPerHour, 'boilOffLPerHour', 'Boil-off rate', 'L/h');
+}
+
+/** Hot volume at flame-out; throws when the boil would empty the kettle or over-concentrate it. */
+function endHotVolumeL(volumeL: number, sg: number, minutesLeft: number, boilOffLPerHour: number): number {
+  const lostL = (boilOffLPerHour * minutesLeft) / 60;
+  const endL = volumeL - lostL;
+  if (endL <= 0) {
+    throw new BrewMathError(
+      `Boiling off ${show(boilOffLPerHour, 2)} L/h for ${show(minutesLeft, 1)} more minutes would boil away ${show(lostL, 1)} L, more than the ${show(volumeL, 1)} L in the kettle. Check the volume, minutes left and boil-off rate.`,
+      'empties-kettle',
+      'boilOffLPerHour',
+    );
+  }
+  const endSg = 1 + ((sg - 1) * volumeL) / endL;
+  if (endSg > SG_MAX) {
+    throw new BrewMathError(
+      `Boiling ${show(volumeL, 1)} L down to ${show(endL, 1)} L would take the wort to ${showSg(endSg)}, beyond 1.200. Check the volume, minutes left and boil-off rate.`,
+      'empties-kettle',
+      'boilOffLPerHour',
+    );
+  }
+  return endL;
+}
+
+/** Volume and gravity at the end of the boil if nothing is done. Volumes hot in, hot out. */
+export function projectBoil({ volumeL, sg, minutesLeft, boilOffLPerHour }: BoilProjectionInput): WortState {
+  requireBoil(volumeL, sg, minutesLeft, boilOffLPerHour);
+  const endL = endHotVolumeL(volumeL, sg, minutesLeft, boilOffLPerHour);
+  return { volumeL: endL, sg: 1 + ((sg - 1) * volumeL) / endL };
+}
+
+/** The boil-off rate measured over a stretch of the boil, both volumes read the same way (hot). */
+export function boilOffRateLPerHour({ startL, endL, minutes }: { startL: number; endL: number; minutes: number }): number {
+  requireVolume(startL, 'startL', 'Starting volume');
+  requireVolume(endL, 'endL', 'Ending volume');
+  requireFinite(minutes, 'minutes', 'Boil time');
+  if (minutes <= 0) throw new BrewMathError('Boil time must be more than 0 minutes.', 'out-of-range', 'minutes');
+  if (endL > startL) {
+    throw new BrewMathError(
+      `The ending volume ${show(endL, 1)} L is above the starting ${show(startL, 1)} L; a boil only loses volume. Were both read hot, in the kettle?`,
+      'inconsistent',
+      'endL',
+    );
+  }
+  return ((startL - endL) * 60) / minutes;
+}
+
+export interface BoilCorrectionInput extends BoilProjectionInput {
+  /** The recipe's OG. */
+  targetSg: number;
+  /** The recipe's volume at the end of the boil, measured cold. Boiling longer may not go below it. */
+  targetVolumeL?: number;
+  /** The recipe's FG for ABV predictions; if absent, 75 % apparent attenuation of targetSg is assumed. */
+  targetFg?: number;
+  /** Potential overrides in points·L/kg, per extract kind; defaults are EXTRACT_POTENTIALS_POINTS_L_PER_KG. */
+  extract?: Partial<Record<ExtractKind, number>>;
+  /** If given, an addition that would overfill the kettle is not offered. */
+  kettleCapacityL?: number;
+  /** Fraction the wort shrinks by from boiling to pitching; default 0.04. */
+  coolingShrinkage?: number;
+  /** How close to target counts as on target; default 0.001. */
+  toleranceSg?: number;
+}
+
+export interface EndState {
+  /** Gravity at the end of the boil, as a cooled sample reads. */
+  endSg: number;
+  /** Hot volume in the kettle at flame-out. */
+  endVolumeL: number;
+  /** The same wort cooled, before kettle losses. Compare this with the recipe's volume. */
+  fermenterVolumeL: number;
+  /** Simple ABV, (endSg − FG) × 131.25, at the recipe's FG (given or assumed); 0 if endSg ≤ FG. */
+  abvPercent: number;
+}
+
+export interface AsIsOption extends EndState {
+  kind: 'as-is';
+  feasible: true;
+}
+export interface ExtractOption extends EndState {
+  kind: 'extract';
+  feasible: true;
+  extract: ExtractKind;
+  /** Kilograms to dissolve now. */
+  kg: number;
+}
+export interface WaterOption extends EndState {
+  kind: 'water';
+  feasible: true;
+  /** Litres of cold water to add now (or into the fermenter after chilling: same result). */
+  litres: number;
+}
+export interface BoilLongerOption extends EndState {
+  kind: 'boil-longer';
+  feasible: true;
+  /** Minutes of boiling beyond the minutes left. */
+  extraMinutes: number;
+}
+
+export type InfeasibleCode =
+  | 'on-target'
+  | 'above-target'
+  | 'below-target'
+  | 'too-weak'
+  | 'overfills-kettle'
+  | 'no-boil-off'
+  | 'no-extract'
+  | 'below-recipe-volume';
+
+export interface InfeasibleExtractOption {
+  kind: 'extract';
+  feasible: false;
+  extract: ExtractKind;
+  code: InfeasibleCode;
+  reason: string;
+}
+export interface InfeasibleOption {
+  kind: 'water' | 'boil-longer';
+  feasible: false;
+  code: InfeasibleCode;
+  reason: string;
+}
+
+export type BoilOption =
+  | AsIsOption
+  | ExtractOption
+  | WaterOption
+  | BoilLongerOption
+  | InfeasibleExtractOption
+  | InfeasibleOption;
+
+export type BoilStatus = 'low' | 'on-target' | 'high';
+
+export interface BoilCorrection {
+  /** Where the wort will finish with no action, against the target. */
+  status: BoilStatus;
+  targetSg: number;
+  /** The FG used for the ABV figures. */
+  fgSg: number;
+  /** True when the recipe gave no FG and 75 % apparent attenuation was assumed. */
+  fgAssumed: boolean;
+  /** The end state with no action. */
+  projected: EndState;
+  /** Always in this order: as-is, extract (dme, lme, sucrose, dextrose), water, boil-longer. */
+  options: BoilOption[];
+}
+
+const REASON_ON_TARGET = 'The wort will finish on target; no correction is needed.';
+const REASON_EXTRACT_ABOVE = 'The wort will already finish above target; extract would only raise it further.';
+const REASON_WATER_BELOW = 'The wort will finish below target; water would only lower it further.';
+const REASON_BOIL_ABOVE = 'The wort will already finish above target; boiling longer would only raise it further.';
+const REASON_NO_BOIL_OFF = 'With no boil-off, boiling longer does not concentrate the wort.';
+const REASON_NO_EXTRACT = 'The wort has no extract to concentrate.';
+const REASON_TOO_WEAK = 'This extract is too weak to reach the target gravity.';
+
+// Gravity comparisons in points carry float noise; this keeps 1.051 vs 1.050 at tolerance 0.001 "on target".
+const POINTS_EPSILON = 1e-9;
+
+/**
+ * What to do about a late-boil reading: the projected end with no action, and each correction
+ * that can reach targetSg. Everything happens "now", with minutesLeft of boil still to run.
+ */
+export function boilCorrection(input: BoilCorrectionInput): BoilCorrection {
+  const { volumeL, sg, minutesLeft, boilOffLPerHour, targetSg, targetVolumeL, kettleCapacityL } = input;
+  requireBoil(volumeL, sg, minutesLeft, boilOffLPerHour);
+  requireWortSg(targetSg, 'targetSg', 'Target gravity');
+  if (targetSg <= 1) {
+    throw new BrewMathError('The target gravity must be above 1.000.', 'out-of-range', 'targetSg');
+  }
+  if (targetVolumeL !== undefined) requireVolume(targetVolumeL, 'targetVolumeL', "The recipe's volume");
+  if (kettleCapacityL !== undefined) {
+    requireVolume(kettleCapacityL, 'kettleCapacityL', 'Kettle capacity');
+    if (kettleCapacityL < volumeL) {
+      throw new BrewMathError(
+        `The kettle holds ${show(kettleCapacityL, 1)} L but ${show(volumeL, 1)} L is in it. Check the volume or the kettle size.`,
+        'inconsistent',
+        'kettleCapacityL',
+      );
+    }
+  }
+  const shrinkage = input.coolingShrinkage ?? DEFAULT_COOLING_SHRINKAGE;
+  requireRange(shrinkage, 0, 0.1, 'coolingShrinkage', 'Cooling shrinkage', '', 'It is a fraction; about 0.04 is usual.');
+  const tolerancePoints = (input.toleranceSg ?? DEFAULT_TOLERANCE_SG) * 1000;
+  requireRange(tolerancePoints, 0, 10, 'toleranceSg', 'Tolerance', 'points');
+
+  let fgSg: number;
+  const fgAssumed = input.targetFg === undefined;
+  if (input.targetFg === undefined) {
+    fgSg = 1 + (targetSg - 1) * (1 - DEFAULT_APPARENT_ATTENUATION);
+  } else {
+    fgSg = requireSg(input.targetFg, 'targetFg', 'Target FG');
+    if (fgSg >= targetSg) {
+      throw new BrewMathError(
+        `The recipe's FG ${showSg(fgSg)} must be below its OG ${showSg(targetSg)}.`,
+        'inconsistent',
+        'targetFg',
+      );
+    }
+  }
+  const overrides = input.extract;
+  if (overrides !== undefined) {
+    for (let i = 0; i < EXTRACT_KINDS.length; i++) {
+      const p = overrides[EXTRACT_KINDS[i]];
+      if (p !== undefined) requirePotential(p, 'extract');
+    }
+  }
+
+  const endHotL = endHotVolumeL(volumeL, sg, minutesLeft, boilOffLPerHour);
+  // Work in cold litres: additions are measured cold, the recipe's volume is cold.
+  const cold = 1 - shrinkage;
+  const pointsL = (sg - 1) * 1000 * volumeL * cold;
+  const endColdL = endHotL * cold;
+  const projectedPoints = pointsL / endColdL;
+  const targetPoints = (targetSg - 1) * 1000;
+  const gap = projectedPoints - targetPoints;
+  const status: BoilStatus =
+    gap < -tolerancePoints - POINTS_EPSILON ? 'low' : gap > tolerancePoints + POINTS_EPSILON ? 'high' : 'on-target';
+  const fgPoints = (fgSg - 1) * 1000;
+  const abvAt = (points: number): number => (points > fgPoints ? (points - fgPoints) * 0.13125 : 0);
+
+  const projectedSg = 1 + projectedPoints / 1000;
+  const projectedAbv = abvAt(projectedPoints);
+  const options: BoilOption[] = [
+    {
+      kind: 'as-is',
+      feasible: true,
+      endSg: projectedSg,
+      endVolumeL: endHotL,
+      fermenterVolumeL: endColdL,
+      abvPercent: projectedAbv,
+    },
+  ];
+
+  for (let i = 0; i < EXTRACT_KINDS.length; i++) {
+    const extract = EXTRACT_KINDS[i];
+    if (status !== 'low') {
+      options.push(
+        status === 'on-target'
+          ? { kind: 'extract', feasible: false, extract, code: 'on-target', reason: REASON_ON_TARGET }
+          : { kind: 'extract', feasible: false, extract, code: 'above-target', reason: REASON_EXTRACT_ABOVE },
+      );
+      continue;
+    }
+    const potential = overrides?.[extract] ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG[extract];
+    const litresPerKg = EXTRACT_VOLUME_L_PER_KG[extract];
+    const denominator = potential - targetPoints * litresPerKg;
+    if (denominator <= 0) {
+      options.push({ kind: 'extract', feasible: false, extract, code: 'too-weak', reason: REASON_TOO_WEAK });
+      continue;
+    }
+    const kg = (targetPoints * endColdL - pointsL) / denominator;
+    const addedL = kg * litresPerKg;
+    if (kettleCapacityL !== undefined && volumeL + addedL / cold > kettleCapacityL) {
+      options.push({
+        kind: 'extract',
+        feasible: false,
+        extract,
+        code: 'overfills-kettle',
+        reason: `${show(kg, 2)} kg would overfill the ${show(kettleCapacityL, 1)} L kettle.`,
+      });
+      continue;
+    }
+    const coldL = endColdL + addedL;
+    const points = (pointsL + potential * kg) / coldL;
+    options.push({
+      kind: 'extract',
+      feasible: true,
+      extract,
+      kg,
+      endSg: 1 + points / 1000,
+      endVolumeL: coldL / cold,
+      fermenterVolumeL: coldL,
+      abvPercent: abvAt(points),
+    });
+  }
+
+  if (status !== 'high') {
+    options.push(
+      status === 'on-target'
+        ? { kind: 'water', feasible: false, code: 'on-target', reason: REASON_ON_TARGET }
+        : { kind: 'water', feasible: false, code: 'below-target', reason: REASON_WATER_BELOW },
+    );
+  } else {
+    const litres = pointsL / targetPoints - endColdL;
+    if (kettleCapacityL !== undefined && volumeL + litres / cold > kettleCapacityL) {
+      options.push({
+        kind: 'water',
+        feasible: false,
+        code: 'overfills-kettle',
+        reason: `${show(litres, 1)} L of water would overfill the ${show(kettleCapacityL, 1)} L kettle. Add it to the fermenter after chilling instead: the result is the same.`,
+      });
+    } else {
+      const coldL = endColdL + litres;
+      const points = pointsL / coldL;
+      options.push({
+        kind: 'water',
+        feasible: true,
+        litres,
+        endSg: 1 + points / 1000,
+        endVolumeL: coldL / cold,
+        fermenterVolumeL: coldL,
+        abvPercent: abvAt(points),
+      });
+    }
+  }
+
+  if (status !== 'low') {
+    options.push(
+      status === 'on-target'
+        ? { kind: 'boil-longer', feasible: false, code: 'on-target', reason: REASON_ON_TARGET }
+        : { kind: 'boil-longer', feasible: false, code: 'above-target', reason: REASON_BOIL_ABOVE },
+    );
+  } else if (boilOffLPerHour === 0) {
+    options.push({ kind: 'boil-longer', feasible: false, code: 'no-boil-off', reason: REASON_NO_BOIL_OFF });
+  } else if (pointsL <= 0) {
+    options.push({ kind: 'boil-longer', feasible: false, code: 'no-extract', reason: REASON_NO_EXTRACT });
+  } else {
+    const coldL = pointsL / targetPoints;
+    if (targetVolumeL !== undefined && coldL < targetVolumeL) {
+      options.push({
+        kind: 'boil-longer',
+        feasible: false,
+        code: 'below-recipe-volume',
+        reason: `Boiling on to ${showSg(targetSg)} would leave ${show(coldL, 1)} L once cooled, less than the recipe's ${show(targetVolumeL, 1)} L.`,
+      });
+    } else {
+      const points = pointsL / coldL;
+      options.push({
+        kind: 'boil-longer',
+        feasible: true,
+        extraMinutes: ((endColdL - coldL) / (boilOffLPerHour * cold)) * 60,
+        endSg: 1 + points / 1000,
+        endVolumeL: coldL / cold,
+        fermenterVolumeL: coldL,
+        abvPercent: abvAt(points),
+      });
+    }
+  }
+
+  return {
+    status,
+    targetSg,
+    fgSg,
+    fgAssumed,
+    projected: { endSg: projectedSg, endVolumeL: endHotL, fermenterVolumeL: endColdL, abvPercent: projectedAbv },
+    options,
+  };
+}

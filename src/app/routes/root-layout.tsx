@@ -1,0 +1,68 @@
+import { Suspense } from 'react';
+import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
+import { useMe } from '@/features/auth/api/get-me';
+import { PreferencesMenu } from '@/features/auth/components/preferences-menu';
+import { buttonClass } from '@/components/ui/button';
+import { Loading } from '@/components/ui/page';
+import { navItems } from '../nav';
+
+export function RootLayout() {
+  const { data: me } = useMe();
+  const navigate = useNavigate();
+  const navigation = useNavigation();
+  const items = navItems.filter((i) => me || i.public);
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="no-print bg-cellar-700 text-white">
+        <div className="mx-auto flex max-w-5xl items-center gap-2 px-3 py-1 sm:px-6">
+          <Link to="/" className="flex min-h-touch items-center gap-2 text-xl font-bold tracking-tight">
+            <img src="/favicon.svg" alt="" className="size-7" />
+            Wortwise
+          </Link>
+          <div className="ml-auto flex items-center gap-1">
+            {me ? (
+              <PreferencesMenu me={me} onSignedOut={() => navigate('/sign-in')} />
+            ) : (
+              <>
+                <Link to="/sign-in" className="flex min-h-touch items-center rounded-lg px-3 hover:bg-cellar-900">
+                  Sign in
+                </Link>
+                <Link to="/sign-up" className={buttonClass('secondary', 'hidden sm:inline-flex')}>
+                  Create account
+                </Link>
+              </>
+            )}
+          </div>
+        </div>
+        {items.length > 1 && (
+          <nav aria-label="Main" className="mx-auto max-w-5xl overflow-x-auto px-1 sm:px-4">
+            <ul className="flex gap-1">
+              {items.map(({ to, label, icon: Icon }) => (
+                <li key={to}>
+                  <NavLink
+                    to={to}
+                    end={to === '/'}
+                    className={({ isActive }) =>
+                      `flex min-h-touch items-center gap-1.5 whitespace-nowrap rounded-t-lg px-3 text-sm font-semibold ${isActive ? 'bg-paper text-cellar-900' : 'text-cellar-100 hover:bg-cellar-900'}`
+                    }
+                  >
+                    <Icon aria-hidden className="size-4" />
+                    {label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
+          </nav>
+        )}
+      </header>
+      <main className="mx-auto w-full max-w-5xl flex-1 px-3 py-6 sm:px-6" aria-busy={navigation.state === 'loading'}>
+        <Suspense fallback={<Loading />}>
+          <Outlet />
+        </Suspense>
+      </main>
+      <footer className="no-print border-t border-cellar-100 px-3 py-4 text-center text-sm text-ink-faint">
+        Wortwise helps you measure and decide; brewing and drinking rules differ by place, so follow your local law.
+      </footer>
+    </div>
+  );
+}

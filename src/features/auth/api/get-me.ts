@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Me } from '@shared/schemas/auth';
+import { api, ApiError } from '@/lib/api-client';
+
+/** The signed-in brewer, or null when nobody is signed in. */
+export async function getMe(): Promise<Me | null> {
+  try {
+    return await api.get<Me>('/api/auth/me');
+  } catch (error) {
+    if (error instanceof ApiError && error.status === 401) return null;
+    throw error;
+  }
+}
+
+export const meQueryOptions = () => queryOptions({ queryKey: ['auth', 'me'], queryFn: getMe, staleTime: 5 * 60_000 });
+
+export function useMe() {
+  return useQuery(meQueryOptions());
+}

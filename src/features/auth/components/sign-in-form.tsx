@@ -1,0 +1,37 @@
+import { Form, Formik } from 'formik';
+import { loginSchema, type LoginInput } from '@shared/schemas/auth';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { TextField } from '@/components/ui/text-field';
+import { applyApiError, zodValidate } from '@/lib/form';
+import { useLogin } from '../api/login';
+
+export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
+  const login = useLogin();
+  return (
+    <Formik<LoginInput>
+      initialValues={{ email: '', password: '' }}
+      validate={zodValidate(loginSchema)}
+      onSubmit={async (values, helpers) => {
+        helpers.setStatus(undefined);
+        try {
+          await login.mutateAsync(values);
+          onSignedIn();
+        } catch (error) {
+          applyApiError(error, helpers);
+        }
+      }}
+    >
+      {({ isSubmitting, status }) => (
+        <Form noValidate className="space-y-4">
+          {status && <Notice tone="error">{status}</Notice>}
+          <TextField name="email" type="email" label="E-mail" autoComplete="email" inputMode="email" />
+          <TextField name="password" type="password" label="Password" autoComplete="current-password" />
+          <Button type="submit" busy={isSubmitting} className="w-full">
+            Sign in
+          </Button>
+        </Form>
+      )}
+    </Formik>
+  );
+}

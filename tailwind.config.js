@@ -1,0 +1,25 @@
+/**
+ * Wortwise design tokens. Tailwind 4 reads this file through `@config` in src/index.css.
+ * Palette: "cellar" greens for structure, "malt" ambers for action, a warm paper surface.
+ * @type {import('tailwindcss').Config}
+ */
+export default {
+  content: ['./index.html', './src/**/*.{ts,tsx}'],
+  theme: {
+    extend: {
+      fontFamily: {
+        sans: ['"Source Sans 3"', 'system-ui', 'sans-serif'],
+      },
+      colors: {
+        paper: '#fbf8f3',
+        ink: { DEFAULT: '#1d2624', soft: '#4a5753', faint: '#7b8784' },
+        cellar: { 50: '#eef5f3', 100: '#d6e7e2', 300: '#8fbfb2', 500: '#3d7c6d', 700: '#1f3b36', 900: '#122421' },
+        malt: { 50: '#fdf6e7', 100: '#f9e6bd', 300: '#efc670', 500: '#d6962a', 600: '#b7791a', 700: '#8c5a12' },
+        alert: { 50: '#fdf0ee', 500: '#c2412d', 700: '#8f2a1b' },
+        ok: { 50: '#eef7ee', 500: '#3c8a3f', 700: '#25602a' },
+      },
+      minHeight: { touch: '44px' },
+      minWidth: { touch: '44px' },
+    },
+  },
+};

@@ -1,0 +1,41 @@
+import { describe, expect, it } from 'vitest';
+import { newPage, useBrowser } from '../support/browser';
+
+const b = useBrowser();
+
+describe('an account, on a phone-sized window', () => {
+  it('signs up, signs out and signs in again', async () => {
+    const { page, context, errors } = await newPage(b.browser);
+    const email = `newcomer-${Date.now()}@example.org`;
+
+    await page.goto('/');
+    await page.waitForURL(/\/sign-in/);
+    await page.getByRole('link', { name: 'Create an account' }).click();
+    await page.getByLabel('Your name').fill('Wren Halloway');
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill('a-long-password');
+    await page.getByRole('button', { name: 'Create my account' }).click();
+    await page.getByRole('heading', { name: 'Welcome back, Wren Halloway' }).waitFor();
+
+    // No sideways scroll on a 375 px phone.
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+
+    await page.getByRole('button', { name: 'Account and units' }).click();
+    await page.getByRole('menuitem', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/sign-in/);
+
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill('wrong-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByText('That e-mail and password do not match an account.').textContent()).resolves.toBeTruthy();
+
+    await page.getByLabel('Password').fill('a-long-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Welcome back, Wren Halloway' }).waitFor();
+
+    const loginErrors = errors.filter((e) => !/Failed to load resource/.test(e));
+    expect(loginErrors).toEqual([]);
+    await context.close();
+  });
+});
