@@ -1,3 +1,4 @@
 // Every table of the product; drizzle-kit reads this file to generate migrations.
 export * from './users';
 export * from './clubs';
+export * from './password-reset';
