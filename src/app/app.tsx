@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { RouterProvider } from 'react-router';
 import { setUnauthorizedHandler } from '@/lib/api-client';
 import { createQueryClient } from '@/lib/query-client';
-import { meQueryOptions } from '@/features/auth/api/get-me';
+import { meQueryOptions } from '@/lib/auth';
 import { AppProvider } from './provider';
 import { createAppRouter } from './router';
 

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
-import { meQueryOptions } from '@/features/auth/api/get-me';
+import { meQueryOptions } from '@/lib/auth';
 
 /** Loader for routes that need a signed-in brewer: sends everyone else to sign in, then back. */
 export function requireSignedIn(queryClient: QueryClient) {

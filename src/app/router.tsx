@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter } from 'react-router';
-import { meQueryOptions } from '@/features/auth/api/get-me';
+import { meQueryOptions } from '@/lib/auth';
 import { requireSignedIn } from './guards';
 import { RootLayout } from './routes/root-layout';
 import { RouteError } from './routes/route-error';

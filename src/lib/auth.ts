@@ -1,6 +1,7 @@
+/** The signed-in brewer, shared by every feature: who they are and which units they read. */
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Me } from '@shared/schemas/auth';
-import { api, ApiError } from '@/lib/api-client';
+import { api, ApiError } from './api-client';
 
 /** The signed-in brewer, or null when nobody is signed in. */
 export async function getMe(): Promise<Me | null> {

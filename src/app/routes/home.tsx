@@ -1,4 +1,4 @@
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/lib/auth';
 import { Card, PageHeader } from '@/components/ui/page';
 
 export function Component() {

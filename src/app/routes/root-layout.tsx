@@ -1,6 +1,6 @@
 import { Suspense } from 'react';
 import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/lib/auth';
 import { PreferencesMenu } from '@/features/auth/components/preferences-menu';
 import { buttonClass } from '@/components/ui/button';
 import { Loading } from '@/components/ui/page';

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { LoginInput, Me } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
-import { meQueryOptions } from './get-me';
+import { meQueryOptions } from '@/lib/auth';
 
 export const login = (input: LoginInput) => api.post<Me>('/api/auth/login', input);
 

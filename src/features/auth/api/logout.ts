@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { meQueryOptions } from './get-me';
+import { meQueryOptions } from '@/lib/auth';
 
 export const logout = () => api.post<void>('/api/auth/logout');
 

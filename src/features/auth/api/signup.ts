@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Me, SignupInput } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
-import { meQueryOptions } from './get-me';
+import { meQueryOptions } from '@/lib/auth';
 
 export const signup = (input: SignupInput) => api.post<Me>('/api/auth/signup', input);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Me, PreferencesInput } from '@shared/schemas/auth';
 import { api } from '@/lib/api-client';
-import { meQueryOptions } from './get-me';
+import { meQueryOptions } from '@/lib/auth';
 
 export const updatePreferences = (input: PreferencesInput) => api.patch<Me>('/api/auth/me', input);
 
