@@ -2,3 +2,4 @@
 export * from './users';
 export * from './clubs';
 export * from './password-reset';
+export * from './recipes';

@@ -1,0 +1,473 @@
+/**
+ * Recipes: the request and response shapes, validated by the same zod schemas in the recipe form
+ * and in the API (so a 400 and an inline error carry the same words). Everything is SI and
+ * specific gravity; the form converts at its edges. Messages that quote a number give it in both
+ * metric and US units, because the same message reaches brewers of either preference.
+ */
+import { z } from 'zod';
+import { boilOffRateLPerHour } from '../brewmath/boil';
+import { BrewMathError } from '../brewmath/errors';
+import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../brewmath/extract';
+import { LITRES_PER_US_GALLON } from '../brewmath/units';
+
+// ---------------------------------------------------------------------------------------------
+// Vocabulary
+
+export const fermentableKinds = ['grain', 'dry-extract', 'liquid-extract', 'sugar', 'other'] as const;
+export type RecipeFermentableKind = (typeof fermentableKinds)[number];
+
+export const fermentableKindLabels: Record<RecipeFermentableKind, string> = {
+  grain: 'Grain',
+  'dry-extract': 'Dry malt extract',
+  'liquid-extract': 'Liquid malt extract',
+  sugar: 'Sugar',
+  other: 'Other',
+};
+
+/**
+ * A potential to start from when the author picks a kind, in gravity points × litres per kg.
+ * Grain: a pale base malt's laboratory extract, about 36 points per pound per US gallon (common
+ * practice, no source); the extracts and sugar are shared/brewmath's defaults. "Other" (honey,
+ * fruit, lactose) varies too much to guess.
+ */
+export const defaultPotentialPointsLPerKg: Record<RecipeFermentableKind, number | null> = {
+  grain: 300,
+  'dry-extract': 367,
+  'liquid-extract': 300,
+  sugar: 384,
+  other: null,
+};
+
+/** Mash pH target when the author gives none (common practice, no source). */
+export const DEFAULT_MASH_PH_TARGET = 5.2;
+
+/**
+ * How far the post-boil volume may sit from what the boil-off rate and boil length predict
+ * before we call the three contradictory: 0.5 L or 2 % of the pre-boil volume, whichever is
+ * larger (common practice, no source: about what a kettle's sight glass or dipstick can resolve).
+ */
+export const BOIL_OFF_TOLERANCE_L = 0.5;
+export const BOIL_OFF_TOLERANCE_FRACTION = 0.02;
+
+/** Largest quantities we accept: beyond a home or pilot brewery, most likely a typo. */
+export const RECIPE_LIMITS = {
+  volumeL: 2000,
+  boilMinutes: 360,
+  boilOffLPerHour: 100,
+  fermentableKg: 1000,
+  hopG: 20_000,
+  alphaAcidPercent: 30,
+  mashStepMinutes: 600,
+  fermentables: 40,
+  hops: 40,
+  mashSteps: 12,
+} as const;
+
+// ---------------------------------------------------------------------------------------------
+// Number fields with a brewer's messages
+
+const gal = (litres: number) => `${Number((litres / LITRES_PER_US_GALLON).toFixed(2))} gal`;
+const fahrenheit = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
+
+interface NumberRule {
+  /** Lower-case noun phrase: "the batch volume". */
+  what: string;
+  /** Sentence-start label: "Batch volume". */
+  label: string;
+  min: number;
+  /** When true, the minimum itself is refused ("must be more than 0"). */
+  exclusiveMin?: boolean;
+  max: number;
+  /** Said when the value is out of range. */
+  rangeMessage: string;
+  integer?: boolean;
+  /** A temperature, not an amount: below the minimum is out of range, not "negative". */
+  rangeOnly?: boolean;
+}
+
+function numberField(rule: NumberRule) {
+  // One message per field, and no "abort": an aborted issue would stop the cross-field checks
+  // below from running, and the form should show every problem at once.
+  return z
+    .number({
+      error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${rule.what}.` : `${rule.label} must be a number.`),
+    })
+    .superRefine((v, ctx) => {
+      const message = numberProblem(rule, v);
+      if (message) ctx.addIssue({ code: 'custom', message, input: v });
+    });
+}
+
+function numberProblem(rule: NumberRule, v: number): string | null {
+  if (rule.min === 0 && !rule.rangeOnly) {
+    if (v < 0) return `${rule.label} cannot be negative.`;
+    if (rule.exclusiveMin && v === 0) return `${rule.label} must be more than 0.`;
+  } else if (rule.exclusiveMin ? v <= rule.min : v < rule.min) {
+    return rule.rangeMessage;
+  }
+  if (v > rule.max) return rule.rangeMessage;
+  if (rule.integer && !Number.isInteger(v)) return `${rule.label} must be a whole number.`;
+  return null;
+}
+
+function volumeField(what: string, label: string) {
+  return numberField({
+    what,
+    label,
+    min: 0,
+    exclusiveMin: true,
+    max: RECIPE_LIMITS.volumeL,
+    rangeMessage: `${label} above ${RECIPE_LIMITS.volumeL} L (${gal(RECIPE_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
+  });
+}
+
+function temperatureField(what: string, label: string, minC: number, maxC: number) {
+  return numberField({
+    what,
+    label,
+    min: minC,
+    max: maxC,
+    rangeOnly: true,
+    rangeMessage: `${label} must be between ${minC} and ${maxC} °C (${fahrenheit(minC)} and ${fahrenheit(maxC)}).`,
+  });
+}
+
+function textField(what: string, max: number, required: boolean) {
+  const base = z.string({ error: `Enter ${what}.` }).trim().max(max, { error: `Use at most ${max} characters.` });
+  return required ? base.min(1, { error: `Enter ${what}.` }) : base;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Child rows
+
+export const fermentableInputSchema = z.object({
+  name: textField('a name for this fermentable', 120, true),
+  kind: z.enum(fermentableKinds, { error: 'Choose grain, dry malt extract, liquid malt extract, sugar or other.' }),
+  amountKg: numberField({
+    what: 'the amount',
+    label: 'Amount',
+    min: 0,
+    exclusiveMin: true,
+    max: RECIPE_LIMITS.fermentableKg,
+    rangeMessage: `Amount above ${RECIPE_LIMITS.fermentableKg} kg is more than Wortwise handles. Check the number.`,
+  }),
+  potentialPointsLPerKg: numberField({
+    what: 'the extract potential',
+    label: 'Potential',
+    min: POTENTIAL_MIN_POINTS_L_PER_KG,
+    max: POTENTIAL_MAX_POINTS_L_PER_KG,
+    rangeMessage: `Potential must be between ${POTENTIAL_MIN_POINTS_L_PER_KG} and ${POTENTIAL_MAX_POINTS_L_PER_KG} points·L/kg (about 6 to 54 points per lb per gallon); table sugar is about 384 (46).`,
+  }),
+});
+export type FermentableInput = z.input<typeof fermentableInputSchema>;
+
+export const hopInputSchema = z.object({
+  name: textField('a name for this hop', 120, true),
+  amountG: numberField({
+    what: 'the amount',
+    label: 'Amount',
+    min: 0,
+    exclusiveMin: true,
+    max: RECIPE_LIMITS.hopG,
+    rangeMessage: `Amount above ${RECIPE_LIMITS.hopG} g is more than Wortwise handles. Check the number.`,
+  }),
+  minutes: numberField({
+    what: 'the minutes it boils',
+    label: 'Minutes',
+    min: 0,
+    max: RECIPE_LIMITS.boilMinutes,
+    rangeMessage: `Minutes must be between 0 and ${RECIPE_LIMITS.boilMinutes}.`,
+  }),
+  alphaAcidPercent: numberField({
+    what: 'the alpha acid',
+    label: 'Alpha acid',
+    min: 0,
+    exclusiveMin: true,
+    max: RECIPE_LIMITS.alphaAcidPercent,
+    rangeMessage: `Alpha acid is a percentage, at most ${RECIPE_LIMITS.alphaAcidPercent} %.`,
+  }),
+});
+export type HopInput = z.input<typeof hopInputSchema>;
+
+export const mashStepInputSchema = z.object({
+  tempC: temperatureField('the step temperature', 'Step temperature', 20, 100),
+  minutes: numberField({
+    what: 'the step length',
+    label: 'Step length',
+    min: 0,
+    exclusiveMin: true,
+    max: RECIPE_LIMITS.mashStepMinutes,
+    rangeMessage: `Step length above ${RECIPE_LIMITS.mashStepMinutes} minutes is more than Wortwise handles. Check the number.`,
+  }),
+});
+export type MashStepInput = z.input<typeof mashStepInputSchema>;
+
+export const yeastInputSchema = z.object({
+  name: textField('the yeast', 120, false).default(''),
+  /** Free text: yeast comes in sachets, vials and slurries, not one unit. */
+  amount: textField('how much yeast', 120, false).default(''),
+});
+
+// ---------------------------------------------------------------------------------------------
+// The recipe
+
+const recipeShape = {
+  name: textField('a name for the recipe', 120, true),
+  style: textField('a style', 80, false).default(''),
+  notes: textField('notes', 5000, false).default(''),
+  batchVolumeL: volumeField('the batch volume into the fermenter', 'Batch volume'),
+  preBoilVolumeL: volumeField('the pre-boil volume', 'Pre-boil volume'),
+  postBoilVolumeL: volumeField('the post-boil volume', 'Post-boil volume'),
+  boilMinutes: numberField({
+    what: 'the boil length',
+    label: 'Boil length',
+    min: 0,
+    max: RECIPE_LIMITS.boilMinutes,
+    rangeMessage: `Boil length must be between 0 and ${RECIPE_LIMITS.boilMinutes} minutes.`,
+  }),
+  boilOffLPerHour: numberField({
+    what: 'the boil-off rate',
+    label: 'Boil-off rate',
+    min: 0,
+    max: RECIPE_LIMITS.boilOffLPerHour,
+    rangeMessage: `Boil-off above ${RECIPE_LIMITS.boilOffLPerHour} L (${gal(RECIPE_LIMITS.boilOffLPerHour)}) per hour is more than Wortwise handles. Check the number.`,
+  }),
+  efficiency: numberField({
+    what: 'the brewhouse efficiency',
+    label: 'Brewhouse efficiency',
+    min: 0,
+    exclusiveMin: true,
+    max: 1,
+    rangeMessage: 'Brewhouse efficiency must be above 0 % and at most 100 %.',
+  }),
+  targetOg: numberField({
+    what: 'the target OG',
+    label: 'Target OG',
+    min: 1,
+    exclusiveMin: true,
+    max: 1.2,
+    rangeMessage: 'Target OG must be above 1.000 and at most 1.200 (about 44 °P).',
+  }),
+  targetFg: numberField({
+    what: 'the target FG',
+    label: 'Target FG',
+    min: 0.98,
+    max: 1.2,
+    rangeMessage: 'Target FG must be between 0.980 and 1.200.',
+  }),
+  mashPhTarget: numberField({
+    what: 'the mash pH target',
+    label: 'Mash pH target',
+    min: 4.5,
+    max: 6.5,
+    rangeMessage: 'Mash pH target must be between 4.5 and 6.5; most mashes aim for about 5.2 to 5.6.',
+  }).default(DEFAULT_MASH_PH_TARGET),
+  fermentationTempMinC: temperatureField('the lowest fermentation temperature', 'Lowest fermentation temperature', 0, 45),
+  fermentationTempMaxC: temperatureField('the highest fermentation temperature', 'Highest fermentation temperature', 0, 45),
+  yeast: yeastInputSchema.default({ name: '', amount: '' }),
+  fermentables: z
+    .array(fermentableInputSchema, { error: 'Add at least one fermentable.' })
+    .min(1, { error: 'Add at least one fermentable.' })
+    .max(RECIPE_LIMITS.fermentables, { error: `Use at most ${RECIPE_LIMITS.fermentables} fermentables.` }),
+  hops: z.array(hopInputSchema).max(RECIPE_LIMITS.hops, { error: `Use at most ${RECIPE_LIMITS.hops} hop additions.` }).default([]),
+  mashSteps: z.array(mashStepInputSchema).max(RECIPE_LIMITS.mashSteps, { error: `Use at most ${RECIPE_LIMITS.mashSteps} mash steps.` }).default([]),
+};
+
+const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+
+/**
+ * The checks that need two or more fields. They run even while other fields are still invalid
+ * (`when`), so the form shows every problem at once; each looks only at numbers that are there.
+ */
+function crossChecks(value: Record<string, unknown>, ctx: z.RefinementCtx) {
+  const add = (path: (string | number)[], message: string) => ctx.addIssue({ code: 'custom', path, message, input: value });
+  const { targetOg, targetFg, preBoilVolumeL: pre, postBoilVolumeL: post, boilMinutes, boilOffLPerHour: rate } = value;
+  const { fermentationTempMinC: tMin, fermentationTempMaxC: tMax } = value;
+
+  // Only numbers that passed their own checks are compared, so one typo gives one message.
+  if (isNum(targetOg) && isNum(targetFg) && targetOg > 1 && targetOg <= 1.2 && targetFg >= 0.98 && targetFg >= targetOg) {
+    add(['targetFg'], 'Target FG must be below the target OG: fermentation only lowers gravity.');
+  }
+  if (isNum(tMin) && isNum(tMax) && tMin >= 0 && tMax <= 45 && tMax < tMin) {
+    add(['fermentationTempMaxC'], 'The highest fermentation temperature cannot be below the lowest.');
+  }
+  const boilMessage = boilOffMismatch(pre, post, boilMinutes, rate);
+  if (boilMessage) add([boilMessage.field], boilMessage.message);
+
+  if (Array.isArray(value.hops) && isNum(boilMinutes)) {
+    value.hops.forEach((hop: unknown, i) => {
+      const minutes = (hop as { minutes?: unknown } | null)?.minutes;
+      if (isNum(minutes) && minutes > boilMinutes) {
+        add(['hops', i, 'minutes'], `A hop cannot boil longer than the ${boilMinutes}-minute boil. Use 0 for additions after the boil.`);
+      }
+    });
+  }
+}
+
+/**
+ * Post-boil above pre-boil, or a boil-off rate that does not turn the pre-boil volume into the
+ * post-boil volume over the boil. Exported so the form can show the rate the volumes imply.
+ */
+export function boilOffMismatch(pre: unknown, post: unknown, boilMinutes: unknown, rate: unknown): { field: 'postBoilVolumeL' | 'boilOffLPerHour'; message: string } | null {
+  if (!isNum(pre) || !isNum(post) || pre <= 0 || post <= 0) return null;
+  if (post > pre) {
+    return { field: 'postBoilVolumeL', message: 'Post-boil volume cannot be above the pre-boil volume: a boil only loses water.' };
+  }
+  if (!isNum(boilMinutes) || !isNum(rate) || boilMinutes < 0 || rate < 0) return null;
+  const predictedPostL = pre - (rate * boilMinutes) / 60;
+  const toleranceL = Math.max(BOIL_OFF_TOLERANCE_L, BOIL_OFF_TOLERANCE_FRACTION * pre);
+  if (Math.abs(predictedPostL - post) <= toleranceL) return null;
+  if (boilMinutes === 0) {
+    return { field: 'postBoilVolumeL', message: 'With no boil, the post-boil volume should equal the pre-boil volume.' };
+  }
+  const implied = impliedBoilOffLPerHour(pre, post, boilMinutes);
+  const impliedText = implied === null ? '' : ` The volumes imply about ${implied.toFixed(1)} L (${gal(implied)}) per hour.`;
+  return {
+    field: 'boilOffLPerHour',
+    message: `This boil-off rate does not match the volumes: over ${boilMinutes} minutes it would leave ${Math.max(predictedPostL, 0).toFixed(1)} L (${gal(Math.max(predictedPostL, 0))}), not the post-boil ${post.toFixed(1)} L (${gal(post)}).${impliedText}`,
+  };
+}
+
+/** The boil-off rate the pre- and post-boil volumes and boil length imply, or null when they cannot. */
+export function impliedBoilOffLPerHour(preL: number, postL: number, minutes: number): number | null {
+  try {
+    return boilOffRateLPerHour({ startL: preL, endL: postL, minutes });
+  } catch (error) {
+    if (error instanceof BrewMathError) return null;
+    throw error;
+  }
+}
+
+export const recipeInputSchema = z.object(recipeShape).superRefine(crossChecks, { when: () => true });
+export type RecipeInput = z.input<typeof recipeInputSchema>;
+export type RecipeData = z.output<typeof recipeInputSchema>;
+
+/** A save carries the version it was edited from; an older version than stored is a 409. */
+export const recipeUpdateSchema = z
+  .object({
+    ...recipeShape,
+    version: z.number({ error: 'The recipe version is missing; reload the recipe.' }).int().positive({ error: 'The recipe version is missing; reload the recipe.' }),
+  })
+  .superRefine(crossChecks, { when: () => true });
+export type RecipeUpdateInput = z.input<typeof recipeUpdateSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Listing
+
+export const recipeSorts = ['name', 'style', 'og', 'abv', 'updated'] as const;
+export type RecipeSort = (typeof recipeSorts)[number];
+export const recipeScopes = ['all', 'mine', 'shared'] as const;
+export type RecipeScope = (typeof recipeScopes)[number];
+
+export const listRecipesQuerySchema = z.object({
+  q: z.string().trim().max(100, { error: 'Search for at most 100 characters.' }).optional(),
+  scope: z.enum(recipeScopes, { error: 'Choose all, mine or shared.' }).default('all'),
+  sort: z.enum(recipeSorts, { error: 'Sort by name, style, og, abv or updated.' }).default('updated'),
+  dir: z.enum(['asc', 'desc'], { error: 'Sort direction is asc or desc.' }).optional(),
+  page: z.coerce.number({ error: 'Page must be a number.' }).int().min(1, { error: 'Pages start at 1.' }).default(1),
+  pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int().min(1).max(100, { error: 'Ask for at most 100 recipes a page.' }).default(20),
+});
+export type ListRecipesQuery = z.input<typeof listRecipesQuerySchema>;
+
+export interface RecipeListItem {
+  id: number;
+  name: string;
+  style: string;
+  ownerId: number;
+  ownerName: string;
+  isOwner: boolean;
+  version: number;
+  batchVolumeL: number;
+  targetOg: number;
+  targetFg: number;
+  abvPercent: number;
+  sharedWithClubIds: number[];
+  updatedAt: string;
+}
+
+export interface RecipeList {
+  items: RecipeListItem[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Responses
+
+export interface Recipe extends RecipeData {
+  id: number;
+  ownerId: number;
+  ownerName: string;
+  version: number;
+  clonedFromId: number | null;
+  sharedWithClubIds: number[];
+  createdAt: string;
+  updatedAt: string;
+  /** What the signed-in user may do; the server enforces it regardless. */
+  permissions: { edit: boolean; share: boolean; delete: boolean; clone: boolean };
+  /** From the fermentables, efficiency and batch volume; null when they give no estimate. */
+  estimatedOg: number | null;
+  abvPercent: number;
+  apparentAttenuation: number;
+}
+
+export const sharingInputSchema = z.object({
+  clubIds: z
+    .array(z.number({ error: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
+    .max(50, { error: 'Share with at most 50 clubs.' }),
+});
+export type SharingInput = z.input<typeof sharingInputSchema>;
+
+export interface RecipeSharing {
+  recipeId: number;
+  clubIds: number[];
+}
+
+// ---------------------------------------------------------------------------------------------
+// The targets a brew day is judged against (a snapshot; see server/recipes/service.ts)
+
+export const recipeTargetsSchema = z.object({
+  recipeId: z.number().int().positive(),
+  recipeVersion: z.number().int().positive(),
+  name: z.string(),
+  style: z.string(),
+  batchVolumeL: z.number().positive(),
+  preBoilVolumeL: z.number().positive(),
+  postBoilVolumeL: z.number().positive(),
+  boilMinutes: z.number().min(0),
+  boilOffLPerHour: z.number().min(0),
+  efficiency: z.number().gt(0).max(1),
+  targetOg: z.number().gt(1).max(1.2),
+  targetFg: z.number().min(0.98).max(1.2),
+  mashPhTarget: z.number(),
+  mashSteps: z.array(z.object({ tempC: z.number(), minutes: z.number() })),
+  fermentationTempMinC: z.number(),
+  fermentationTempMaxC: z.number(),
+});
+export type RecipeTargets = z.infer<typeof recipeTargetsSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Our file format (docs/recipe-format.md)
+
+export const RECIPE_FILE_FORMAT = 'wortwise-recipe';
+export const RECIPE_FILE_VERSION = 1;
+
+export const recipeFileHeaderSchema = z.object({
+  format: z.literal(RECIPE_FILE_FORMAT, { error: `This is not a Wortwise recipe file: "format" must be "${RECIPE_FILE_FORMAT}".` }),
+  version: z.literal(RECIPE_FILE_VERSION, { error: `This file is version ${RECIPE_FILE_VERSION}'s format only: "version" must be ${RECIPE_FILE_VERSION}.` }),
+  recipe: z.record(z.string(), z.unknown(), { error: '"recipe" must be an object with the recipe in it.' }),
+});
+
+export interface RecipeFile {
+  format: typeof RECIPE_FILE_FORMAT;
+  version: typeof RECIPE_FILE_VERSION;
+  exportedAt: string;
+  recipe: RecipeData;
+}
+
+export interface RecipeImportResult {
+  recipe: Recipe;
+  /** Fields in the file that are not part of our format, left out of the saved recipe. */
+  ignored: { path: string; message: string }[];
+}
