@@ -3,11 +3,14 @@ import path from 'node:path';
 import cookieParser from 'cookie-parser';
 import express from 'express';
 import helmet from 'helmet';
+import { adminRouter } from './admin/router';
 import { authRouter } from './auth/router';
 import { loadUser } from './auth/session';
 import type { AppContext } from './context';
+import { clubsRouter, invitationsRouter } from './clubs/router';
 import { healthRouter } from './health/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
+import { passwordResetRouter } from './password-reset/router';
 
 const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
 
@@ -25,7 +28,11 @@ export function createApp(ctx: AppContext) {
   const api = express.Router();
   api.use('/health', healthRouter(pool));
   api.use(loadUser(db, env));
+  api.use('/auth/password-reset', passwordResetRouter(ctx));
   api.use('/auth', authRouter(db, env));
+  api.use('/clubs', clubsRouter(ctx));
+  api.use('/invitations', invitationsRouter(ctx));
+  api.use('/admin', adminRouter(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

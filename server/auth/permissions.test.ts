@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { can, canInClub, requireAccess, type Actor, type ResourceAction } from './permissions';
+import { can, canInClub, requireAccess, requireClubAccess, type Actor, type ResourceAction } from './permissions';
 import { Forbidden, NotFound } from '../lib/errors';
 
 // A brew day owned by user 1 and shared with club 10.
@@ -54,15 +54,26 @@ describe('who may do what with a shared brewer resource', () => {
 });
 
 describe('club actions', () => {
+  // Order: view, invite, remove-member, set-role, rename, delete, leave.
   it.each([
-    ['organiser', 'YYYY'],
-    ['mentorOfClub', 'Y---'],
-    ['clubMember', 'Y---'],
-    ['mentorOfOtherClub', '----'],
-    ['siteAdmin', 'YYYY'],
-    ['anonymous', '----'],
+    ['owner', 'Y-----Y'],
+    ['otherBrewer', '-------'],
+    ['organiser', 'YYYYYYY'],
+    ['mentorOfClub', 'Y-----Y'],
+    ['clubMember', 'Y-----Y'],
+    ['mentorOfOtherClub', '-------'],
+    ['siteAdmin', 'YYYYYY-'],
+    ['anonymous', '-------'],
   ])('%s: %s', (name, expected) => {
-    const got = (['view', 'invite', 'remove-member', 'set-role'] as const).map((a) => (canInClub(actors[name], a, 10) ? 'Y' : '-')).join('');
+    const got = (['view', 'invite', 'remove-member', 'set-role', 'rename', 'delete', 'leave'] as const).map((a) => (canInClub(actors[name], a, 10) ? 'Y' : '-')).join('');
     expect(got).toBe(expected);
+  });
+
+  it('hides a club from non-members (404) and refuses management to plain members (403)', () => {
+    expect(() => requireClubAccess(actors.mentorOfOtherClub, 'view', 10)).toThrow(NotFound);
+    expect(() => requireClubAccess(actors.anonymous, 'leave', 10)).toThrow(NotFound);
+    expect(() => requireClubAccess(actors.mentorOfClub, 'invite', 10)).toThrow(Forbidden);
+    expect(() => requireClubAccess(actors.organiser, 'invite', 10)).not.toThrow();
+    expect(() => requireClubAccess(actors.siteAdmin, 'leave', 10)).toThrow(Forbidden);
   });
 });

@@ -20,7 +20,7 @@ export interface OwnedResource {
 }
 
 export type ResourceAction = 'read' | 'update' | 'delete' | 'comment' | 'share' | 'clone';
-export type ClubAction = 'view' | 'invite' | 'remove-member' | 'set-role' | 'rename' | 'delete';
+export type ClubAction = 'view' | 'invite' | 'remove-member' | 'set-role' | 'rename' | 'delete' | 'leave';
 
 function rolesInSharedClubs(actor: Actor, resource: OwnedResource): ClubRole[] {
   return actor.memberships.filter((m) => resource.sharedWithClubIds.includes(m.clubId)).map((m) => m.role);
@@ -54,17 +54,26 @@ export function clubRole(actor: Actor | null, clubId: number): ClubRole | null {
   return actor?.memberships.find((m) => m.clubId === clubId)?.role ?? null;
 }
 
+/** A brewer shares their recipes and brew days only with clubs they belong to (any role); site admins are no exception. */
+export function canShareWithClub(actor: Actor | null, clubId: number): boolean {
+  return clubRole(actor, clubId) !== null;
+}
+
 export function canInClub(actor: Actor | null, action: ClubAction, clubId: number): boolean {
   if (!actor) return false;
   const role = clubRole(actor, clubId);
   if (action === 'view') return role !== null || actor.siteRole === 'admin';
+  // Only a member can leave; the last-organiser rule is the club service's, as it needs a count.
+  if (action === 'leave') return role !== null;
   // Organisers run their club; site admins may step in to manage accounts and clubs.
   return role === 'organiser' || actor.siteRole === 'admin';
 }
 
 export function requireClubAccess(actor: Actor | null, action: ClubAction, clubId: number) {
   if (!canInClub(actor, 'view', clubId)) throw new NotFound('That club was not found.');
-  if (!canInClub(actor, action, clubId)) throw new Forbidden('Only the club’s organisers may do that.');
+  if (!canInClub(actor, action, clubId)) {
+    throw new Forbidden(action === 'leave' ? 'You are not a member of this club.' : 'Only the club’s organisers may do that.');
+  }
 }
 
 export function requireSiteAdmin(actor: Actor | null) {

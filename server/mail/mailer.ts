@@ -27,3 +27,17 @@ export function createMailer(env: Env): Mailer {
     },
   };
 }
+
+/**
+ * Sends after the database work has committed. A failed send is logged and reported, never
+ * thrown: what was saved stays saved, and the person can ask for the mail again.
+ */
+export async function sendAfterCommit(mailer: Mailer, mail: OutgoingMail): Promise<boolean> {
+  try {
+    await mailer.send(mail);
+    return true;
+  } catch (error) {
+    console.warn(`Mail "${mail.subject}" to ${mail.to} could not be sent:`, (error as Error).message);
+    return false;
+  }
+}

@@ -1,0 +1,52 @@
+import { Router } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { tokenParamsSchema } from '@shared/schemas/clubs';
+import { passwordResetRequestedMessage, passwordResetRequestSchema, passwordResetSchema } from '@shared/schemas/password-reset';
+import { issueSession, loadSessionUser, toMe } from '../auth/session';
+import type { AppContext } from '../context';
+import { handle } from '../lib/handle';
+import { checkResetToken, requestPasswordReset, resetPassword } from './service';
+
+/** `/api/auth/password-reset`: ask for a link, check it, use it. */
+export function passwordResetRouter(ctx: AppContext) {
+  const { db, env } = ctx;
+  const router = Router();
+  // In-memory counts, per instance (README, "Beyond one machine"); the per-account cap in the
+  // service is in MariaDB and so holds across instances.
+  const limiter = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: env.AUTH_RATE_LIMIT_MAX,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    message: { error: 'rate_limited', message: 'Too many attempts. Please wait a few minutes and try again.' },
+  });
+
+  router.post(
+    '/',
+    limiter,
+    handle({ body: passwordResetRequestSchema }, async ({ body }, _req, res) => {
+      await requestPasswordReset(ctx, body.email);
+      res.status(202);
+      return { message: passwordResetRequestedMessage };
+    }),
+  );
+
+  router.get(
+    '/:token',
+    limiter,
+    handle({ params: tokenParamsSchema }, ({ params }) => checkResetToken(db, params.token)),
+  );
+
+  router.post(
+    '/:token',
+    limiter,
+    handle({ params: tokenParamsSchema, body: passwordResetSchema }, async ({ params, body }, _req, res) => {
+      const user = await resetPassword(db, params.token, body.password);
+      // This device gets a fresh session under the new token version; every other one is out.
+      issueSession(res, env, user);
+      return toMe((await loadSessionUser(db, user.id))!);
+    }),
+  );
+
+  return router;
+}
