@@ -1,0 +1,395 @@
+/**
+ * Instruments and equipment: the request and response shapes shared by the API and the forms.
+ * SI inside (°C, litres, SG); the forms convert at the edge.
+ */
+import { z } from 'zod';
+import { DEFAULT_COOLING_SHRINKAGE, DEFAULT_WCF, ELEVATION_MAX_M, ELEVATION_MIN_M, WCF_MAX, WCF_MIN } from '../brewmath';
+
+export const instrumentKinds = ['hydrometer', 'refractometer', 'thermometer', 'ph_meter'] as const;
+export type InstrumentKind = (typeof instrumentKinds)[number];
+
+export const instrumentKindLabels: Record<InstrumentKind, string> = {
+  hydrometer: 'Hydrometer',
+  refractometer: 'Refractometer',
+  thermometer: 'Thermometer',
+  ph_meter: 'pH meter',
+};
+
+/** Many hydrometers are calibrated at 20 °C; older and US ones at 60 °F = 15.56 °C. */
+export const DEFAULT_HYDROMETER_CALIBRATION_C = 20;
+export const HYDROMETER_CALIBRATION_PRESETS_C = [20, 15.56] as const;
+export const HYDROMETER_CALIBRATION_MIN_C = 10;
+export const HYDROMETER_CALIBRATION_MAX_C = 30;
+
+/** An offset beyond this is worth a second look (common practice, no source). */
+export const THERMOMETER_OFFSET_FLAG_C = 1;
+/** Beyond this the thermometer is broken or was misread: replace it, do not correct it. */
+export const THERMOMETER_OFFSET_MAX_C = 10;
+
+export const DEFAULT_PH_RESOLUTION = 0.01;
+export const DEFAULT_PH_REMINDER_DAYS = 30;
+/** The usual pair of buffers for a two-point calibration around mash pH (common practice, no source). */
+export const DEFAULT_PH_BUFFERS = { low: 4.01, high: 7.0 } as const;
+
+export const wcfSources = ['default', 'entered', 'measured'] as const;
+export type WcfSource = (typeof wcfSources)[number];
+
+// ---------------------------------------------------------------------------------------------
+// Field schemas, each with a message a brewer can act on.
+
+const finite = (label: string) => z.number({ error: `${label}: enter a number.` });
+
+export const instrumentNameSchema = z
+  .string({ error: 'Give the instrument a name.' })
+  .trim()
+  .min(1, { error: 'Give the instrument a name.' })
+  .max(80, { error: 'Use at most 80 characters.' });
+
+const notesSchema = z.string().trim().max(500, { error: 'Use at most 500 characters.' }).nullish();
+
+export const calibrationTempSchema = finite('Calibration temperature')
+  .min(HYDROMETER_CALIBRATION_MIN_C, { error: 'Hydrometers are calibrated between 10 and 30 °C (usually 20 °C or 15.56 °C / 60 °F).' })
+  .max(HYDROMETER_CALIBRATION_MAX_C, { error: 'Hydrometers are calibrated between 10 and 30 °C (usually 20 °C or 15.56 °C / 60 °F).' });
+
+const wcfMessage = `The wort correction factor must be between ${WCF_MIN} and ${WCF_MAX}; most refractometers need about 1.00 to 1.10.`;
+export const wcfSchema = finite('Wort correction factor').min(WCF_MIN, { error: wcfMessage }).max(WCF_MAX, { error: wcfMessage });
+
+const offsetMessage = `An offset over ${THERMOMETER_OFFSET_MAX_C} °C means the thermometer is broken or was misread: replace it rather than correct it.`;
+export const offsetSchema = finite('Offset').min(-THERMOMETER_OFFSET_MAX_C, { error: offsetMessage }).max(THERMOMETER_OFFSET_MAX_C, { error: offsetMessage });
+
+export const phResolutionSchema = finite('Resolution')
+  .positive({ error: 'The resolution is the smallest step the meter shows, e.g. 0.01.' })
+  .max(0.5, { error: 'A meter that shows only 0.5 pH steps cannot tell a good mash from a poor one.' });
+
+export const reminderDaysSchema = finite('Reminder interval')
+  .int({ error: 'Use whole days.' })
+  .min(1, { error: 'Choose between 1 and 365 days.' })
+  .max(365, { error: 'Calibrate at least once a year: choose 365 days or fewer.' });
+
+const bufferSchema = (label: string) =>
+  finite(label).min(1, { error: 'Calibration buffers lie between pH 1 and 13.' }).max(13, { error: 'Calibration buffers lie between pH 1 and 13.' });
+
+/**
+ * The last calendar day anywhere on Earth (UTC+14), so a brewer ahead of UTC can record today's
+ * calibration while a date that is tomorrow everywhere is refused.
+ */
+export function latestTodayIso(now: Date = new Date()): string {
+  return new Date(now.getTime() + 14 * 3600_000).toISOString().slice(0, 10);
+}
+
+export const pastDateSchema = z
+  .string({ error: 'Enter the date.' })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'Enter a date as YYYY-MM-DD.' })
+  .pipe(z.iso.date({ error: 'Enter a real calendar date.' }))
+  .refine((d) => d <= latestTodayIso(), { error: 'The calibration date cannot be in the future.' })
+  .refine((d) => d >= '2000-01-01', { error: 'Enter a date after 2000.' });
+
+export const elevationSchema = finite('Elevation')
+  .min(ELEVATION_MIN_M, { error: `Elevation must be between ${ELEVATION_MIN_M} and ${ELEVATION_MAX_M} m.` })
+  .max(ELEVATION_MAX_M, { error: `Elevation must be between ${ELEVATION_MIN_M} and ${ELEVATION_MAX_M} m.` });
+
+// ---------------------------------------------------------------------------------------------
+// Creating and editing instruments.
+
+const hydrometerCreate = z.object({
+  kind: z.literal('hydrometer'),
+  name: instrumentNameSchema,
+  notes: notesSchema,
+  calibrationTempC: calibrationTempSchema.default(DEFAULT_HYDROMETER_CALIBRATION_C),
+});
+const refractometerCreate = z.object({
+  kind: z.literal('refractometer'),
+  name: instrumentNameSchema,
+  notes: notesSchema,
+  /** Leave out to start from the common-practice 1.04 until the brewer measures their own. */
+  wcf: wcfSchema.optional(),
+});
+const thermometerCreate = z.object({
+  kind: z.literal('thermometer'),
+  name: instrumentNameSchema,
+  notes: notesSchema,
+  offsetC: offsetSchema.default(0),
+});
+const phMeterCreate = z.object({
+  kind: z.literal('ph_meter'),
+  name: instrumentNameSchema,
+  notes: notesSchema,
+  resolutionPh: phResolutionSchema.default(DEFAULT_PH_RESOLUTION),
+  reminderDays: reminderDaysSchema.default(DEFAULT_PH_REMINDER_DAYS),
+  calibratedOn: pastDateSchema.nullish(),
+  bufferLowPh: bufferSchema('Low buffer').nullish(),
+  bufferHighPh: bufferSchema('High buffer').nullish(),
+});
+
+export const createInstrumentSchema = z
+  .discriminatedUnion('kind', [hydrometerCreate, refractometerCreate, thermometerCreate, phMeterCreate], {
+    error: 'Choose a hydrometer, refractometer, thermometer or pH meter.',
+  })
+  .superRefine((v, ctx) => {
+    if (v.kind === 'ph_meter') checkBuffers(v.bufferLowPh, v.bufferHighPh, ctx);
+  });
+export type CreateInstrumentInput = z.input<typeof createInstrumentSchema>;
+
+function checkBuffers(low: number | null | undefined, high: number | null | undefined, ctx: z.RefinementCtx) {
+  if (typeof low === 'number' && typeof high === 'number' && high - low < 1) {
+    ctx.addIssue({ code: 'custom', path: ['bufferHighPh'], message: 'The high buffer must be at least 1 pH above the low one (e.g. 4.01 and 7.00).' });
+  }
+}
+
+/** Renaming, notes and archiving. Calibration values change only through a calibration. */
+export const updateInstrumentSchema = z.object({
+  name: instrumentNameSchema.optional(),
+  notes: notesSchema,
+  archived: z.boolean({ error: 'Archived is yes or no.' }).optional(),
+});
+export type UpdateInstrumentInput = z.input<typeof updateInstrumentSchema>;
+
+export const listInstrumentsQuerySchema = z.object({
+  archived: z.enum(['include', 'only', 'exclude'], { error: 'Use include, only or exclude.' }).default('exclude'),
+  kind: z.enum(instrumentKinds, { error: 'Unknown instrument kind.' }).optional(),
+});
+
+// ---------------------------------------------------------------------------------------------
+// Calibrations: each one accepted by the brewer is saved with its inputs.
+
+export const calibrationMethods = ['created', 'wcf-pairs', 'thermometer-check', 'ph-two-point', 'set'] as const;
+export type CalibrationMethod = (typeof calibrationMethods)[number];
+
+export const wcfPairInputSchema = z.object({
+  brix: finite('Brix').min(0, { error: 'Brix is between 0 and 40.' }).max(40, { error: 'Brix is between 0 and 40.' }),
+  /** The hydrometer as read. */
+  sg: finite('Hydrometer reading').min(1, { error: 'Unfermented wort reads above 1.000.' }).max(1.2, { error: 'A hydrometer reading is below 1.200.' }),
+  /** When given, the reading is corrected from this temperature to the hydrometer's calibration temperature. */
+  sampleTempC: finite('Sample temperature')
+    .min(0, { error: 'Read the sample between 0 and 60 °C; cool hot wort first.' })
+    .max(60, { error: 'Read the sample between 0 and 60 °C; cool hot wort first.' })
+    .nullish(),
+});
+export type WcfPairInput = z.input<typeof wcfPairInputSchema>;
+
+export const MAX_WCF_PAIRS = 12;
+
+const wcfPairsCalibration = z.object({
+  method: z.literal('wcf-pairs'),
+  pairs: z
+    .array(wcfPairInputSchema, { error: 'Add the paired readings.' })
+    .min(1, { error: 'Add at least one pair: refractometer Brix and hydrometer SG of the same unfermented wort.' })
+    .max(MAX_WCF_PAIRS, { error: `Use at most ${MAX_WCF_PAIRS} pairs.` }),
+  /** The hydrometer used; its calibration temperature corrects the readings. */
+  hydrometerId: z.number().int().positive().nullish(),
+  /** Used when no hydrometer profile is named. */
+  hydrometerCalibrationTempC: calibrationTempSchema.nullish(),
+});
+
+const readingTempSchema = (label: string, min: number, max: number, hint: string) =>
+  finite(label).min(min, { error: hint }).max(max, { error: hint });
+
+const thermometerCheckCalibration = z
+  .object({
+    method: z.literal('thermometer-check'),
+    /** The thermometer's reading in a stirred slurry of crushed ice and water: truly 0 °C. */
+    iceReadingC: readingTempSchema('Ice-bath reading', -10, 10, 'In an ice bath a working thermometer reads within 10 °C of 0 °C.').nullish(),
+    /** The reading in water at a rolling boil. */
+    boilingReadingC: readingTempSchema('Boiling-water reading', 80, 110, 'In boiling water a working thermometer reads between 80 and 110 °C.').nullish(),
+    elevationM: elevationSchema.nullish(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.iceReadingC == null && v.boilingReadingC == null) {
+      ctx.addIssue({ code: 'custom', path: ['iceReadingC'], message: 'Enter the ice-bath reading, the boiling-water reading, or both.' });
+    }
+    if (v.boilingReadingC != null && v.elevationM == null) {
+      ctx.addIssue({ code: 'custom', path: ['elevationM'], message: 'Enter your elevation: water boils cooler the higher you are.' });
+    }
+  });
+
+const phTwoPointCalibration = z
+  .object({
+    method: z.literal('ph-two-point'),
+    calibratedOn: pastDateSchema,
+    bufferLowPh: bufferSchema('Low buffer'),
+    bufferHighPh: bufferSchema('High buffer'),
+  })
+  .superRefine((v, ctx) => checkBuffers(v.bufferLowPh, v.bufferHighPh, ctx));
+
+/** Typing a value in directly (a factor measured elsewhere, a different calibration temperature). */
+const setCalibration = z.object({
+  method: z.literal('set'),
+  calibrationTempC: calibrationTempSchema.optional(),
+  wcf: wcfSchema.optional(),
+  offsetC: offsetSchema.optional(),
+  resolutionPh: phResolutionSchema.optional(),
+  reminderDays: reminderDaysSchema.optional(),
+  note: z.string().trim().max(200, { error: 'Use at most 200 characters.' }).nullish(),
+});
+
+export const calibrateInstrumentSchema = z.union([wcfPairsCalibration, thermometerCheckCalibration, phTwoPointCalibration, setCalibration], {
+  error: 'Choose how the instrument was calibrated.',
+});
+export type CalibrateInstrumentInput = z.input<typeof calibrateInstrumentSchema>;
+export type CalibrateInstrumentBody = z.output<typeof calibrateInstrumentSchema>;
+
+/** Which calibration methods apply to which instrument. */
+export const methodsByKind: Record<InstrumentKind, readonly CalibrationMethod[]> = {
+  hydrometer: ['set'],
+  refractometer: ['wcf-pairs', 'set'],
+  thermometer: ['thermometer-check', 'set'],
+  ph_meter: ['ph-two-point', 'set'],
+};
+
+/** Which directly settable values belong to which instrument. */
+export const settableByKind: Record<InstrumentKind, readonly ('calibrationTempC' | 'wcf' | 'offsetC' | 'resolutionPh' | 'reminderDays')[]> = {
+  hydrometer: ['calibrationTempC'],
+  refractometer: ['wcf'],
+  thermometer: ['offsetC'],
+  ph_meter: ['resolutionPh', 'reminderDays'],
+};
+
+// ---------------------------------------------------------------------------------------------
+// The calibration snapshot a reading keeps (see docs/decisions/0005-readings-keep-their-calibration.md).
+
+const snapshotBase = {
+  /** null for a common-practice default used without a saved instrument. */
+  instrumentId: z.number().int().positive().nullable(),
+  name: z.string(),
+  /** The calibration history entry in force when the snapshot was taken, if any. */
+  calibrationId: z.number().int().positive().nullable(),
+};
+
+export const hydrometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('hydrometer'), calibrationTempC: z.number() });
+export const refractometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('refractometer'), wcf: z.number(), wcfSource: z.enum(wcfSources) });
+export const thermometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('thermometer'), offsetC: z.number(), checkedOn: z.string().nullable() });
+export const phMeterSnapshotSchema = z.object({
+  ...snapshotBase,
+  kind: z.literal('ph_meter'),
+  resolutionPh: z.number(),
+  calibratedOn: z.string().nullable(),
+  reminderDays: z.number().int(),
+  bufferLowPh: z.number().nullable(),
+  bufferHighPh: z.number().nullable(),
+});
+
+export const instrumentSnapshotSchema = z.discriminatedUnion('kind', [hydrometerSnapshotSchema, refractometerSnapshotSchema, thermometerSnapshotSchema, phMeterSnapshotSchema]);
+export type InstrumentSnapshot = z.infer<typeof instrumentSnapshotSchema>;
+export type HydrometerSnapshot = z.infer<typeof hydrometerSnapshotSchema>;
+export type RefractometerSnapshot = z.infer<typeof refractometerSnapshotSchema>;
+export type ThermometerSnapshot = z.infer<typeof thermometerSnapshotSchema>;
+export type PhMeterSnapshot = z.infer<typeof phMeterSnapshotSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Responses.
+
+export interface Instrument {
+  id: number;
+  kind: InstrumentKind;
+  name: string;
+  notes: string | null;
+  archived: boolean;
+  calibrationTempC: number | null;
+  wcf: number | null;
+  wcfSource: WcfSource | null;
+  offsetC: number | null;
+  /** Date (YYYY-MM-DD) of the last thermometer check. */
+  offsetCheckedOn: string | null;
+  resolutionPh: number | null;
+  /** Date (YYYY-MM-DD) of the last two-point calibration. */
+  calibratedOn: string | null;
+  bufferLowPh: number | null;
+  bufferHighPh: number | null;
+  reminderDays: number | null;
+  createdAt: string;
+  updatedAt: string;
+  /** What a reading taken now would keep. */
+  snapshot: InstrumentSnapshot;
+}
+
+export interface CalibrationEntry {
+  id: number;
+  instrumentId: number;
+  method: CalibrationMethod;
+  /** What the brewer entered. */
+  inputs: Record<string, unknown>;
+  /** What was worked out from it (per-pair factors, offsets, expected boiling point). */
+  result: Record<string, unknown> | null;
+  before: InstrumentSnapshot | null;
+  after: InstrumentSnapshot;
+  createdAt: string;
+}
+
+export interface CalibrateResponse {
+  instrument: Instrument;
+  calibration: CalibrationEntry;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Equipment: the brewer's kettle and its losses.
+
+/** Common-practice defaults used until a brewer saves their own (common practice, no source). */
+export const DEFAULT_EQUIPMENT = {
+  name: 'Typical 25 L kettle (defaults)',
+  boilOffLPerHour: 4,
+  trubLossL: 1,
+  deadSpaceL: 0.5,
+  coolingShrinkage: DEFAULT_COOLING_SHRINKAGE,
+  elevationM: null,
+  kettleCapacityL: null,
+} as const;
+
+export const equipmentNameSchema = z
+  .string({ error: 'Give the kettle a name.' })
+  .trim()
+  .min(1, { error: 'Give the kettle a name.' })
+  .max(80, { error: 'Use at most 80 characters.' });
+
+const litres = (label: string, max: number) =>
+  finite(label).min(0, { error: `${label} cannot be below 0 L.` }).max(max, { error: `${label} above ${max} L is beyond a home brewery.` });
+
+export const equipmentProfileInputSchema = z.object({
+  name: equipmentNameSchema,
+  boilOffLPerHour: finite('Boil-off rate').min(0, { error: 'The boil-off rate cannot be below 0 L/h.' }).max(30, { error: 'A boil-off above 30 L/h is beyond a home kettle.' }),
+  trubLossL: litres('Trub loss', 50),
+  deadSpaceL: litres('Dead space', 50),
+  coolingShrinkage: finite('Cooling shrinkage')
+    .min(0, { error: 'Cooling shrinkage is between 0 and 10 %.' })
+    .max(0.1, { error: 'Cooling shrinkage is between 0 and 10 % (about 4 % is usual).' }),
+  elevationM: elevationSchema.nullish(),
+  kettleCapacityL: finite('Kettle size').positive({ error: 'The kettle size must be more than 0 L.' }).max(1000, { error: 'A kettle above 1000 L is beyond a home brewery.' }).nullish(),
+  isDefault: z.boolean().optional(),
+});
+export type EquipmentProfileInput = z.input<typeof equipmentProfileInputSchema>;
+
+export const equipmentProfileUpdateSchema = equipmentProfileInputSchema.partial();
+export type EquipmentProfileUpdate = z.input<typeof equipmentProfileUpdateSchema>;
+
+export const boilOffMeasurementSchema = z
+  .object({
+    startL: finite('Starting volume').positive({ error: 'The starting volume must be more than 0 L.' }).max(1000, { error: 'Use at most 1000 L.' }),
+    endL: finite('Ending volume').positive({ error: 'The ending volume must be more than 0 L.' }).max(1000, { error: 'Use at most 1000 L.' }),
+    minutes: finite('Boil time').positive({ error: 'The boil time must be more than 0 minutes.' }).max(600, { error: 'Use at most 600 minutes.' }),
+  })
+  .superRefine((v, ctx) => {
+    if (typeof v.startL === 'number' && typeof v.endL === 'number' && v.endL > v.startL) {
+      ctx.addIssue({ code: 'custom', path: ['endL'], message: 'The ending volume is above the starting one; a boil only loses volume. Measure both hot, in the kettle.' });
+    }
+  });
+export type BoilOffMeasurementInput = z.input<typeof boilOffMeasurementSchema>;
+
+export interface EquipmentProfile {
+  /** null when these are the common-practice defaults, not a saved profile. */
+  id: number | null;
+  name: string;
+  boilOffLPerHour: number;
+  trubLossL: number;
+  deadSpaceL: number;
+  /** A fraction: 0.04 is 4 %. */
+  coolingShrinkage: number;
+  elevationM: number | null;
+  kettleCapacityL: number | null;
+  isDefault: boolean;
+  boilOffMeasurement: { startL: number; endL: number; minutes: number; measuredAt: string } | null;
+  source: 'saved' | 'common-practice';
+  /** Said plainly when the values are defaults. */
+  note: string | null;
+  updatedAt: string | null;
+}
+
+export { DEFAULT_WCF };
