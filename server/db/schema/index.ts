@@ -3,3 +3,5 @@ export * from './users';
 export * from './clubs';
 export * from './password-reset';
 export * from './recipes';
+export * from './brews';
+export * from './instruments';

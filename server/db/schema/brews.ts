@@ -1,0 +1,196 @@
+import { sql } from 'drizzle-orm';
+import {
+  char,
+  customType,
+  date,
+  double,
+  index,
+  int,
+  mysqlEnum,
+  mysqlTable,
+  primaryKey,
+  text,
+  timestamp,
+  varchar,
+} from 'drizzle-orm/mysql-core';
+import { brewStages, brewStatuses, photoMimeTypes, readingKinds } from '../../../shared/schemas/brews';
+import { clubs } from './clubs';
+import { recipes } from './recipes';
+import { users } from './users';
+
+/**
+ * A JSON document. MariaDB's JSON is LONGTEXT with a validity check, and the driver hands it back
+ * as a string, so this column parses on the way out.
+ */
+const jsonDoc = <T>(name: string) =>
+  customType<{ data: T; driverData: string }>({
+    dataType: () => 'json',
+    toDriver: (value) => JSON.stringify(value),
+    fromDriver: (value) => (typeof value === 'string' ? JSON.parse(value) : value) as T,
+  })(name);
+
+/** Up to 16 MiB of bytes; photos are capped far below that at upload. */
+const mediumBlob = customType<{ data: Buffer; driverData: Buffer }>({ dataType: () => 'mediumblob' });
+
+const stamp = (name: string) => timestamp(name, { mode: 'date', fsp: 3 });
+const created = (name: string) => stamp(name).notNull().default(sql`CURRENT_TIMESTAMP(3)`);
+
+/**
+ * A brew day. It keeps a snapshot of the recipe's targets and of the equipment profile, so editing
+ * or deleting the recipe later never changes what the day was judged against.
+ */
+export const brews = mysqlTable(
+  'brews',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    ownerId: int('owner_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    recipeId: int('recipe_id').references(() => recipes.id, { onDelete: 'set null' }),
+    name: varchar('name', { length: 120 }).notNull(),
+    status: mysqlEnum('status', brewStatuses).notNull().default('brewing'),
+    brewedOn: date('brewed_on', { mode: 'string' }).notNull(),
+    /** RecipeTargets (shared/schemas/recipes.ts) at the start of the day. */
+    targetsSnapshot: jsonDoc<unknown>('targets_snapshot').notNull(),
+    /** EquipmentProfile (shared/schemas/instruments.ts) at the start of the day. */
+    equipmentSnapshot: jsonDoc<unknown>('equipment_snapshot').notNull(),
+    /** Today's boil-off rate, when the brewer changed it from the equipment profile's. */
+    boilOffLPerHour: double('boil_off_l_per_hour'),
+    currentStage: mysqlEnum('current_stage', brewStages).notNull().default('mash'),
+    /** When the yeast went in: fermentation (issue 7) counts its days from here. */
+    pitchedAt: stamp('pitched_at'),
+    notes: text('notes').notNull(),
+    createdAt: created('created_at'),
+    updatedAt: created('updated_at'),
+  },
+  (t) => [index('brews_owner_idx').on(t.ownerId, t.brewedOn), index('brews_recipe_idx').on(t.recipeId)],
+);
+
+/** When each stage was started, completed or skipped; a stage can be returned to. */
+export const brewStagesTable = mysqlTable(
+  'brew_stages',
+  {
+    brewId: int('brew_id')
+      .notNull()
+      .references(() => brews.id, { onDelete: 'cascade' }),
+    stage: mysqlEnum('stage', brewStages).notNull(),
+    startedAt: stamp('started_at'),
+    completedAt: stamp('completed_at'),
+    skippedAt: stamp('skipped_at'),
+  },
+  (t) => [primaryKey({ columns: [t.brewId, t.stage] })],
+);
+
+/**
+ * One reading: what the brewer typed, the instrument's calibration at that moment and the
+ * correction it gave. A later calibration never rewrites it (recompute is a deliberate act,
+ * logged in brew_notes with the old and new values).
+ */
+export const brewReadings = mysqlTable(
+  'brew_readings',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    brewId: int('brew_id')
+      .notNull()
+      .references(() => brews.id, { onDelete: 'cascade' }),
+    stage: mysqlEnum('stage', brewStages).notNull(),
+    kind: mysqlEnum('kind', readingKinds).notNull(),
+    /** No foreign key on purpose: the snapshot stands for the instrument even after it is deleted. */
+    instrumentId: int('instrument_id'),
+    instrumentSnapshot: jsonDoc<unknown>('instrument_snapshot').notNull(),
+    raw: jsonDoc<Record<string, number | boolean | string>>('raw').notNull(),
+    correctedValue: double('corrected_value').notNull(),
+    correction: jsonDoc<unknown>('correction'),
+    warnings: jsonDoc<string[]>('warnings').notNull(),
+    volumeL: double('volume_l'),
+    takenAt: stamp('taken_at').notNull(),
+    note: text('note').notNull(),
+    recomputedAt: stamp('recomputed_at'),
+    recomputedFrom: jsonDoc<unknown>('recomputed_from'),
+    createdAt: created('created_at'),
+  },
+  (t) => [index('brew_readings_brew_idx').on(t.brewId, t.takenAt)],
+);
+
+/**
+ * A late-boil decision: the check's input as the brewer entered it, the result recomputed on the
+ * server from that input, and the option chosen.
+ */
+export const brewDecisions = mysqlTable(
+  'brew_decisions',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    brewId: int('brew_id')
+      .notNull()
+      .references(() => brews.id, { onDelete: 'cascade' }),
+    input: jsonDoc<unknown>('input').notNull(),
+    result: jsonDoc<unknown>('result').notNull(),
+    choice: jsonDoc<unknown>('choice').notNull(),
+    note: text('note').notNull(),
+    decidedAt: created('decided_at'),
+  },
+  (t) => [index('brew_decisions_brew_idx').on(t.brewId, t.decidedAt)],
+);
+
+/** The brewer's notes, and entries the app writes itself (a reading recomputed on purpose). */
+export const brewNotes = mysqlTable(
+  'brew_notes',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    brewId: int('brew_id')
+      .notNull()
+      .references(() => brews.id, { onDelete: 'cascade' }),
+    kind: mysqlEnum('kind', ['note', 'recompute']).notNull().default('note'),
+    stage: mysqlEnum('stage', brewStages),
+    body: text('body').notNull(),
+    details: jsonDoc<unknown>('details'),
+    authorId: int('author_id').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: created('created_at'),
+  },
+  (t) => [index('brew_notes_brew_idx').on(t.brewId, t.createdAt)],
+);
+
+/**
+ * Photos of a reading, in the database so every API instance sees them
+ * (docs/decisions/0006-uploaded-photos.md). The type is the one the bytes show, not the client's.
+ */
+export const readingPhotos = mysqlTable(
+  'reading_photos',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    readingId: int('reading_id')
+      .notNull()
+      .references(() => brewReadings.id, { onDelete: 'cascade' }),
+    brewId: int('brew_id')
+      .notNull()
+      .references(() => brews.id, { onDelete: 'cascade' }),
+    mime: mysqlEnum('mime', photoMimeTypes).notNull(),
+    sizeBytes: int('size_bytes').notNull(),
+    sha256: char('sha256', { length: 64 }).notNull(),
+    data: mediumBlob('data').notNull(),
+    createdAt: created('created_at'),
+  },
+  (t) => [index('reading_photos_reading_idx').on(t.readingId), index('reading_photos_brew_idx').on(t.brewId)],
+);
+
+/** A brew day shared with a club: its members can read it, its mentors comment; only the owner edits. */
+export const brewClubShares = mysqlTable(
+  'brew_club_shares',
+  {
+    brewId: int('brew_id')
+      .notNull()
+      .references(() => brews.id, { onDelete: 'cascade' }),
+    clubId: int('club_id')
+      .notNull()
+      .references(() => clubs.id, { onDelete: 'cascade' }),
+    sharedAt: timestamp('shared_at', { mode: 'date' }).notNull().default(sql`CURRENT_TIMESTAMP`),
+  },
+  (t) => [primaryKey({ columns: [t.brewId, t.clubId] }), index('brew_club_shares_club_idx').on(t.clubId)],
+);
+
+export type BrewRow = typeof brews.$inferSelect;
+export type BrewReadingRow = typeof brewReadings.$inferSelect;
+export type BrewDecisionRow = typeof brewDecisions.$inferSelect;
+export type BrewNoteRow = typeof brewNotes.$inferSelect;
+export type BrewStageRow = typeof brewStagesTable.$inferSelect;
+export type ReadingPhotoRow = typeof readingPhotos.$inferSelect;

@@ -1,0 +1,479 @@
+/**
+ * Brew days: the request and response shapes shared by the API and the brew-day forms. SI inside
+ * (°C, litres, SG); the forms convert at their edges. Messages that quote a limit give it in both
+ * metric and US units, because the same message reaches brewers of either preference.
+ */
+import { z } from 'zod';
+import type { InstrumentKind, InstrumentSnapshot, EquipmentProfile } from './instruments';
+import type { RecipeTargets } from './recipes';
+
+// ---------------------------------------------------------------------------------------------
+// Vocabulary
+
+/** The stages of a brew day, in the order they happen. */
+export const brewStages = ['mash', 'boil', 'chill', 'og'] as const;
+export type BrewStage = (typeof brewStages)[number];
+
+export const brewStageLabels: Record<BrewStage, string> = {
+  mash: 'Mash',
+  boil: 'Boil',
+  chill: 'Chill and pitch',
+  og: 'Original gravity',
+};
+
+export const brewStatuses = ['brewing', 'fermenting', 'packaged'] as const;
+export type BrewStatus = (typeof brewStatuses)[number];
+
+export const brewStatusLabels: Record<BrewStatus, string> = {
+  brewing: 'Brew day',
+  fermenting: 'Fermenting',
+  packaged: 'Packaged',
+};
+
+export const readingKinds = ['mash_temp', 'mash_ph', 'pre_boil_gravity', 'late_boil_gravity', 'pitch_temp', 'og'] as const;
+export type ReadingKind = (typeof readingKinds)[number];
+
+export const readingKindLabels: Record<ReadingKind, string> = {
+  mash_temp: 'Mash temperature',
+  mash_ph: 'Mash pH',
+  pre_boil_gravity: 'Pre-boil gravity',
+  late_boil_gravity: 'Late-boil gravity',
+  pitch_temp: 'Pitch temperature',
+  og: 'Original gravity',
+};
+
+/** Where each reading is taken. */
+export const readingStage: Record<ReadingKind, BrewStage> = {
+  mash_temp: 'mash',
+  mash_ph: 'mash',
+  pre_boil_gravity: 'boil',
+  late_boil_gravity: 'boil',
+  pitch_temp: 'chill',
+  og: 'og',
+};
+
+/** Which instruments can take each reading. */
+export const readingInstrumentKinds: Record<ReadingKind, readonly InstrumentKind[]> = {
+  mash_temp: ['thermometer'],
+  mash_ph: ['ph_meter'],
+  pre_boil_gravity: ['refractometer', 'hydrometer'],
+  late_boil_gravity: ['refractometer', 'hydrometer'],
+  pitch_temp: ['thermometer'],
+  og: ['hydrometer'],
+};
+
+/** What the corrected value of a reading measures. */
+export type ReadingQuantity = 'temperature' | 'ph' | 'gravity';
+export const readingQuantity: Record<ReadingKind, ReadingQuantity> = {
+  mash_temp: 'temperature',
+  mash_ph: 'ph',
+  pre_boil_gravity: 'gravity',
+  late_boil_gravity: 'gravity',
+  pitch_temp: 'temperature',
+  og: 'gravity',
+};
+
+export const gravityMethods = ['refractometer', 'hydrometer'] as const;
+export type GravityMethod = (typeof gravityMethods)[number];
+
+// ---------------------------------------------------------------------------------------------
+// Field schemas with a brewer's messages
+
+const f = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
+const gal = (l: number) => `${Number((l / 3.785411784).toFixed(2))} gal`;
+
+function num(what: string, label: string) {
+  return z.number({
+    error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${what}.` : `${label} must be a number.`),
+  });
+}
+
+function ranged(what: string, label: string, min: number, max: number, message: string) {
+  return num(what, label)
+    .refine((v) => v >= min, { error: message, abort: true })
+    .refine((v) => v <= max, { error: message, abort: true });
+}
+
+export const READING_LIMITS = {
+  mashTempC: { min: 0, max: 100 },
+  pitchTempC: { min: -5, max: 60 },
+  ph: { min: 3, max: 9 },
+  brix: { min: 0, max: 40 },
+  sg: { min: 1, max: 1.2 },
+  sampleTempC: { min: 0, max: 60 },
+  volumeL: { max: 2000 },
+  minutesLeft: { max: 360 },
+} as const;
+
+const L = READING_LIMITS;
+
+export const mashTempSchema = ranged(
+  'the mash temperature',
+  'Mash temperature',
+  L.mashTempC.min,
+  L.mashTempC.max,
+  `A mash reads between ${L.mashTempC.min} and ${L.mashTempC.max} °C (${f(L.mashTempC.min)} and ${f(L.mashTempC.max)}). Check the thermometer.`,
+);
+
+export const pitchTempSchema = ranged(
+  'the wort temperature',
+  'Wort temperature',
+  L.pitchTempC.min,
+  L.pitchTempC.max,
+  `Chilled wort reads between ${L.pitchTempC.min} and ${L.pitchTempC.max} °C (${f(L.pitchTempC.min)} and ${f(L.pitchTempC.max)}). Check the thermometer.`,
+);
+
+export const phSchema = ranged(
+  'the pH',
+  'pH',
+  L.ph.min,
+  L.ph.max,
+  `A mash reads between pH ${L.ph.min} and ${L.ph.max}; anything else is a misreading or a meter fault. Check the meter.`,
+);
+
+export const brixSchema = ranged(
+  'the Brix reading',
+  'Brix',
+  L.brix.min,
+  L.brix.max,
+  `A brewing refractometer reads ${L.brix.min} to ${L.brix.max} °Bx. Check the reading.`,
+);
+
+export const wortSgSchema = ranged(
+  'the hydrometer reading',
+  'Hydrometer reading',
+  L.sg.min,
+  L.sg.max,
+  'Unfermented wort reads between 1.000 and 1.200 on a hydrometer. Check the reading.',
+);
+
+export const sampleTempSchema = ranged(
+  'the sample temperature',
+  'Sample temperature',
+  L.sampleTempC.min,
+  L.sampleTempC.max,
+  `Read the sample between ${L.sampleTempC.min} and ${L.sampleTempC.max} °C (${f(L.sampleTempC.min)} and ${f(L.sampleTempC.max)}): a hydrometer cannot be read in hot wort. Cool the sample first.`,
+);
+
+export const kettleVolumeSchema = num('the volume', 'Volume')
+  .refine((v) => v > 0, { error: 'The volume must be more than 0.', abort: true })
+  .refine((v) => v <= L.volumeL.max, { error: `A volume above ${L.volumeL.max} L (${gal(L.volumeL.max)}) is beyond a home brewery. Check the number.`, abort: true });
+
+export const minutesLeftSchema = num('the minutes left', 'Minutes left')
+  .refine((v) => v >= 0, { error: 'Minutes left cannot be below 0. Enter 0 if the boil has ended.', abort: true })
+  .refine((v) => v <= L.minutesLeft.max, { error: `Minutes left above ${L.minutesLeft.max} is longer than any boil. Check the number.`, abort: true });
+
+const noteSchema = z.string({ error: 'The note must be text.' }).trim().max(1000, { error: 'Use at most 1000 characters.' }).default('');
+const instrumentIdSchema = z
+  .number({ error: 'Pick an instrument.' })
+  .int({ error: 'Pick an instrument.' })
+  .positive({ error: 'Pick an instrument.' })
+  .nullable()
+  .default(null);
+/** When the reading was taken; the server's clock when left out. Not in the future. */
+const takenAtSchema = z.iso
+  .datetime({ offset: true, error: 'Give the time as an ISO date and time.' })
+  .refine((s) => Date.parse(s) <= Date.now() + 5 * 60_000, { error: 'The reading cannot be taken in the future.' })
+  .optional();
+
+// ---------------------------------------------------------------------------------------------
+// Readings
+
+const base = { instrumentId: instrumentIdSchema, takenAt: takenAtSchema, note: noteSchema };
+
+/** A gravity read either way: Brix on a refractometer, or SG and sample temperature on a hydrometer. */
+const gravityFields = {
+  method: z.enum(gravityMethods, { error: 'Choose refractometer or hydrometer.' }),
+  brix: brixSchema.optional(),
+  sg: wortSgSchema.optional(),
+  sampleTempC: sampleTempSchema.optional(),
+};
+
+function requireGravity(v: { method?: GravityMethod; brix?: number; sg?: number; sampleTempC?: number }, ctx: z.RefinementCtx) {
+  if (v.method === 'refractometer' && v.brix === undefined) {
+    ctx.addIssue({ code: 'custom', path: ['brix'], message: 'Enter the Brix reading.', input: v });
+  }
+  if (v.method === 'hydrometer') {
+    if (v.sg === undefined) ctx.addIssue({ code: 'custom', path: ['sg'], message: 'Enter the hydrometer reading.', input: v });
+    if (v.sampleTempC === undefined) ctx.addIssue({ code: 'custom', path: ['sampleTempC'], message: 'Enter the sample temperature.', input: v });
+  }
+}
+
+export const mashTempReadingSchema = z.object({ ...base, kind: z.literal('mash_temp'), tempC: mashTempSchema });
+export const mashPhReadingSchema = z.object({ ...base, kind: z.literal('mash_ph'), ph: phSchema });
+export const preBoilReadingSchema = z
+  .object({ ...base, kind: z.literal('pre_boil_gravity'), ...gravityFields, volumeL: kettleVolumeSchema.optional() })
+  .superRefine(requireGravity);
+export const lateBoilReadingSchema = z
+  .object({ ...base, kind: z.literal('late_boil_gravity'), ...gravityFields, volumeL: kettleVolumeSchema, minutesLeft: minutesLeftSchema })
+  .superRefine(requireGravity);
+export const pitchTempReadingSchema = z.object({
+  ...base,
+  kind: z.literal('pitch_temp'),
+  tempC: pitchTempSchema,
+  /** The yeast went in with this reading: sets the brew day's pitch time when not yet set. */
+  pitched: z.boolean({ error: 'Say whether the yeast went in.' }).default(true),
+});
+export const ogReadingSchema = z.object({
+  ...base,
+  kind: z.literal('og'),
+  sg: wortSgSchema,
+  sampleTempC: sampleTempSchema,
+  /** Litres that went into the fermenter, cold. */
+  volumeL: kettleVolumeSchema.optional(),
+});
+
+export const readingInputSchema = z.discriminatedUnion(
+  'kind',
+  [mashTempReadingSchema, mashPhReadingSchema, preBoilReadingSchema, lateBoilReadingSchema, pitchTempReadingSchema, ogReadingSchema],
+  { error: 'Choose what was read: mash temperature, mash pH, pre-boil or late-boil gravity, pitch temperature or OG.' },
+);
+export type ReadingInput = z.input<typeof readingInputSchema>;
+export type ReadingBody = z.output<typeof readingInputSchema>;
+
+/** The brewer's numbers of a reading, as stored (everything they typed except the instrument and note). */
+export type ReadingRaw = Record<string, number | boolean | string>;
+
+// ---------------------------------------------------------------------------------------------
+// Brew days
+
+const nameSchema = z.string({ error: 'Give the brew day a name.' }).trim().min(1, { error: 'Give the brew day a name.' }).max(120, { error: 'Use at most 120 characters.' });
+const dateSchema = z
+  .string({ error: 'Enter the date.' })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'Enter a date as YYYY-MM-DD.' })
+  .pipe(z.iso.date({ error: 'Enter a real calendar date.' }));
+
+export const startBrewSchema = z.object({
+  recipeId: z.number({ error: 'Choose a recipe.' }).int({ error: 'Choose a recipe.' }).positive({ error: 'Choose a recipe.' }),
+  /** Defaults to the recipe's name and today's date. */
+  name: nameSchema.optional(),
+  brewedOn: dateSchema.optional(),
+});
+export type StartBrewInput = z.input<typeof startBrewSchema>;
+
+export const updateBrewSchema = z.object({
+  name: nameSchema.optional(),
+  brewedOn: dateSchema.optional(),
+  status: z.enum(brewStatuses, { error: 'Choose brew day, fermenting or packaged.' }).optional(),
+  notes: z.string().trim().max(5000, { error: 'Use at most 5000 characters.' }).optional(),
+  /** The boil-off rate used today, when it differs from the equipment profile's. */
+  boilOffLPerHour: num('the boil-off rate', 'Boil-off rate')
+    .refine((v) => v >= 0, { error: 'The boil-off rate cannot be negative.', abort: true })
+    .refine((v) => v <= 30, { error: 'A boil-off above 30 L (7.93 gal) per hour is beyond a home kettle.', abort: true })
+    .optional(),
+});
+export type UpdateBrewInput = z.input<typeof updateBrewSchema>;
+
+export const brewStageActions = ['start', 'complete', 'skip'] as const;
+export type BrewStageAction = (typeof brewStageActions)[number];
+export const stageActionSchema = z.object({
+  action: z.enum(brewStageActions, { error: 'Choose start, complete or skip.' }),
+});
+export const stageParamsSchema = z.object({
+  id: z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' }),
+  stage: z.enum(brewStages, { error: 'Unknown stage: use mash, boil, chill or og.' }),
+});
+
+export const listBrewsQuerySchema = z.object({
+  scope: z.enum(['mine', 'shared'], { error: 'Choose mine or shared.' }).default('mine'),
+});
+
+export const brewNoteInputSchema = z.object({
+  body: z.string({ error: 'Write the note.' }).trim().min(1, { error: 'Write the note.' }).max(2000, { error: 'Use at most 2000 characters.' }),
+  stage: z.enum(brewStages, { error: 'Unknown stage.' }).nullable().default(null),
+});
+export type BrewNoteInput = z.input<typeof brewNoteInputSchema>;
+
+const idNum = z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' });
+export const readingParamsSchema = z.object({ id: idNum, readingId: idNum });
+export const photoParamsSchema = z.object({ id: idNum, readingId: idNum, photoId: idNum });
+export const noteParamsSchema = z.object({ id: idNum, noteId: idNum });
+
+// ---------------------------------------------------------------------------------------------
+// Decisions: the choice after a late-boil check
+
+export const choiceKinds = ['as-is', 'extract', 'water', 'boil-longer', 'own'] as const;
+export type ChoiceKind = (typeof choiceKinds)[number];
+export const extractKinds = ['dme', 'lme', 'sucrose', 'dextrose'] as const;
+
+export const decisionChoiceSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('as-is') }),
+    z.object({ kind: z.literal('extract'), extract: z.enum(extractKinds, { error: 'Choose dry or liquid malt extract, table sugar or dextrose.' }) }),
+    z.object({ kind: z.literal('water') }),
+    z.object({ kind: z.literal('boil-longer') }),
+    z.object({
+      kind: z.literal('own'),
+      description: z
+        .string({ error: 'Say what you did instead.' })
+        .trim()
+        .min(1, { error: 'Say what you did instead.' })
+        .max(500, { error: 'Use at most 500 characters.' }),
+    }),
+  ],
+  { error: 'Choose one of the options, or describe your own action.' },
+);
+export type DecisionChoice = z.output<typeof decisionChoiceSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Sharing
+
+export const brewSharingSchema = z.object({
+  clubIds: z
+    .array(z.number({ error: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
+    .max(50, { error: 'Share with at most 50 clubs.' }),
+});
+export type BrewSharingInput = z.input<typeof brewSharingSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Photos
+
+export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
+export const photoMimeTypes = ['image/jpeg', 'image/png', 'image/webp'] as const;
+export type PhotoMime = (typeof photoMimeTypes)[number];
+
+export interface ReadingPhoto {
+  id: number;
+  readingId: number;
+  mime: PhotoMime;
+  sizeBytes: number;
+  sha256: string;
+  createdAt: string;
+  /** Where the image is served, to those who may read the brew day. */
+  url: string;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Responses
+
+/** A correction as an instrument applied it (see shared/instruments). */
+export interface ReadingCorrection {
+  [key: string]: unknown;
+}
+
+export interface BrewReading {
+  id: number;
+  brewId: number;
+  stage: BrewStage;
+  kind: ReadingKind;
+  quantity: ReadingQuantity;
+  instrumentId: number | null;
+  /** The instrument as it was calibrated when the reading was taken. */
+  instrument: InstrumentSnapshot | null;
+  raw: ReadingRaw;
+  /** Corrected gravity (SG), temperature (°C) or pH. */
+  corrected: number;
+  correction: ReadingCorrection | null;
+  warnings: string[];
+  /** The kettle or fermenter volume taken with the reading, litres. */
+  volumeL: number | null;
+  takenAt: string;
+  note: string;
+  /** Set when the brewer re-applied a newer calibration on purpose. */
+  recomputedAt: string | null;
+  recomputedFrom: { corrected: number; instrument: InstrumentSnapshot | null; correction: ReadingCorrection | null } | null;
+  photos: ReadingPhoto[];
+}
+
+export interface BrewStageState {
+  stage: BrewStage;
+  startedAt: string | null;
+  completedAt: string | null;
+  skippedAt: string | null;
+}
+
+export interface BrewDecision {
+  id: number;
+  brewId: number;
+  /** What the brewer entered, as validated: the late-boil check's input. */
+  input: Record<string, unknown>;
+  /** The check recomputed on the server from `input`. */
+  result: Record<string, unknown>;
+  choice: DecisionChoice;
+  /** The option chosen, from `result` (null for the brewer's own action). */
+  chosen: (Record<string, unknown> & { kind: string }) | null;
+  note: string;
+  decidedAt: string;
+}
+
+export type BrewNoteKind = 'note' | 'recompute';
+
+export interface BrewNote {
+  id: number;
+  brewId: number;
+  kind: BrewNoteKind;
+  stage: BrewStage | null;
+  body: string;
+  /** For a recompute: the reading and its old and new values. */
+  details: Record<string, unknown> | null;
+  authorId: number | null;
+  createdAt: string;
+}
+
+export interface BrewSummary {
+  id: number;
+  name: string;
+  status: BrewStatus;
+  brewedOn: string;
+  recipeId: number | null;
+  recipeName: string;
+  ownerId: number;
+  ownerName: string;
+  isOwner: boolean;
+  currentStage: BrewStage;
+  targetOg: number;
+  /** The latest OG reading, corrected; null until one is taken. */
+  og: number | null;
+  pitchedAt: string | null;
+  sharedWithClubIds: number[];
+  createdAt: string;
+  updatedAt: string;
+}
+
+export type DeviationCode =
+  | 'mash-ph-low'
+  | 'mash-ph-high'
+  | 'mash-temp'
+  | 'og-low'
+  | 'og-high'
+  | 'volume-low'
+  | 'volume-high'
+  | 'pitch-too-warm'
+  | 'accepted-off-target'
+  | 'instrument-uncalibrated'
+  | 'instrument-overdue';
+
+export interface BrewDeviation {
+  code: DeviationCode;
+  stage: BrewStage;
+  readingId: number | null;
+  decisionId: number | null;
+  /** SI: °C, SG, pH or litres, per `quantity`. */
+  expected: number | null;
+  actual: number | null;
+  quantity: 'temperature' | 'gravity' | 'ph' | 'volume' | null;
+  /** For instrument deviations. */
+  instrumentName: string | null;
+  /** A plain sentence in metric units and SG; the client words it in the brewer's units. */
+  message: string;
+}
+
+export interface BrewDetail extends BrewSummary {
+  targets: RecipeTargets;
+  equipment: EquipmentProfile;
+  /** The boil-off rate for today: the equipment profile's, unless the brewer changed it. */
+  boilOffLPerHour: number;
+  notes: string;
+  stages: BrewStageState[];
+  readings: BrewReading[];
+  decisions: BrewDecision[];
+  log: BrewNote[];
+  deviations: BrewDeviation[];
+  permissions: { edit: boolean; share: boolean; delete: boolean; comment: boolean };
+}
+
+export interface BrewSharing {
+  brewId: number;
+  clubIds: number[];
+}
