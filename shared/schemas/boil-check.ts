@@ -1,0 +1,150 @@
+/**
+ * The late-boil check: what the brewer enters (`boilCheckInputSchema`, used by the form and by a
+ * saved decision) and the public calculator's body (`boilCorrectionRequestSchema`, the raw
+ * `boilCorrection` input). Everything is SI and specific gravity; forms convert at their edges.
+ * The limits are shared/brewmath's (Brix 0–40, SG 0.980–1.200, volume above 0, minutes not
+ * below 0) plus upper bounds that catch typos; messages quote metric and US units because the
+ * same message reaches brewers of either preference.
+ */
+import { z } from 'zod';
+import { BrewMathError, BRIX_MAX, BRIX_MIN, EXTRACT_KINDS, SG_MAX, SG_MIN, WCF_MAX, WCF_MIN, type ExtractKind } from '../brewmath';
+import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../brewmath/extract';
+import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckInput } from '../boil-check';
+
+/** Beyond a home or club brewery: most likely a typo (the same bounds as a recipe). */
+export const BOIL_CHECK_LIMITS = {
+  volumeL: 2000,
+  minutesLeft: 360,
+  boilOffLPerHour: 100,
+  coolingShrinkage: 0.1,
+} as const;
+
+const gal = (litres: number) => `${Number((litres / 3.785411784).toFixed(2))} gal`;
+const f = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
+const sg3 = (sg: number) => sg.toFixed(3);
+
+/** A number with a brewer's message for missing, not-a-number and out-of-range input. */
+function number(what: string, label: string, inRange: (v: number) => boolean, rangeMessage: (v: number) => string) {
+  return z
+    .number({
+      error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${what}.` : `${label} must be a number.`),
+    })
+    .refine((v) => Number.isFinite(v), { error: `${label} must be a number.`, abort: true })
+    .refine(inRange, { error: (issue) => rangeMessage(issue.input as number), abort: true });
+}
+
+const volume = (what: string, label: string) =>
+  number(what, label, (v) => v > 0 && v <= BOIL_CHECK_LIMITS.volumeL, (v) =>
+    v <= 0
+      ? `${label} must be more than 0.`
+      : `${label} above ${BOIL_CHECK_LIMITS.volumeL} L (${gal(BOIL_CHECK_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
+  );
+
+const wortGravity = (what: string, label: string) =>
+  number(what, label, (v) => v >= SG_MIN && v <= SG_MAX, (v) =>
+    `${label} ${sg3(v)} is outside ${sg3(SG_MIN)} to ${sg3(SG_MAX)}, the range wort can read. Check the reading.`,
+  );
+
+export const brixSchema = number('the Brix reading', 'Brix', (v) => v >= BRIX_MIN && v <= BRIX_MAX, (v) =>
+  `Brix ${v} is outside ${BRIX_MIN} to ${BRIX_MAX} °Bx, the scale of a brewing refractometer. Check the reading.`,
+);
+export const wcfSchema = number('the wort correction factor', 'Wort correction factor', (v) => v >= WCF_MIN && v <= WCF_MAX, (v) =>
+  `Wort correction factor ${v} is outside ${WCF_MIN} to ${WCF_MAX}; most refractometers need about 1.00 to 1.10.`,
+);
+export const minutesLeftSchema = number('the minutes left in the boil', 'Minutes left', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.minutesLeft, (v) =>
+  v < 0 ? 'Minutes left cannot be below 0.' : `Minutes left must be at most ${BOIL_CHECK_LIMITS.minutesLeft}.`,
+);
+export const boilOffSchema = number('the boil-off rate', 'Boil-off rate', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.boilOffLPerHour, (v) =>
+  v < 0
+    ? 'Boil-off rate cannot be below 0.'
+    : `Boil-off rate above ${BOIL_CHECK_LIMITS.boilOffLPerHour} L/h (${gal(BOIL_CHECK_LIMITS.boilOffLPerHour)}/h) is more than Wortwise handles. Check the number.`,
+);
+export const targetSgSchema = number('the target OG', 'Target OG', (v) => v > 1 && v <= SG_MAX, (v) =>
+  `Target OG ${sg3(v)} must be above 1.000 and at most ${sg3(SG_MAX)}.`,
+);
+const shrinkageSchema = number('the cooling shrinkage', 'Cooling shrinkage', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.coolingShrinkage, () =>
+  'Cooling shrinkage must be between 0 and 10 % (about 4 % is usual).',
+);
+const potentialSchema = number('the extract potential', 'Potential', (v) => v >= POTENTIAL_MIN_POINTS_L_PER_KG && v <= POTENTIAL_MAX_POINTS_L_PER_KG, () =>
+  `Potential must be between ${POTENTIAL_MIN_POINTS_L_PER_KG} and ${POTENTIAL_MAX_POINTS_L_PER_KG} points·L/kg (about 6 to 54 points per lb per gallon); table sugar is about 384 (46).`,
+);
+export const potentialsSchema = z.object({
+  dme: potentialSchema.optional(),
+  lme: potentialSchema.optional(),
+  sucrose: potentialSchema.optional(),
+  dextrose: potentialSchema.optional(),
+});
+
+export const extractKindSchema = z.enum(EXTRACT_KINDS as [ExtractKind, ...ExtractKind[]], {
+  error: 'Choose dry malt extract, liquid malt extract, table sugar or dextrose.',
+});
+
+export const refractometerReadingSchema = z.object({
+  kind: z.literal('refractometer'),
+  brix: brixSchema,
+  wcf: wcfSchema.optional(),
+});
+
+export const hydrometerReadingSchema = z.object({
+  kind: z.literal('hydrometer'),
+  sg: wortGravity('the hydrometer reading', 'Hydrometer reading'),
+  sampleTempC: number('the sample temperature', 'Sample temperature', (v) => v >= 0 && v <= 100, () =>
+    `Sample temperature must be between 0 and 100 °C (${f(0)} and ${f(100)}). Cool the sample before reading it.`,
+  ),
+  calibrationTempC: number('the calibration temperature', 'Calibration temperature', (v) => v >= 0 && v <= 40, () =>
+    `Calibration temperature must be between 0 and 40 °C (${f(0)} and ${f(40)}); most hydrometers say ${DEFAULT_CALIBRATION_TEMP_C} °C or 60 °F on the scale.`,
+  ).optional(),
+});
+
+export const boilCheckReadingSchema = z.discriminatedUnion('kind', [refractometerReadingSchema, hydrometerReadingSchema], {
+  error: 'Choose a refractometer or a hydrometer reading.',
+});
+
+const boilCheckFields = z.object({
+  reading: boilCheckReadingSchema,
+  volumeL: volume('the volume in the kettle', 'Kettle volume'),
+  minutesLeft: minutesLeftSchema,
+  boilOffLPerHour: boilOffSchema,
+  targetSg: targetSgSchema,
+  targetVolumeL: volume("the recipe's volume", "The recipe's volume").optional(),
+  targetFg: wortGravity('the target FG', 'Target FG').optional(),
+  extractsOnHand: z.array(extractKindSchema).max(EXTRACT_KINDS.length).default([...EXTRACT_KINDS]),
+  potentials: potentialsSchema.optional(),
+  kettleCapacityL: volume('the kettle size', 'Kettle size').optional(),
+  coolingShrinkage: shrinkageSchema.optional(),
+});
+
+/**
+ * What the brewer enters. Once every field is valid on its own, the check itself runs, so an
+ * impossible combination (a boil-off that would empty the kettle, an FG above the OG) comes
+ * back as a message under the input that causes it.
+ */
+export const boilCheckInputSchema = boilCheckFields.superRefine((input, ctx) => {
+  try {
+    runBoilCheck(input);
+  } catch (error) {
+    if (!(error instanceof BrewMathError)) throw error;
+    ctx.addIssue({ code: 'custom', message: error.message, path: error.field ? error.field.split('.') : [] });
+  }
+});
+export type BoilCheckFormInput = z.input<typeof boilCheckInputSchema>;
+export type BoilCheckParsed = z.output<typeof boilCheckInputSchema>;
+
+// The parsed input is exactly what runBoilCheck takes.
+const _parsedIsInput = (parsed: BoilCheckParsed): BoilCheckInput => parsed;
+void _parsedIsInput;
+
+/** POST /api/calc/boil-correction: the `boilCorrection` input as JSON. */
+export const boilCorrectionRequestSchema = z.object({
+  volumeL: volume('the volume in the kettle', 'Kettle volume'),
+  sg: wortGravity('the current gravity', 'Current gravity'),
+  minutesLeft: minutesLeftSchema,
+  boilOffLPerHour: boilOffSchema,
+  targetSg: targetSgSchema,
+  targetVolumeL: volume("the recipe's volume", "The recipe's volume").optional(),
+  targetFg: wortGravity('the target FG', 'Target FG').optional(),
+  extract: potentialsSchema.optional(),
+  kettleCapacityL: volume('the kettle size', 'Kettle size').optional(),
+  coolingShrinkage: shrinkageSchema.optional(),
+});
+export type BoilCorrectionRequest = z.input<typeof boilCorrectionRequestSchema>;
