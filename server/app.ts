@@ -8,6 +8,7 @@ import { authRouter } from './auth/router';
 import { loadUser } from './auth/session';
 import type { AppContext } from './context';
 import { clubsRouter, invitationsRouter } from './clubs/router';
+import { calcRouter } from './calc/router';
 import { healthRouter } from './health/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { passwordResetRouter } from './password-reset/router';
@@ -27,6 +28,7 @@ export function createApp(ctx: AppContext) {
 
   const api = express.Router();
   api.use('/health', healthRouter(pool));
+  api.use('/calc', calcRouter(env));
   api.use(loadUser(db, env));
   api.use('/auth/password-reset', passwordResetRouter(ctx));
   api.use('/auth', authRouter(db, env));
