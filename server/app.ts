@@ -12,6 +12,7 @@ import { calcRouter } from './calc/router';
 import { healthRouter } from './health/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { passwordResetRouter } from './password-reset/router';
+import { recipesRouter } from './recipes/router';
 
 const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
 
@@ -35,6 +36,7 @@ export function createApp(ctx: AppContext) {
   api.use('/clubs', clubsRouter(ctx));
   api.use('/invitations', invitationsRouter(ctx));
   api.use('/admin', adminRouter(ctx));
+  api.use('/recipes', recipesRouter(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

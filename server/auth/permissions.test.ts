@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { can, canInClub, requireAccess, requireClubAccess, type Actor, type ResourceAction } from './permissions';
+import { can, canInClub, canShareWithClub, requireAccess, requireClubAccess, type Actor, type ResourceAction } from './permissions';
 import { Forbidden, NotFound } from '../lib/errors';
 
 // A brew day owned by user 1 and shared with club 10.
@@ -75,5 +75,21 @@ describe('club actions', () => {
     expect(() => requireClubAccess(actors.mentorOfClub, 'invite', 10)).toThrow(Forbidden);
     expect(() => requireClubAccess(actors.organiser, 'invite', 10)).not.toThrow();
     expect(() => requireClubAccess(actors.siteAdmin, 'leave', 10)).toThrow(Forbidden);
+  });
+});
+
+describe('sharing with a club', () => {
+  it.each([
+    ['owner', 'Y-'],
+    ['otherBrewer', '--'],
+    ['clubMember', 'Y-'],
+    ['mentorOfClub', 'Y-'],
+    ['mentorOfOtherClub', '-Y'],
+    ['organiser', 'Y-'],
+    ['siteAdmin', '--'],
+    ['anonymous', '--'],
+  ])('%s may share into clubs 10 and 20: %s', (name, expected) => {
+    const got = [10, 20].map((clubId) => (canShareWithClub(actors[name], clubId) ? 'Y' : '-')).join('');
+    expect(got).toBe(expected);
   });
 });

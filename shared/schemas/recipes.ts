@@ -5,9 +5,10 @@
  * metric and US units, because the same message reaches brewers of either preference.
  */
 import { z } from 'zod';
+import { abvPercent, apparentAttenuation } from '../brewmath/abv';
 import { boilOffRateLPerHour } from '../brewmath/boil';
 import { BrewMathError } from '../brewmath/errors';
-import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../brewmath/extract';
+import { estimateOg, POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG, type FermentableKind } from '../brewmath/extract';
 import { LITRES_PER_US_GALLON } from '../brewmath/units';
 
 // ---------------------------------------------------------------------------------------------
@@ -471,3 +472,63 @@ export interface RecipeImportResult {
   /** Fields in the file that are not part of our format, left out of the saved recipe. */
   ignored: { path: string; message: string }[];
 }
+
+// ---------------------------------------------------------------------------------------------
+// Numbers derived from a recipe, the same on screen and in the API
+
+/**
+ * How our kinds map onto shared/brewmath's: only grain goes through the mash, so only grain is
+ * scaled by the brewhouse efficiency; extracts, sugar and "other" (honey, fruit, lactose)
+ * dissolve whole. Every recipe fermentable carries its own potential, so the extract kind chosen
+ * for sugar and other never supplies a default.
+ */
+const brewmathKind: Record<RecipeFermentableKind, FermentableKind> = {
+  grain: 'grain',
+  'dry-extract': 'dme',
+  'liquid-extract': 'lme',
+  sugar: 'sucrose',
+  other: 'sucrose',
+};
+
+export type OgEstimate = { og: number; reason?: undefined } | { og: null; reason: string };
+
+/**
+ * OG expected from the fermentables at the brewhouse efficiency, in the batch volume into the
+ * fermenter. Brewhouse efficiency is extract into the fermenter over the grain's laboratory
+ * extract, so the fermenter volume is the one it divides by
+ * (docs/decisions/0004-recipe-storage-and-versions.md).
+ */
+export function estimateRecipeOg(recipe: { fermentables?: readonly Partial<Record<keyof FermentableInput, unknown>>[]; efficiency?: unknown; batchVolumeL?: unknown }): OgEstimate {
+  const fermentables = recipe.fermentables ?? [];
+  if (fermentables.length === 0) return { og: null, reason: 'Add fermentables to see an estimate.' };
+  if (!isNum(recipe.batchVolumeL) || recipe.batchVolumeL <= 0) return { og: null, reason: 'Enter the batch volume to see an estimate.' };
+  if (!isNum(recipe.efficiency) || recipe.efficiency <= 0 || recipe.efficiency > 1) return { og: null, reason: 'Enter the brewhouse efficiency to see an estimate.' };
+  const mapped = [];
+  for (const f of fermentables) {
+    const kind = f.kind as RecipeFermentableKind;
+    if (!isNum(f.amountKg) || !isNum(f.potentialPointsLPerKg) || !(kind in brewmathKind)) {
+      return { og: null, reason: 'Complete every fermentable (amount and potential) to see an estimate.' };
+    }
+    mapped.push({ kg: f.amountKg, kind: brewmathKind[kind], potentialPointsLPerKg: f.potentialPointsLPerKg });
+  }
+  try {
+    return { og: estimateOg({ fermentables: mapped, efficiency: recipe.efficiency, volumeL: recipe.batchVolumeL }) };
+  } catch (error) {
+    if (error instanceof BrewMathError) return { og: null, reason: error.message };
+    throw error;
+  }
+}
+
+/** Simple ABV and apparent attenuation from target OG and FG, or null while they are not a pair. */
+export function targetAbv(targetOg: unknown, targetFg: unknown): { abvPercent: number; apparentAttenuation: number } | null {
+  if (!isNum(targetOg) || !isNum(targetFg)) return null;
+  try {
+    return { abvPercent: abvPercent(targetOg, targetFg), apparentAttenuation: apparentAttenuation(targetOg, targetFg) };
+  } catch (error) {
+    if (error instanceof BrewMathError) return null;
+    throw error;
+  }
+}
+
+/** How close the estimate must be to the target to call them in agreement: 2 gravity points (common practice, no source). */
+export const OG_AGREEMENT_SG = 0.002;

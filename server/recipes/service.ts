@@ -1,0 +1,360 @@
+/**
+ * Recipes: the targets a brew day is judged against. Every read and write goes through
+ * loadRecipeForActor, which asks server/auth/permissions.ts; writes that touch several rows run
+ * in one transaction; a save names the version it was edited from and is refused (409) when the
+ * stored recipe has moved on, so nobody's edits are overwritten silently.
+ */
+import { and, asc, count, desc, eq, inArray, like, ne, or, sql, type SQL } from 'drizzle-orm';
+import {
+  estimateRecipeOg,
+  targetAbv,
+  type ListRecipesQuery,
+  type Recipe,
+  type RecipeData,
+  type RecipeList,
+  type RecipeListItem,
+  type RecipeSharing,
+  type RecipeTargets,
+} from '@shared/schemas/recipes';
+import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
+import type { z } from 'zod';
+import { can, canShareWithClub, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
+import type { DbOrTx, Tx } from '../db/client';
+import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, users, type RecipeRow } from '../db/schema';
+import { BadRequest, Conflict, NotFound } from '../lib/errors';
+
+/** A recipe as stored, with its child rows and the clubs it is shared with. */
+export interface StoredRecipe {
+  row: RecipeRow;
+  ownerName: string;
+  data: RecipeData;
+  sharedWithClubIds: number[];
+}
+
+async function findStoredRecipe(db: DbOrTx, id: number): Promise<StoredRecipe | null> {
+  const [found] = await db
+    .select({ row: recipes, ownerName: users.displayName })
+    .from(recipes)
+    .innerJoin(users, eq(users.id, recipes.ownerId))
+    .where(eq(recipes.id, id));
+  if (!found) return null;
+  const [fermentables, hops, mashSteps, shares] = await Promise.all([
+    db.select().from(recipeFermentables).where(eq(recipeFermentables.recipeId, id)).orderBy(asc(recipeFermentables.position)),
+    db.select().from(recipeHops).where(eq(recipeHops.recipeId, id)).orderBy(asc(recipeHops.position)),
+    db.select().from(recipeMashSteps).where(eq(recipeMashSteps.recipeId, id)).orderBy(asc(recipeMashSteps.position)),
+    db.select({ clubId: recipeClubShares.clubId }).from(recipeClubShares).where(eq(recipeClubShares.recipeId, id)).orderBy(asc(recipeClubShares.clubId)),
+  ]);
+  const { row } = found;
+  return {
+    row,
+    ownerName: found.ownerName,
+    sharedWithClubIds: shares.map((s) => s.clubId),
+    data: {
+      name: row.name,
+      style: row.style,
+      notes: row.notes,
+      batchVolumeL: row.batchVolumeL,
+      preBoilVolumeL: row.preBoilVolumeL,
+      postBoilVolumeL: row.postBoilVolumeL,
+      boilMinutes: row.boilMinutes,
+      boilOffLPerHour: row.boilOffLPerHour,
+      efficiency: row.efficiency,
+      targetOg: row.targetOg,
+      targetFg: row.targetFg,
+      mashPhTarget: row.mashPhTarget,
+      fermentationTempMinC: row.fermentationTempMinC,
+      fermentationTempMaxC: row.fermentationTempMaxC,
+      yeast: { name: row.yeastName, amount: row.yeastAmount },
+      fermentables: fermentables.map((f) => ({ name: f.name, kind: f.kind, amountKg: f.amountKg, potentialPointsLPerKg: f.potentialPointsLPerKg })),
+      hops: hops.map((h) => ({ name: h.name, amountG: h.amountG, minutes: h.minutes, alphaAcidPercent: h.alphaAcidPercent })),
+      mashSteps: mashSteps.map((m) => ({ tempC: m.tempC, minutes: m.minutes })),
+    },
+  };
+}
+
+/**
+ * Loads a recipe for what the actor wants to do with it: 404 when they may not see it (another
+ * brewer's private recipe, or no such recipe), 403 when they may see but not do it (a club
+ * member editing a shared recipe). The brew-day code calls this before starting a brew day.
+ */
+export async function loadRecipeForActor(db: DbOrTx, actor: Actor | null, id: number, action: ResourceAction): Promise<StoredRecipe> {
+  const stored = await findStoredRecipe(db, id);
+  requireAccess(actor, action, stored && { ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds }, 'Recipe');
+  return stored!;
+}
+
+/** Only the clubs the viewer is in: a member never learns which other clubs see the recipe. */
+function visibleClubIds(actor: Actor, ownerId: number, clubIds: number[]) {
+  if (actor.id === ownerId) return clubIds;
+  return clubIds.filter((id) => actor.memberships.some((m) => m.clubId === id));
+}
+
+export function toRecipe(actor: Actor, stored: StoredRecipe): Recipe {
+  const { row, data } = stored;
+  const resource = { ownerId: row.ownerId, sharedWithClubIds: stored.sharedWithClubIds };
+  const abv = targetAbv(data.targetOg, data.targetFg);
+  return {
+    ...data,
+    id: row.id,
+    ownerId: row.ownerId,
+    ownerName: stored.ownerName,
+    version: row.version,
+    clonedFromId: row.clonedFromId,
+    sharedWithClubIds: visibleClubIds(actor, row.ownerId, stored.sharedWithClubIds),
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    permissions: {
+      edit: can(actor, 'update', resource),
+      share: can(actor, 'share', resource),
+      delete: can(actor, 'delete', resource),
+      clone: can(actor, 'clone', resource),
+    },
+    estimatedOg: estimateRecipeOg(data).og,
+    abvPercent: abv?.abvPercent ?? 0,
+    apparentAttenuation: abv?.apparentAttenuation ?? 0,
+  };
+}
+
+export async function getRecipe(db: DbOrTx, actor: Actor, id: number): Promise<Recipe> {
+  return toRecipe(actor, await loadRecipeForActor(db, actor, id, 'read'));
+}
+
+// ---------------------------------------------------------------------------------------------
+// Listing
+
+/** Recipes the actor may read: their own, and those shared with a club they are in. */
+function visibleTo(actor: Actor, scope: 'all' | 'mine' | 'shared'): SQL {
+  const mine = eq(recipes.ownerId, actor.id);
+  const clubIds = actor.memberships.map((m) => m.clubId);
+  const shared =
+    clubIds.length > 0
+      ? inArray(
+          recipes.id,
+          // A subquery, not a join, so a recipe shared with two of my clubs is listed once.
+          sql`(select ${recipeClubShares.recipeId} from ${recipeClubShares} where ${inArray(recipeClubShares.clubId, clubIds)})`,
+        )
+      : sql`false`;
+  if (scope === 'mine') return mine;
+  if (scope === 'shared') return and(ne(recipes.ownerId, actor.id), shared)!;
+  return or(mine, shared)!;
+}
+
+/** LIKE treats % and _ as wildcards; a brewer searching for "50%" means the characters. */
+function likePattern(q: string) {
+  return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+const sortColumns = {
+  name: recipes.name,
+  style: recipes.style,
+  og: recipes.targetOg,
+  abv: sql`(${recipes.targetOg} - ${recipes.targetFg})`,
+  updated: recipes.updatedAt,
+} as const;
+
+export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<typeof listRecipesQuerySchema>): Promise<RecipeList> {
+  const conditions: SQL[] = [visibleTo(actor, query.scope)];
+  if (query.q) {
+    const pattern = likePattern(query.q);
+    conditions.push(or(like(recipes.name, pattern), like(recipes.style, pattern))!);
+  }
+  const where = and(...conditions);
+  const dir = query.dir ?? (query.sort === 'updated' ? 'desc' : 'asc');
+  const order = dir === 'desc' ? desc : asc;
+  const [{ total }] = await db.select({ total: count() }).from(recipes).where(where);
+  const rows = await db
+    .select({
+      id: recipes.id,
+      name: recipes.name,
+      style: recipes.style,
+      ownerId: recipes.ownerId,
+      ownerName: users.displayName,
+      version: recipes.version,
+      batchVolumeL: recipes.batchVolumeL,
+      targetOg: recipes.targetOg,
+      targetFg: recipes.targetFg,
+      updatedAt: recipes.updatedAt,
+    })
+    .from(recipes)
+    .innerJoin(users, eq(users.id, recipes.ownerId))
+    .where(where)
+    .orderBy(order(sortColumns[query.sort]), order(recipes.id))
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const shares =
+    rows.length > 0
+      ? await db
+          .select({ recipeId: recipeClubShares.recipeId, clubId: recipeClubShares.clubId })
+          .from(recipeClubShares)
+          .where(inArray(recipeClubShares.recipeId, rows.map((r) => r.id)))
+          .orderBy(asc(recipeClubShares.clubId))
+      : [];
+  const items: RecipeListItem[] = rows.map((r) => ({
+    ...r,
+    isOwner: r.ownerId === actor.id,
+    abvPercent: targetAbv(r.targetOg, r.targetFg)?.abvPercent ?? 0,
+    sharedWithClubIds: visibleClubIds(
+      actor,
+      r.ownerId,
+      shares.filter((s) => s.recipeId === r.id).map((s) => s.clubId),
+    ),
+    updatedAt: r.updatedAt.toISOString(),
+  }));
+  return { items, total: Number(total), page: query.page, pageSize: query.pageSize };
+}
+export type { ListRecipesQuery };
+
+// ---------------------------------------------------------------------------------------------
+// Writing
+
+function columnsOf(data: RecipeData) {
+  return {
+    name: data.name,
+    style: data.style,
+    notes: data.notes,
+    batchVolumeL: data.batchVolumeL,
+    preBoilVolumeL: data.preBoilVolumeL,
+    postBoilVolumeL: data.postBoilVolumeL,
+    boilMinutes: data.boilMinutes,
+    boilOffLPerHour: data.boilOffLPerHour,
+    efficiency: data.efficiency,
+    targetOg: data.targetOg,
+    targetFg: data.targetFg,
+    mashPhTarget: data.mashPhTarget,
+    fermentationTempMinC: data.fermentationTempMinC,
+    fermentationTempMaxC: data.fermentationTempMaxC,
+    yeastName: data.yeast.name,
+    yeastAmount: data.yeast.amount,
+  };
+}
+
+async function insertChildren(tx: Tx, recipeId: number, data: RecipeData) {
+  if (data.fermentables.length > 0) {
+    await tx.insert(recipeFermentables).values(data.fermentables.map((f, position) => ({ recipeId, position, ...f })));
+  }
+  if (data.hops.length > 0) {
+    await tx.insert(recipeHops).values(data.hops.map((h, position) => ({ recipeId, position, ...h })));
+  }
+  if (data.mashSteps.length > 0) {
+    await tx.insert(recipeMashSteps).values(data.mashSteps.map((m, position) => ({ recipeId, position, ...m })));
+  }
+}
+
+/** A new private recipe owned by the actor; returns its id. */
+export async function createRecipe(db: DbOrTx, actor: Actor, data: RecipeData, clonedFromId: number | null = null): Promise<number> {
+  // Inside a caller's transaction (the demo seed) this is a savepoint.
+  return db.transaction(async (tx) => {
+    const [{ id }] = await tx
+      .insert(recipes)
+      .values({ ...columnsOf(data), ownerId: actor.id, clonedFromId })
+      .$returningId();
+    await insertChildren(tx, id, data);
+    return id;
+  });
+}
+
+function conflictMessage(editedVersion: number, current: { version: number; updatedAt: Date }) {
+  const when = current.updatedAt.toISOString().replace('T', ' ').slice(0, 16);
+  return (
+    `This recipe was saved somewhere else (another tab or device) after you opened it: you were editing version ${editedVersion}, ` +
+    `and version ${current.version} was saved at ${when} UTC. Your changes were not saved and nothing was overwritten. ` +
+    'Load the latest version to edit it, or save what you typed as a new recipe.'
+  );
+}
+
+/** Replaces the recipe's content, if `version` is still the stored one. */
+export async function updateRecipe(db: DbOrTx, actor: Actor, id: number, data: RecipeData & { version: number }): Promise<Recipe> {
+  await loadRecipeForActor(db, actor, id, 'update');
+  await db.transaction(async (tx) => {
+    // The version check and the write are one statement: of two saves from the same version,
+    // the row lock lets exactly one through.
+    const [result] = await tx
+      .update(recipes)
+      .set({ ...columnsOf(data), version: sql`${recipes.version} + 1`, updatedAt: new Date() })
+      .where(and(eq(recipes.id, id), eq(recipes.version, data.version)));
+    if (result.affectedRows === 0) {
+      const [current] = await tx.select({ version: recipes.version, updatedAt: recipes.updatedAt }).from(recipes).where(eq(recipes.id, id));
+      if (!current) throw new NotFound('Recipe was not found.');
+      throw new Conflict(conflictMessage(data.version, current), {
+        version: `You were editing version ${data.version}; the recipe is now at version ${current.version}.`,
+      });
+    }
+    await tx.delete(recipeFermentables).where(eq(recipeFermentables.recipeId, id));
+    await tx.delete(recipeHops).where(eq(recipeHops.recipeId, id));
+    await tx.delete(recipeMashSteps).where(eq(recipeMashSteps.recipeId, id));
+    await insertChildren(tx, id, data);
+  });
+  return getRecipe(db, actor, id);
+}
+
+export async function deleteRecipe(db: DbOrTx, actor: Actor, id: number): Promise<void> {
+  await loadRecipeForActor(db, actor, id, 'delete');
+  // Child rows and shares go with it (ON DELETE CASCADE). Brew days keep their own snapshot.
+  await db.delete(recipes).where(eq(recipes.id, id));
+}
+
+/** A private copy owned by the actor, remembering where it came from. */
+export async function cloneRecipe(db: DbOrTx, actor: Actor, id: number): Promise<Recipe> {
+  const source = await loadRecipeForActor(db, actor, id, 'clone');
+  const suffix = ' (copy)';
+  const name = source.data.name.length + suffix.length > 120 ? source.data.name.slice(0, 120 - suffix.length) + suffix : source.data.name + suffix;
+  const newId = await createRecipe(db, actor, { ...source.data, name }, id);
+  return getRecipe(db, actor, newId);
+}
+
+/**
+ * Replaces the set of clubs the recipe is shared with (empty = private). Each club must be one
+ * the owner belongs to. Sharing is not an edit of the recipe, so the version stays.
+ */
+export async function setRecipeSharing(db: DbOrTx, actor: Actor, id: number, clubIds: number[]): Promise<RecipeSharing> {
+  await loadRecipeForActor(db, actor, id, 'share');
+  const unique = [...new Set(clubIds)].sort((a, b) => a - b);
+  const fields: Record<string, string> = {};
+  clubIds.forEach((clubId, i) => {
+    if (!canShareWithClub(actor, clubId)) fields[`clubIds.${i}`] = 'You can only share with a club you belong to.';
+  });
+  if (Object.keys(fields).length > 0) throw new BadRequest('You can only share with clubs you belong to.', fields);
+  await db.transaction(async (tx) => {
+    const existing = await tx.select({ clubId: recipeClubShares.clubId }).from(recipeClubShares).where(eq(recipeClubShares.recipeId, id));
+    const keep = new Set(unique);
+    const gone = existing.map((e) => e.clubId).filter((c) => !keep.has(c));
+    if (gone.length > 0) await tx.delete(recipeClubShares).where(and(eq(recipeClubShares.recipeId, id), inArray(recipeClubShares.clubId, gone)));
+    const had = new Set(existing.map((e) => e.clubId));
+    const added = unique.filter((c) => !had.has(c));
+    // Clubs shared earlier keep their original shared_at.
+    if (added.length > 0) await tx.insert(recipeClubShares).values(added.map((clubId) => ({ recipeId: id, clubId })));
+  });
+  return { recipeId: id, clubIds: unique };
+}
+
+// ---------------------------------------------------------------------------------------------
+// The brew day's snapshot
+
+/**
+ * The targets a brew day is judged against, as they are now. The brew day stores this value;
+ * later edits of the recipe make a new version and never reach a stored snapshot. No permission
+ * check here: call loadRecipeForActor(db, user, id, 'read') first.
+ */
+export async function getRecipeTargets(db: DbOrTx, recipeId: number): Promise<RecipeTargets> {
+  const stored = await findStoredRecipe(db, recipeId);
+  if (!stored) throw new NotFound('Recipe was not found.');
+  const { row, data } = stored;
+  return {
+    recipeId: row.id,
+    recipeVersion: row.version,
+    name: data.name,
+    style: data.style,
+    batchVolumeL: data.batchVolumeL,
+    preBoilVolumeL: data.preBoilVolumeL,
+    postBoilVolumeL: data.postBoilVolumeL,
+    boilMinutes: data.boilMinutes,
+    boilOffLPerHour: data.boilOffLPerHour,
+    efficiency: data.efficiency,
+    targetOg: data.targetOg,
+    targetFg: data.targetFg,
+    mashPhTarget: data.mashPhTarget,
+    mashSteps: data.mashSteps.map((m) => ({ tempC: m.tempC, minutes: m.minutes })),
+    fermentationTempMinC: data.fermentationTempMinC,
+    fermentationTempMaxC: data.fermentationTempMaxC,
+  };
+}
