@@ -1,2 +1,3 @@
 // Each feature registers its demo data here, in order (recipes before brew days, and so on).
+import './recipes/demo-seed';
 export {};
