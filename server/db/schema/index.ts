@@ -5,3 +5,4 @@ export * from './password-reset';
 export * from './recipes';
 export * from './brews';
 export * from './instruments';
+export * from './fermentation';
