@@ -5,11 +5,14 @@ import express from 'express';
 import helmet from 'helmet';
 import { adminRouter } from './admin/router';
 import { authRouter } from './auth/router';
+import { brewsRouter } from './brews/router';
 import { loadUser } from './auth/session';
 import type { AppContext } from './context';
 import { clubsRouter, invitationsRouter } from './clubs/router';
 import { calcRouter } from './calc/router';
+import { equipmentRouter } from './equipment/router';
 import { healthRouter } from './health/router';
+import { instrumentsRouter } from './instruments/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { passwordResetRouter } from './password-reset/router';
 import { recipesRouter } from './recipes/router';
@@ -37,6 +40,9 @@ export function createApp(ctx: AppContext) {
   api.use('/invitations', invitationsRouter(ctx));
   api.use('/admin', adminRouter(ctx));
   api.use('/recipes', recipesRouter(ctx));
+  api.use('/instruments', instrumentsRouter(db));
+  api.use('/equipment', equipmentRouter(db));
+  api.use('/brews', brewsRouter(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
 

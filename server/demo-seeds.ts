@@ -1,3 +1,4 @@
 // Each feature registers its demo data here, in order (recipes before brew days, and so on).
 import './recipes/demo-seed';
+import './instruments/demo-seed';
 export {};

@@ -222,7 +222,7 @@ const setCalibration = z.object({
   note: z.string().trim().max(200, { error: 'Use at most 200 characters.' }).nullish(),
 });
 
-export const calibrateInstrumentSchema = z.union([wcfPairsCalibration, thermometerCheckCalibration, phTwoPointCalibration, setCalibration], {
+export const calibrateInstrumentSchema = z.discriminatedUnion('method', [wcfPairsCalibration, thermometerCheckCalibration, phTwoPointCalibration, setCalibration], {
   error: 'Choose how the instrument was calibrated.',
 });
 export type CalibrateInstrumentInput = z.input<typeof calibrateInstrumentSchema>;
@@ -325,7 +325,7 @@ export interface CalibrateResponse {
 
 /** Common-practice defaults used until a brewer saves their own (common practice, no source). */
 export const DEFAULT_EQUIPMENT = {
-  name: 'Typical 25 L kettle (defaults)',
+  name: 'My kettle',
   boilOffLPerHour: 4,
   trubLossL: 1,
   deadSpaceL: 0.5,
@@ -343,23 +343,6 @@ export const equipmentNameSchema = z
 const litres = (label: string, max: number) =>
   finite(label).min(0, { error: `${label} cannot be below 0 L.` }).max(max, { error: `${label} above ${max} L is beyond a home brewery.` });
 
-export const equipmentProfileInputSchema = z.object({
-  name: equipmentNameSchema,
-  boilOffLPerHour: finite('Boil-off rate').min(0, { error: 'The boil-off rate cannot be below 0 L/h.' }).max(30, { error: 'A boil-off above 30 L/h is beyond a home kettle.' }),
-  trubLossL: litres('Trub loss', 50),
-  deadSpaceL: litres('Dead space', 50),
-  coolingShrinkage: finite('Cooling shrinkage')
-    .min(0, { error: 'Cooling shrinkage is between 0 and 10 %.' })
-    .max(0.1, { error: 'Cooling shrinkage is between 0 and 10 % (about 4 % is usual).' }),
-  elevationM: elevationSchema.nullish(),
-  kettleCapacityL: finite('Kettle size').positive({ error: 'The kettle size must be more than 0 L.' }).max(1000, { error: 'A kettle above 1000 L is beyond a home brewery.' }).nullish(),
-  isDefault: z.boolean().optional(),
-});
-export type EquipmentProfileInput = z.input<typeof equipmentProfileInputSchema>;
-
-export const equipmentProfileUpdateSchema = equipmentProfileInputSchema.partial();
-export type EquipmentProfileUpdate = z.input<typeof equipmentProfileUpdateSchema>;
-
 export const boilOffMeasurementSchema = z
   .object({
     startL: finite('Starting volume').positive({ error: 'The starting volume must be more than 0 L.' }).max(1000, { error: 'Use at most 1000 L.' }),
@@ -372,6 +355,25 @@ export const boilOffMeasurementSchema = z
     }
   });
 export type BoilOffMeasurementInput = z.input<typeof boilOffMeasurementSchema>;
+
+export const equipmentProfileInputSchema = z.object({
+  name: equipmentNameSchema,
+  boilOffLPerHour: finite('Boil-off rate').min(0, { error: 'The boil-off rate cannot be below 0 L/h.' }).max(30, { error: 'A boil-off above 30 L/h is beyond a home kettle.' }),
+  trubLossL: litres('Trub loss', 50),
+  deadSpaceL: litres('Dead space', 50),
+  coolingShrinkage: finite('Cooling shrinkage')
+    .min(0, { error: 'Cooling shrinkage is between 0 and 10 %.' })
+    .max(0.1, { error: 'Cooling shrinkage is between 0 and 10 % (about 4 % is usual).' }),
+  elevationM: elevationSchema.nullish(),
+  kettleCapacityL: finite('Kettle size').positive({ error: 'The kettle size must be more than 0 L.' }).max(1000, { error: 'A kettle above 1000 L is beyond a home brewery.' }).nullish(),
+  /** When given, the boil-off rate is worked out from it (start and end volume, minutes of boil). */
+  boilOffMeasurement: boilOffMeasurementSchema.nullish(),
+  isDefault: z.boolean({ error: 'Default is yes or no.' }).optional(),
+});
+export type EquipmentProfileInput = z.input<typeof equipmentProfileInputSchema>;
+
+export const equipmentProfileUpdateSchema = equipmentProfileInputSchema.partial();
+export type EquipmentProfileUpdate = z.input<typeof equipmentProfileUpdateSchema>;
 
 export interface EquipmentProfile {
   /** null when these are the common-practice defaults, not a saved profile. */
