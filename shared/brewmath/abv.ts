@@ -1,5 +1,6 @@
 import { BrewMathError } from './errors';
-import { requireRange, requireSg, requireWortSg, show, showSg } from './validate';
+import { sgToPlato } from './gravity';
+import { requireRange, requireSg, requireWortSg, showSg } from './validate';
 
 /** When a recipe gives no FG, assume 75 % apparent attenuation (common practice for ale yeasts; no source). */
 export const DEFAULT_APPARENT_ATTENUATION = 0.75;
@@ -22,15 +23,21 @@ export function abvPercent(og: number, fg: number): number {
   return (og - fg) * 131.25;
 }
 
+const ETHANOL_SG_20_20 = 789.24 / 998.21;
+
 /**
- * A more exact estimate that accounts for the alcohol's lower density and the wort's extract:
- * ABV = 76.08 × (OG − FG) / (1.775 − OG) × FG / 0.794. A commonly published formula (recalled
- * from memory; its original paper is not to hand). It agrees with the simple rule to about
- * 0.1 % ABV for ordinary beers and reads higher for strong ones.
+ * The brewing-science estimate, from Balling's mass balance of fermentation (2.0665 g of extract
+ * gives 1 g of ethanol), in °Plato as in ASBC practice (recalled from memory):
+ * real extract RE = 0.1808·OE + 0.8192·AE; ABW = (OE − RE) / (2.0665 − 0.010665·OE);
+ * ABV = ABW × FG / 0.7907 (ethanol 789.24 ÷ water 998.21 kg/m³ at 20 °C, to match SG 20/20).
+ * Within about 0.1 % ABV of the simple rule for ordinary beers, higher for strong ones.
  */
 export function abvPercentExact(og: number, fg: number): number {
   requireOgFg(og, fg);
-  return ((76.08 * (og - fg)) / (1.775 - og)) * (fg / 0.794);
+  const originalExtract = sgToPlato(og);
+  const realExtract = 0.1808 * originalExtract + 0.8192 * sgToPlato(fg);
+  const abw = (originalExtract - realExtract) / (2.0665 - 0.010665 * originalExtract);
+  return (abw * fg) / ETHANOL_SG_20_20;
 }
 
 /** Apparent attenuation as a fraction: the share of gravity points the yeast took, read through the alcohol. */

@@ -8,7 +8,7 @@ import {
   type ExtractKind,
   type WortState,
 } from './extract';
-import { SG_MAX, requireFinite, requireNonNegative, requireRange, requireSg, requireVolume, requireWortSg, show, showSg } from './validate';
+import { SG_MAX, VOLUME_MAX_L, requireRange, requireSg, requireVolume, requireWortSg, show, showSg } from './validate';
 
 /**
  * The boil model (docs/decisions/0002-brewing-math-model.md):
@@ -22,6 +22,10 @@ import { SG_MAX, requireFinite, requireNonNegative, requireRange, requireSg, req
 export const DEFAULT_COOLING_SHRINKAGE = 0.04;
 /** Within 0.001 (one gravity point) of target, no correction is worth making. */
 export const DEFAULT_TOLERANCE_SG = 0.001;
+/** Longer than any boil; a bound so that no product of inputs overflows. */
+const MAX_MINUTES = 24 * 60;
+/** Boiling on beyond this changes colour and bitterness too much to count as a gravity fix (common practice). */
+export const MAX_EXTRA_BOIL_MINUTES = 90;
 
 export interface BoilProjectionInput {
   /** Hot wort in the kettle now, litres. */
@@ -36,8 +40,8 @@ export interface BoilProjectionInput {
 function requireBoil(volumeL: number, sg: number, minutesLeft: number, boilOffLPerHour: number): void {
   requireVolume(volumeL, 'volumeL', 'Kettle volume');
   requireWortSg(sg, 'sg', 'Current gravity');
-  requireNonNegative(minutesLeft, 'minutesLeft', 'Minutes left', 'min');
-  requireNonNegative(boilOffLPerHour, 'boilOffLPerHour', 'Boil-off rate', 'L/h');
+  requireRange(minutesLeft, 0, MAX_MINUTES, 'minutesLeft', 'Minutes left', 'min', 'It cannot be negative.');
+  requireRange(boilOffLPerHour, 0, VOLUME_MAX_L, 'boilOffLPerHour', 'Boil-off rate', 'L/h');
 }
 
 /** Hot volume at flame-out; throws when the boil would empty the kettle or over-concentrate it. */
@@ -73,8 +77,7 @@ export function projectBoil({ volumeL, sg, minutesLeft, boilOffLPerHour }: BoilP
 export function boilOffRateLPerHour({ startL, endL, minutes }: { startL: number; endL: number; minutes: number }): number {
   requireVolume(startL, 'startL', 'Starting volume');
   requireVolume(endL, 'endL', 'Ending volume');
-  requireFinite(minutes, 'minutes', 'Boil time');
-  if (minutes <= 0) throw new BrewMathError('Boil time must be more than 0 minutes.', 'out-of-range', 'minutes');
+  requireRange(minutes, 1, MAX_MINUTES, 'minutes', 'Boil time measured over', 'min', 'Measure over at least a minute.');
   if (endL > startL) {
     throw new BrewMathError(
       `The ending volume ${show(endL, 1)} L is above the starting ${show(startL, 1)} L; a boil only loses volume. Were both read hot, in the kettle?`,
@@ -145,7 +148,8 @@ export type InfeasibleCode =
   | 'overfills-kettle'
   | 'no-boil-off'
   | 'no-extract'
-  | 'below-recipe-volume';
+  | 'below-recipe-volume'
+  | 'too-long';
 
 export interface InfeasibleExtractOption {
   kind: 'extract';
@@ -255,127 +259,31 @@ export function boilCorrection(input: BoilCorrectionInput): BoilCorrection {
   const gap = projectedPoints - targetPoints;
   const status: BoilStatus =
     gap < -tolerancePoints - POINTS_EPSILON ? 'low' : gap > tolerancePoints + POINTS_EPSILON ? 'high' : 'on-target';
-  const fgPoints = (fgSg - 1) * 1000;
-  const abvAt = (points: number): number => (points > fgPoints ? (points - fgPoints) * 0.13125 : 0);
 
+  const ctx: Context = {
+    status,
+    volumeL,
+    boilOffLPerHour,
+    kettleCapacityL,
+    targetVolumeL,
+    targetSg,
+    cold,
+    pointsL,
+    endColdL,
+    targetPoints,
+    fgPoints: (fgSg - 1) * 1000,
+  };
   const projectedSg = 1 + projectedPoints / 1000;
-  const projectedAbv = abvAt(projectedPoints);
+  const projectedAbv = abvAt(ctx, projectedPoints);
   const options: BoilOption[] = [
-    {
-      kind: 'as-is',
-      feasible: true,
-      endSg: projectedSg,
-      endVolumeL: endHotL,
-      fermenterVolumeL: endColdL,
-      abvPercent: projectedAbv,
-    },
+    { kind: 'as-is', feasible: true, endSg: projectedSg, endVolumeL: endHotL, fermenterVolumeL: endColdL, abvPercent: projectedAbv },
+    extractOption(ctx, 'dme', overrides?.dme ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.dme, EXTRACT_VOLUME_L_PER_KG.dme),
+    extractOption(ctx, 'lme', overrides?.lme ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.lme, EXTRACT_VOLUME_L_PER_KG.lme),
+    extractOption(ctx, 'sucrose', overrides?.sucrose ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.sucrose, EXTRACT_VOLUME_L_PER_KG.sucrose),
+    extractOption(ctx, 'dextrose', overrides?.dextrose ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.dextrose, EXTRACT_VOLUME_L_PER_KG.dextrose),
+    waterOption(ctx),
+    boilLongerOption(ctx),
   ];
-
-  for (let i = 0; i < EXTRACT_KINDS.length; i++) {
-    const extract = EXTRACT_KINDS[i];
-    if (status !== 'low') {
-      options.push(
-        status === 'on-target'
-          ? { kind: 'extract', feasible: false, extract, code: 'on-target', reason: REASON_ON_TARGET }
-          : { kind: 'extract', feasible: false, extract, code: 'above-target', reason: REASON_EXTRACT_ABOVE },
-      );
-      continue;
-    }
-    const potential = overrides?.[extract] ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG[extract];
-    const litresPerKg = EXTRACT_VOLUME_L_PER_KG[extract];
-    const denominator = potential - targetPoints * litresPerKg;
-    if (denominator <= 0) {
-      options.push({ kind: 'extract', feasible: false, extract, code: 'too-weak', reason: REASON_TOO_WEAK });
-      continue;
-    }
-    const kg = (targetPoints * endColdL - pointsL) / denominator;
-    const addedL = kg * litresPerKg;
-    if (kettleCapacityL !== undefined && volumeL + addedL / cold > kettleCapacityL) {
-      options.push({
-        kind: 'extract',
-        feasible: false,
-        extract,
-        code: 'overfills-kettle',
-        reason: `${show(kg, 2)} kg would overfill the ${show(kettleCapacityL, 1)} L kettle.`,
-      });
-      continue;
-    }
-    const coldL = endColdL + addedL;
-    const points = (pointsL + potential * kg) / coldL;
-    options.push({
-      kind: 'extract',
-      feasible: true,
-      extract,
-      kg,
-      endSg: 1 + points / 1000,
-      endVolumeL: coldL / cold,
-      fermenterVolumeL: coldL,
-      abvPercent: abvAt(points),
-    });
-  }
-
-  if (status !== 'high') {
-    options.push(
-      status === 'on-target'
-        ? { kind: 'water', feasible: false, code: 'on-target', reason: REASON_ON_TARGET }
-        : { kind: 'water', feasible: false, code: 'below-target', reason: REASON_WATER_BELOW },
-    );
-  } else {
-    const litres = pointsL / targetPoints - endColdL;
-    if (kettleCapacityL !== undefined && volumeL + litres / cold > kettleCapacityL) {
-      options.push({
-        kind: 'water',
-        feasible: false,
-        code: 'overfills-kettle',
-        reason: `${show(litres, 1)} L of water would overfill the ${show(kettleCapacityL, 1)} L kettle. Add it to the fermenter after chilling instead: the result is the same.`,
-      });
-    } else {
-      const coldL = endColdL + litres;
-      const points = pointsL / coldL;
-      options.push({
-        kind: 'water',
-        feasible: true,
-        litres,
-        endSg: 1 + points / 1000,
-        endVolumeL: coldL / cold,
-        fermenterVolumeL: coldL,
-        abvPercent: abvAt(points),
-      });
-    }
-  }
-
-  if (status !== 'low') {
-    options.push(
-      status === 'on-target'
-        ? { kind: 'boil-longer', feasible: false, code: 'on-target', reason: REASON_ON_TARGET }
-        : { kind: 'boil-longer', feasible: false, code: 'above-target', reason: REASON_BOIL_ABOVE },
-    );
-  } else if (boilOffLPerHour === 0) {
-    options.push({ kind: 'boil-longer', feasible: false, code: 'no-boil-off', reason: REASON_NO_BOIL_OFF });
-  } else if (pointsL <= 0) {
-    options.push({ kind: 'boil-longer', feasible: false, code: 'no-extract', reason: REASON_NO_EXTRACT });
-  } else {
-    const coldL = pointsL / targetPoints;
-    if (targetVolumeL !== undefined && coldL < targetVolumeL) {
-      options.push({
-        kind: 'boil-longer',
-        feasible: false,
-        code: 'below-recipe-volume',
-        reason: `Boiling on to ${showSg(targetSg)} would leave ${show(coldL, 1)} L once cooled, less than the recipe's ${show(targetVolumeL, 1)} L.`,
-      });
-    } else {
-      const points = pointsL / coldL;
-      options.push({
-        kind: 'boil-longer',
-        feasible: true,
-        extraMinutes: ((endColdL - coldL) / (boilOffLPerHour * cold)) * 60,
-        endSg: 1 + points / 1000,
-        endVolumeL: coldL / cold,
-        fermenterVolumeL: coldL,
-        abvPercent: abvAt(points),
-      });
-    }
-  }
 
   return {
     status,
@@ -384,5 +292,130 @@ export function boilCorrection(input: BoilCorrectionInput): BoilCorrection {
     fgAssumed,
     projected: { endSg: projectedSg, endVolumeL: endHotL, fermenterVolumeL: endColdL, abvPercent: projectedAbv },
     options,
+  };
+}
+
+/** What every option needs, computed once per call. Volumes here are cold litres. */
+interface Context {
+  status: BoilStatus;
+  volumeL: number;
+  boilOffLPerHour: number;
+  kettleCapacityL: number | undefined;
+  targetVolumeL: number | undefined;
+  targetSg: number;
+  cold: number;
+  pointsL: number;
+  endColdL: number;
+  targetPoints: number;
+  fgPoints: number;
+}
+
+function abvAt(ctx: Context, points: number): number {
+  return points > ctx.fgPoints ? (points - ctx.fgPoints) * 0.13125 : 0;
+}
+
+function extractOption(ctx: Context, extract: ExtractKind, potential: number, litresPerKg: number): BoilOption {
+  if (ctx.status !== 'low') {
+    return ctx.status === 'on-target'
+      ? { kind: 'extract', feasible: false, extract, code: 'on-target', reason: REASON_ON_TARGET }
+      : { kind: 'extract', feasible: false, extract, code: 'above-target', reason: REASON_EXTRACT_ABOVE };
+  }
+  const denominator = potential - ctx.targetPoints * litresPerKg;
+  if (denominator <= 0) {
+    return { kind: 'extract', feasible: false, extract, code: 'too-weak', reason: REASON_TOO_WEAK };
+  }
+  const kg = (ctx.targetPoints * ctx.endColdL - ctx.pointsL) / denominator;
+  const addedL = kg * litresPerKg;
+  if (ctx.kettleCapacityL !== undefined && ctx.volumeL + addedL / ctx.cold > ctx.kettleCapacityL) {
+    return {
+      kind: 'extract',
+      feasible: false,
+      extract,
+      code: 'overfills-kettle',
+      reason: `${show(kg, 2)} kg would overfill the ${show(ctx.kettleCapacityL, 1)} L kettle.`,
+    };
+  }
+  const coldL = ctx.endColdL + addedL;
+  const points = (ctx.pointsL + potential * kg) / coldL;
+  return {
+    kind: 'extract',
+    feasible: true,
+    extract,
+    kg,
+    endSg: 1 + points / 1000,
+    endVolumeL: coldL / ctx.cold,
+    fermenterVolumeL: coldL,
+    abvPercent: abvAt(ctx, points),
+  };
+}
+
+function waterOption(ctx: Context): BoilOption {
+  if (ctx.status !== 'high') {
+    return ctx.status === 'on-target'
+      ? { kind: 'water', feasible: false, code: 'on-target', reason: REASON_ON_TARGET }
+      : { kind: 'water', feasible: false, code: 'below-target', reason: REASON_WATER_BELOW };
+  }
+  const litres = ctx.pointsL / ctx.targetPoints - ctx.endColdL;
+  if (ctx.kettleCapacityL !== undefined && ctx.volumeL + litres / ctx.cold > ctx.kettleCapacityL) {
+    return {
+      kind: 'water',
+      feasible: false,
+      code: 'overfills-kettle',
+      reason: `${show(litres, 1)} L of water would overfill the ${show(ctx.kettleCapacityL, 1)} L kettle. Add it to the fermenter after chilling instead: the result is the same.`,
+    };
+  }
+  const coldL = ctx.endColdL + litres;
+  const points = ctx.pointsL / coldL;
+  return {
+    kind: 'water',
+    feasible: true,
+    litres,
+    endSg: 1 + points / 1000,
+    endVolumeL: coldL / ctx.cold,
+    fermenterVolumeL: coldL,
+    abvPercent: abvAt(ctx, points),
+  };
+}
+
+function boilLongerOption(ctx: Context): BoilOption {
+  if (ctx.status !== 'low') {
+    return ctx.status === 'on-target'
+      ? { kind: 'boil-longer', feasible: false, code: 'on-target', reason: REASON_ON_TARGET }
+      : { kind: 'boil-longer', feasible: false, code: 'above-target', reason: REASON_BOIL_ABOVE };
+  }
+  if (ctx.boilOffLPerHour === 0) {
+    return { kind: 'boil-longer', feasible: false, code: 'no-boil-off', reason: REASON_NO_BOIL_OFF };
+  }
+  if (ctx.pointsL <= 0) {
+    return { kind: 'boil-longer', feasible: false, code: 'no-extract', reason: REASON_NO_EXTRACT };
+  }
+  const coldL = ctx.pointsL / ctx.targetPoints;
+  if (ctx.targetVolumeL !== undefined && coldL < ctx.targetVolumeL) {
+    return {
+      kind: 'boil-longer',
+      feasible: false,
+      code: 'below-recipe-volume',
+      reason: `Boiling on to ${showSg(ctx.targetSg)} would leave ${show(coldL, 1)} L once cooled, less than the recipe's ${show(ctx.targetVolumeL, 1)} L.`,
+    };
+  }
+  const boilOffColdLPerHour = ctx.boilOffLPerHour * ctx.cold;
+  // Compared as volumes so that a tiny boil-off rate cannot produce Infinity minutes.
+  if (!(ctx.endColdL - coldL <= (boilOffColdLPerHour * MAX_EXTRA_BOIL_MINUTES) / 60)) {
+    return {
+      kind: 'boil-longer',
+      feasible: false,
+      code: 'too-long',
+      reason: `At ${show(ctx.boilOffLPerHour, 1)} L/h it would take more than ${MAX_EXTRA_BOIL_MINUTES} extra minutes, long enough to change colour and bitterness.`,
+    };
+  }
+  const points = ctx.pointsL / coldL;
+  return {
+    kind: 'boil-longer',
+    feasible: true,
+    extraMinutes: ((ctx.endColdL - coldL) / boilOffColdLPerHour) * 60,
+    endSg: 1 + points / 1000,
+    endVolumeL: coldL / ctx.cold,
+    fermenterVolumeL: coldL,
+    abvPercent: abvAt(ctx, points),
   };
 }

@@ -1,6 +1,6 @@
 import { BrewMathError } from './errors';
 import { sgToPoints } from './gravity';
-import { SG_MAX, requireFinite, requireRange, requireVolume, requireWortSg, show, showSg } from './validate';
+import { SG_MAX, requireAmount, requireFinite, requireRange, requireVolume, requireWortSg, show, showSg } from './validate';
 
 /**
  * What counts as extract: everything dissolved in wort that raises its gravity (sugars,
@@ -122,10 +122,7 @@ export function extractToAddKg(
 export function afterAddingWater(volumeL: number, sg: number, waterL: number): WortState {
   requireVolume(volumeL, 'volumeL');
   requireWortSg(sg, 'sg');
-  requireFinite(waterL, 'waterL', 'Water');
-  if (waterL < 0) {
-    throw new BrewMathError('Water to add cannot be negative.', 'out-of-range', 'waterL');
-  }
+  requireAmount(waterL, 'waterL', 'Water to add', 'L');
   const end = volumeL + waterL;
   return { volumeL: end, sg: 1 + ((sg - 1) * volumeL) / end };
 }
@@ -140,10 +137,7 @@ export function afterAddingExtract(
 ): WortState {
   requireVolume(volumeL, 'volumeL');
   requireWortSg(sg, 'sg');
-  requireFinite(kg, 'kg', 'Extract');
-  if (kg < 0) {
-    throw new BrewMathError('Extract to add cannot be negative.', 'out-of-range', 'kg');
-  }
+  requireAmount(kg, 'kg', 'Extract to add', 'kg');
   requirePotential(potentialPointsLPerKg, 'potentialPointsLPerKg');
   requireVolumePerKg(volumeLPerKg, 'volumeLPerKg');
   const end = volumeL + kg * volumeLPerKg;
@@ -193,8 +187,7 @@ export function estimateOg({ fermentables, efficiency, volumeL }: EstimateOgInpu
   for (let i = 0; i < fermentables.length; i++) {
     const f = fermentables[i];
     const label = `Fermentable ${i + 1}`;
-    requireFinite(f.kg, 'fermentables', `${label}: the amount`);
-    if (f.kg < 0) throw new BrewMathError(`${label}: the amount cannot be negative.`, 'out-of-range', 'fermentables');
+    requireAmount(f.kg, 'fermentables', `${label}: the amount`, 'kg');
     let potential: number;
     if (f.kind === 'grain') {
       if (f.potentialPointsLPerKg === undefined) {
@@ -202,7 +195,7 @@ export function estimateOg({ fermentables, efficiency, volumeL }: EstimateOgInpu
       }
       potential = f.potentialPointsLPerKg * efficiency;
     } else if (Object.hasOwn(EXTRACT_POTENTIALS_POINTS_L_PER_KG, f.kind)) {
-      potential = f.potentialPointsLPerKg ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG[f.kind];
+      potential = f.potentialPointsLPerKg ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG[f.kind as ExtractKind];
     } else {
       throw new BrewMathError(`${label}: unknown kind "${String(f.kind)}".`, 'inconsistent', 'fermentables');
     }

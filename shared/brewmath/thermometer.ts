@@ -52,9 +52,3 @@ export function thermometerBoilOffsetC(readingC: number, elevationM: number): nu
   requireRange(readingC, 50, 120, 'readingC', 'Boiling-water reading', '°C', 'Read it in water at a rolling boil.');
   return readingC - boilingPointC(elevationM);
 }
-
-/** The same from a reading in a stirred ice bath, which is 0 °C anywhere. */
-export function thermometerIceOffsetC(readingC: number): number {
-  requireRange(readingC, -20, 20, 'readingC', 'Ice-bath reading', '°C', 'Read it in crushed ice topped with water, stirred.');
-  return readingC;
-}

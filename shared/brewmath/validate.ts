@@ -9,9 +9,33 @@ export const BRIX_MAX = 40;
 
 // Messages are built only on the error path, so the happy path stays allocation-free.
 
-/** Rounds for a message: enough digits to recognise the number, no float noise. */
+const POW10 = [1, 10, 100, 1000, 10000, 100000, 1000000];
+
+/**
+ * toFixed without toFixed: integer-to-string is several times cheaper, and boilCorrection puts
+ * numbers into its reasons on a path that must run millions of times a second.
+ */
+export function fixedDigits(value: number, digits: number, trimZeros = false): string {
+  if (!Number.isFinite(value) || Math.abs(value) >= 1e12) return String(value);
+  const scale = POW10[digits];
+  const scaled = Math.round(Math.abs(value) * scale);
+  const sign = value < 0 && scaled !== 0 ? '-' : '';
+  const whole = Math.floor(scaled / scale);
+  if (digits === 0) return sign + whole;
+  let fraction = String(scaled - whole * scale);
+  while (fraction.length < digits) fraction = '0' + fraction;
+  if (trimZeros) {
+    let end = fraction.length;
+    while (end > 0 && fraction.charCodeAt(end - 1) === 48) end--;
+    fraction = fraction.slice(0, end);
+    if (end === 0) return sign + whole;
+  }
+  return sign + whole + '.' + fraction;
+}
+
+/** A number for a message: rounded, trailing zeros dropped. */
 export function show(value: number, digits = 3): string {
-  return Number.isFinite(value) ? String(Number(value.toFixed(digits))) : String(value);
+  return fixedDigits(value, digits, true);
 }
 
 export function requireFinite(value: number, field: string, label: string): number {
@@ -95,13 +119,32 @@ export function requireNonNegative(value: number, field: string, label: string, 
   return value;
 }
 
+/**
+ * Upper bounds far beyond any homebrew or club batch. They exist so that no product of two
+ * inputs can overflow to Infinity.
+ */
+export const VOLUME_MAX_L = 10_000;
+export const MASS_MAX_KG = 10_000;
+
 export function requireVolume(value: number, field: string, label = 'Volume'): number {
-  return requirePositive(value, field, label, 'L');
+  requirePositive(value, field, label, 'L');
+  if (value > VOLUME_MAX_L) {
+    throw new BrewMathError(`${label} ${show(value)} L is more than ${VOLUME_MAX_L} L; check the units.`, 'out-of-range', field);
+  }
+  return value;
+}
+
+/** Zero allowed: "add no water", "no sugar". */
+export function requireAmount(value: number, field: string, label: string, unit: 'L' | 'kg'): number {
+  requireNonNegative(value, field, label, unit);
+  const max = unit === 'L' ? VOLUME_MAX_L : MASS_MAX_KG;
+  if (value > max) {
+    throw new BrewMathError(`${label} ${show(value)} ${unit} is more than ${max} ${unit}; check the units.`, 'out-of-range', field);
+  }
+  return value;
 }
 
 /** A gravity as brewers write it (1.050), with a fourth decimal only when it carries information. */
 export function showSg(value: number): string {
-  if (!Number.isFinite(value)) return String(value);
-  const three = value.toFixed(3);
-  return Math.abs(Number(three) - value) < 1e-9 ? three : value.toFixed(4);
+  return fixedDigits(value, Math.abs(Math.round(value * 1000) - value * 1000) < 1e-6 ? 3 : 4);
 }
