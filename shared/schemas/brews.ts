@@ -4,6 +4,7 @@
  * metric and US units, because the same message reaches brewers of either preference.
  */
 import { z } from 'zod';
+import { boilCheckInputSchema } from './boil-check';
 import type { InstrumentKind, InstrumentSnapshot, EquipmentProfile } from './instruments';
 import type { RecipeTargets } from './recipes';
 
@@ -315,6 +316,17 @@ export const decisionChoiceSchema = z.discriminatedUnion(
   { error: 'Choose one of the options, or describe your own action.' },
 );
 export type DecisionChoice = z.output<typeof decisionChoiceSchema>;
+
+/**
+ * POST /api/brews/:id/decisions. Only the check's input and the choice are taken: the server
+ * recomputes every number with runBoilCheck, and any result the client sends is dropped.
+ */
+export const decisionInputSchema = z.object({
+  input: boilCheckInputSchema,
+  choice: decisionChoiceSchema,
+  note: noteSchema,
+});
+export type DecisionInput = z.input<typeof decisionInputSchema>;
 
 // ---------------------------------------------------------------------------------------------
 // Sharing

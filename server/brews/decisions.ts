@@ -1,0 +1,59 @@
+/**
+ * Late-boil decisions. The brewer sends what they entered in the check and which option they
+ * chose; every number stored is recomputed here with runBoilCheck, the same module the form
+ * ran, so a decision can be trusted when a mentor reads it days later. A result sent by the
+ * client is never read (the schema drops it).
+ */
+import { eq } from 'drizzle-orm';
+import { BrewMathError } from '@shared/brewmath';
+import { EXTRACT_NAMES, runBoilCheck } from '@shared/boil-check';
+import type { BoilCheckParsed } from '@shared/schemas/boil-check';
+import type { BrewDecision, DecisionChoice } from '@shared/schemas/brews';
+import type { Actor } from '../auth/permissions';
+import type { Db } from '../db/client';
+import { brewDecisions } from '../db/schema';
+import { BadRequest } from '../lib/errors';
+import { loadBrewForActor, toDecision, touchStage } from './service';
+
+const capitalise = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+function recompute(input: BoilCheckParsed) {
+  try {
+    return runBoilCheck(input);
+  } catch (error) {
+    if (error instanceof BrewMathError) throw new BadRequest(error.message, { [`input.${error.field ?? '_'}`]: error.message });
+    throw error;
+  }
+}
+
+/** The option the brewer chose, from the recomputed result; a 400 saying why when it cannot be done. */
+function chosenOption(outcome: ReturnType<typeof runBoilCheck>, input: BoilCheckParsed, choice: DecisionChoice) {
+  if (choice.kind === 'own') return null;
+  const refuse = (field: string, message: string): never => {
+    throw new BadRequest(message, { [field]: message });
+  };
+  if (choice.kind === 'extract' && !(input.extractsOnHand ?? []).includes(choice.extract)) {
+    refuse('choice.extract', `${capitalise(EXTRACT_NAMES[choice.extract])} is not among the extracts on hand.`);
+  }
+  const option = outcome.result.options.find((o) => o.kind === choice.kind && (choice.kind !== 'extract' || (o.kind === 'extract' && o.extract === choice.extract)));
+  if (!option) return refuse('choice', 'That option is not part of this check.');
+  if (!option.feasible) return refuse('choice', option.reason);
+  return option;
+}
+
+export async function addDecision(db: Db, actor: Actor, brewId: number, body: { input: BoilCheckParsed; choice: DecisionChoice; note: string }): Promise<BrewDecision> {
+  await loadBrewForActor(db, actor, brewId, 'update');
+  const outcome = recompute(body.input);
+  const chosen = chosenOption(outcome, body.input, body.choice);
+  const now = new Date();
+  const id = await db.transaction(async (tx) => {
+    const [{ id }] = await tx
+      .insert(brewDecisions)
+      .values({ brewId, input: body.input, result: { ...outcome, chosen }, choice: body.choice, note: body.note, decidedAt: now })
+      .$returningId();
+    await touchStage(tx, brewId, 'boil', now);
+    return id;
+  });
+  const [row] = await db.select().from(brewDecisions).where(eq(brewDecisions.id, id));
+  return toDecision(row);
+}

@@ -1,0 +1,118 @@
+/**
+ * Photos of a reading (a hydrometer in its trial jar, a refractometer's scale). Kept in MariaDB
+ * with their SHA-256, so every API instance serves the same bytes: see
+ * docs/decisions/0006-uploaded-photos.md. The type is read from the file's first bytes; the
+ * name and Content-Type the client sends are not trusted.
+ */
+import { createHash } from 'node:crypto';
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import multer from 'multer';
+import { and, count, eq } from 'drizzle-orm';
+import { PHOTO_MAX_BYTES, type PhotoMime, type ReadingPhoto } from '@shared/schemas/brews';
+import type { Actor } from '../auth/permissions';
+import type { Db } from '../db/client';
+import { readingPhotos } from '../db/schema';
+import { BadRequest, HttpError, NotFound } from '../lib/errors';
+import { loadReading } from './readings';
+import { loadBrewForActor, photoUrl } from './service';
+
+export const PHOTOS_PER_READING = 6;
+const maxMb = PHOTO_MAX_BYTES / (1024 * 1024);
+
+class UnsupportedMediaType extends HttpError {
+  constructor(message: string) {
+    super(415, 'unsupported_media_type', message, { photo: message });
+  }
+}
+
+class PayloadTooLarge extends HttpError {
+  constructor(message: string) {
+    super(413, 'too_large', message, { photo: message });
+  }
+}
+
+/** JPEG, PNG or WebP by their signatures (JPEG: FF D8 FF; PNG: the 8-byte PNG signature; WebP: a RIFF container of type WEBP). */
+export function sniffImageType(bytes: Buffer): PhotoMime | null {
+  if (bytes.length >= 3 && bytes[0] === 0xff && bytes[1] === 0xd8 && bytes[2] === 0xff) return 'image/jpeg';
+  const png = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
+  if (bytes.length >= 8 && png.every((b, i) => bytes[i] === b)) return 'image/png';
+  if (bytes.length >= 12 && bytes.toString('latin1', 0, 4) === 'RIFF' && bytes.toString('latin1', 8, 12) === 'WEBP') return 'image/webp';
+  return null;
+}
+
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 } }).single('photo');
+
+/** multer with our own words for its errors. */
+export const receivePhoto: RequestHandler = (req: Request, res: Response, next: NextFunction) => {
+  upload(req, res, (error: unknown) => {
+    if (!error) return next();
+    if (error instanceof multer.MulterError) {
+      if (error.code === 'LIMIT_FILE_SIZE') return next(new PayloadTooLarge(`The photo is larger than ${maxMb} MB. Take it at a lower resolution or crop it, then try again.`));
+      const message = 'Send one photo, in the form field named "photo".';
+      return next(new BadRequest(message, { photo: message }));
+    }
+    next(error);
+  });
+};
+
+function toPhoto(brewId: number, row: { id: number; readingId: number; mime: PhotoMime; sizeBytes: number; sha256: string; createdAt: Date }): ReadingPhoto {
+  return { ...row, createdAt: row.createdAt.toISOString(), url: photoUrl(brewId, row.readingId, row.id) };
+}
+
+export async function addPhoto(db: Db, actor: Actor, brewId: number, readingId: number, file: Express.Multer.File | undefined): Promise<ReadingPhoto> {
+  await loadBrewForActor(db, actor, brewId, 'update');
+  await loadReading(db, brewId, readingId);
+  if (!file || file.size === 0) {
+    const message = 'Choose a photo to upload.';
+    throw new BadRequest(message, { photo: message });
+  }
+  const mime = sniffImageType(file.buffer);
+  if (!mime) throw new UnsupportedMediaType('That file is not a JPEG, PNG or WebP image. Choose a photo taken with your camera.');
+  const [{ n }] = await db.select({ n: count() }).from(readingPhotos).where(eq(readingPhotos.readingId, readingId));
+  if (Number(n) >= PHOTOS_PER_READING) {
+    const message = `A reading keeps at most ${PHOTOS_PER_READING} photos. Delete one first.`;
+    throw new BadRequest(message, { photo: message });
+  }
+  const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+  const values = { readingId, brewId, mime, sizeBytes: file.size, sha256, data: file.buffer };
+  const [{ id }] = await db.insert(readingPhotos).values(values).$returningId();
+  const [row] = await db
+    .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
+    .from(readingPhotos)
+    .where(eq(readingPhotos.id, id));
+  return toPhoto(brewId, row);
+}
+
+async function findPhoto(db: Db, brewId: number, readingId: number, photoId: number) {
+  const [row] = await db
+    .select()
+    .from(readingPhotos)
+    .where(and(eq(readingPhotos.id, photoId), eq(readingPhotos.readingId, readingId), eq(readingPhotos.brewId, brewId)));
+  if (!row) throw new NotFound('That photo was not found.');
+  return row;
+}
+
+/** Sends the image to someone who may read the brew day; never cached by shared caches, never sniffed. */
+export async function sendPhoto(db: Db, actor: Actor, brewId: number, readingId: number, photoId: number, req: Request, res: Response) {
+  await loadBrewForActor(db, actor, brewId, 'read');
+  const row = await findPhoto(db, brewId, readingId, photoId);
+  const etag = `"${row.sha256}"`;
+  res.set({
+    'Content-Type': row.mime,
+    'X-Content-Type-Options': 'nosniff',
+    'Cache-Control': 'private, max-age=3600',
+    'Content-Disposition': `inline; filename="reading-${readingId}-photo-${photoId}.${row.mime.split('/')[1]}"`,
+    ETag: etag,
+  });
+  if (req.headers['if-none-match'] === etag) {
+    res.status(304).end();
+    return;
+  }
+  res.status(200).end(row.data);
+}
+
+export async function deletePhoto(db: Db, actor: Actor, brewId: number, readingId: number, photoId: number) {
+  await loadBrewForActor(db, actor, brewId, 'update');
+  await findPhoto(db, brewId, readingId, photoId);
+  await db.delete(readingPhotos).where(eq(readingPhotos.id, photoId));
+}

@@ -1,0 +1,399 @@
+/**
+ * Brew days: started from a recipe (a snapshot of its targets and of the brewer's equipment),
+ * walked through stage by stage, shared with clubs. Every read and write goes through
+ * loadBrewForActor, which asks server/auth/permissions.ts; writes of several rows run in one
+ * transaction.
+ */
+import { and, asc, desc, eq, inArray, ne } from 'drizzle-orm';
+import { findDeviations } from '@shared/brew-deviations';
+import {
+  brewStages,
+  readingQuantity,
+  type BrewDecision,
+  type BrewDetail,
+  type BrewNote,
+  type BrewReading,
+  type BrewSharing,
+  type BrewStage,
+  type BrewStageAction,
+  type BrewStageState,
+  type BrewSummary,
+  type DecisionChoice,
+  type ReadingPhoto,
+  type StartBrewInput,
+  type UpdateBrewInput,
+} from '@shared/schemas/brews';
+import type { EquipmentProfile, InstrumentSnapshot } from '@shared/schemas/instruments';
+import type { RecipeTargets } from '@shared/schemas/recipes';
+import { can, canShareWithClub, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
+import type { DbOrTx } from '../db/client';
+import {
+  brewClubShares,
+  brewDecisions,
+  brewNotes,
+  brewReadings,
+  brews,
+  brewStagesTable,
+  readingPhotos,
+  users,
+  type BrewDecisionRow,
+  type BrewNoteRow,
+  type BrewReadingRow,
+  type BrewRow,
+} from '../db/schema';
+import { getEquipmentProfile } from '../equipment/service';
+import { BadRequest, NotFound } from '../lib/errors';
+import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
+
+export interface StoredBrew {
+  row: BrewRow;
+  ownerName: string;
+  sharedWithClubIds: number[];
+}
+
+async function findBrew(db: DbOrTx, id: number): Promise<StoredBrew | null> {
+  const [found] = await db
+    .select({ row: brews, ownerName: users.displayName })
+    .from(brews)
+    .innerJoin(users, eq(users.id, brews.ownerId))
+    .where(eq(brews.id, id));
+  if (!found) return null;
+  const shares = await db.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, id)).orderBy(asc(brewClubShares.clubId));
+  return { row: found.row, ownerName: found.ownerName, sharedWithClubIds: shares.map((s) => s.clubId) };
+}
+
+/**
+ * Loads a brew day for what the actor wants to do with it: 404 when they may not see it, 403 when
+ * they may see it but not do this (a club member writing to a shared brew day).
+ */
+export async function loadBrewForActor(db: DbOrTx, actor: Actor | null, id: number, action: ResourceAction): Promise<StoredBrew> {
+  const stored = await findBrew(db, id);
+  requireAccess(actor, action, stored && { ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds }, 'Brew day');
+  return stored!;
+}
+
+/** Only the clubs the viewer is in: a member never learns which other clubs see the brew day. */
+function visibleClubIds(actor: Actor, ownerId: number, clubIds: number[]) {
+  if (actor.id === ownerId) return clubIds;
+  return clubIds.filter((id) => actor.memberships.some((m) => m.clubId === id));
+}
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+export function photoUrl(brewId: number, readingId: number, photoId: number) {
+  return `/api/brews/${brewId}/readings/${readingId}/photos/${photoId}`;
+}
+
+export function toReading(row: BrewReadingRow, photos: ReadingPhoto[] = []): BrewReading {
+  return {
+    id: row.id,
+    brewId: row.brewId,
+    stage: row.stage,
+    kind: row.kind,
+    quantity: readingQuantity[row.kind],
+    instrumentId: row.instrumentId,
+    instrument: row.instrumentSnapshot as InstrumentSnapshot | null,
+    raw: row.raw,
+    corrected: row.correctedValue,
+    correction: row.correction as BrewReading['correction'],
+    warnings: row.warnings,
+    volumeL: row.volumeL,
+    takenAt: row.takenAt.toISOString(),
+    note: row.note,
+    recomputedAt: iso(row.recomputedAt),
+    recomputedFrom: row.recomputedFrom as BrewReading['recomputedFrom'],
+    photos,
+  };
+}
+
+export function toDecision(row: BrewDecisionRow): BrewDecision {
+  const stored = row.result as { chosen?: BrewDecision['chosen'] } & Record<string, unknown>;
+  const { chosen = null, ...result } = stored;
+  return {
+    id: row.id,
+    brewId: row.brewId,
+    input: row.input as Record<string, unknown>,
+    result,
+    choice: row.choice as DecisionChoice,
+    chosen,
+    note: row.note,
+    decidedAt: row.decidedAt.toISOString(),
+  };
+}
+
+export function toNote(row: BrewNoteRow): BrewNote {
+  return {
+    id: row.id,
+    brewId: row.brewId,
+    kind: row.kind,
+    stage: row.stage,
+    body: row.body,
+    details: row.details as Record<string, unknown> | null,
+    authorId: row.authorId,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+function toSummary(actor: Actor, stored: StoredBrew, og: number | null): BrewSummary {
+  const { row } = stored;
+  const targets = row.targetsSnapshot as RecipeTargets;
+  return {
+    id: row.id,
+    name: row.name,
+    status: row.status,
+    brewedOn: row.brewedOn,
+    recipeId: row.recipeId,
+    recipeName: targets.name,
+    ownerId: row.ownerId,
+    ownerName: stored.ownerName,
+    isOwner: row.ownerId === actor.id,
+    currentStage: row.currentStage,
+    targetOg: targets.targetOg,
+    og,
+    pitchedAt: iso(row.pitchedAt),
+    sharedWithClubIds: visibleClubIds(actor, row.ownerId, stored.sharedWithClubIds),
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+/** The predicted OG of a decision's chosen option ("leave as is" is the projection); null for the brewer's own action. */
+function predictedSg(decision: BrewDecision): number | null {
+  const sg = decision.chosen?.endSg;
+  return typeof sg === 'number' ? sg : null;
+}
+
+export async function getBrew(db: DbOrTx, actor: Actor, id: number): Promise<BrewDetail> {
+  const stored = await loadBrewForActor(db, actor, id, 'read');
+  return assembleBrew(db, actor, stored);
+}
+
+async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promise<BrewDetail> {
+  const id = stored.row.id;
+  const [stageRows, readingRows, photoRows, decisionRows, noteRows] = await Promise.all([
+    db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)),
+    db.select().from(brewReadings).where(eq(brewReadings.brewId, id)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
+    db
+      .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
+      .from(readingPhotos)
+      .where(eq(readingPhotos.brewId, id))
+      .orderBy(asc(readingPhotos.id)),
+    db.select().from(brewDecisions).where(eq(brewDecisions.brewId, id)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
+    db.select().from(brewNotes).where(eq(brewNotes.brewId, id)).orderBy(asc(brewNotes.createdAt), asc(brewNotes.id)),
+  ]);
+  const photosByReading = new Map<number, ReadingPhoto[]>();
+  for (const p of photoRows) {
+    const list = photosByReading.get(p.readingId) ?? [];
+    list.push({ ...p, createdAt: p.createdAt.toISOString(), url: photoUrl(id, p.readingId, p.id) });
+    photosByReading.set(p.readingId, list);
+  }
+  const readings = readingRows.map((r) => toReading(r, photosByReading.get(r.id)));
+  const decisions = decisionRows.map(toDecision);
+  const targets = stored.row.targetsSnapshot as RecipeTargets;
+  const equipment = stored.row.equipmentSnapshot as EquipmentProfile;
+  const stages: BrewStageState[] = brewStages.map((stage) => {
+    const s = stageRows.find((r) => r.stage === stage);
+    return { stage, startedAt: iso(s?.startedAt ?? null), completedAt: iso(s?.completedAt ?? null), skippedAt: iso(s?.skippedAt ?? null) };
+  });
+  const og = [...readings].reverse().find((r) => r.kind === 'og')?.corrected ?? null;
+  const resource = { ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds };
+  return {
+    ...toSummary(actor, stored, og),
+    targets,
+    equipment,
+    boilOffLPerHour: stored.row.boilOffLPerHour ?? equipment.boilOffLPerHour,
+    notes: stored.row.notes,
+    stages,
+    readings,
+    decisions,
+    log: noteRows.map(toNote),
+    deviations: findDeviations({
+      targets,
+      readings: readings.map((r) => ({ id: r.id, kind: r.kind, corrected: r.corrected, volumeL: r.volumeL, instrument: r.instrument, takenAt: r.takenAt })),
+      decisions: decisions.map((d) => ({ id: d.id, choiceKind: d.choice.kind, predictedSg: predictedSg(d), decidedAt: d.decidedAt })),
+    }),
+    permissions: {
+      edit: can(actor, 'update', resource),
+      share: can(actor, 'share', resource),
+      delete: can(actor, 'delete', resource),
+      comment: can(actor, 'comment', resource),
+    },
+  };
+}
+
+/** My brew days, or those shared with my clubs by others; newest first. */
+export async function listBrews(db: DbOrTx, actor: Actor, scope: 'mine' | 'shared'): Promise<BrewSummary[]> {
+  let rows: { row: BrewRow; ownerName: string }[];
+  if (scope === 'mine') {
+    rows = await db
+      .select({ row: brews, ownerName: users.displayName })
+      .from(brews)
+      .innerJoin(users, eq(users.id, brews.ownerId))
+      .where(eq(brews.ownerId, actor.id))
+      .orderBy(desc(brews.brewedOn), desc(brews.id));
+  } else {
+    const clubIds = actor.memberships.map((m) => m.clubId);
+    if (clubIds.length === 0) return [];
+    const shared = await db.selectDistinct({ brewId: brewClubShares.brewId }).from(brewClubShares).where(inArray(brewClubShares.clubId, clubIds));
+    if (shared.length === 0) return [];
+    rows = await db
+      .select({ row: brews, ownerName: users.displayName })
+      .from(brews)
+      .innerJoin(users, eq(users.id, brews.ownerId))
+      .where(
+        and(
+          inArray(
+            brews.id,
+            shared.map((s) => s.brewId),
+          ),
+          ne(brews.ownerId, actor.id),
+        ),
+      )
+      .orderBy(desc(brews.brewedOn), desc(brews.id));
+  }
+  if (rows.length === 0) return [];
+  const ids = rows.map((r) => r.row.id);
+  const [shares, ogs] = await Promise.all([
+    db.select().from(brewClubShares).where(inArray(brewClubShares.brewId, ids)),
+    db
+      .select({ brewId: brewReadings.brewId, corrected: brewReadings.correctedValue })
+      .from(brewReadings)
+      .where(and(inArray(brewReadings.brewId, ids), eq(brewReadings.kind, 'og')))
+      .orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
+  ]);
+  const latestOg = new Map<number, number>();
+  for (const o of ogs) latestOg.set(o.brewId, o.corrected);
+  return rows.map(({ row, ownerName }) =>
+    toSummary(actor, { row, ownerName, sharedWithClubIds: shares.filter((s) => s.brewId === row.id).map((s) => s.clubId) }, latestOg.get(row.id) ?? null),
+  );
+}
+
+function todayIso() {
+  return new Date().toISOString().slice(0, 10);
+}
+
+/** Starts a brew day from a recipe the brewer may read: snapshots its targets and the equipment profile. */
+export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput): Promise<number> {
+  await loadRecipeForActor(db, actor, input.recipeId, 'read');
+  const targets = await getRecipeTargets(db, input.recipeId);
+  const equipment = await getEquipmentProfile(db, actor.id);
+  return db.transaction(async (tx) => {
+    const now = new Date();
+    const [{ id }] = await tx
+      .insert(brews)
+      .values({
+        ownerId: actor.id,
+        recipeId: input.recipeId,
+        name: input.name ?? targets.name,
+        brewedOn: input.brewedOn ?? todayIso(),
+        targetsSnapshot: targets,
+        equipmentSnapshot: equipment,
+        currentStage: 'mash',
+        notes: '',
+      })
+      .$returningId();
+    await tx.insert(brewStagesTable).values(brewStages.map((stage) => ({ brewId: id, stage, startedAt: stage === 'mash' ? now : null })));
+    return id;
+  });
+}
+
+export async function updateBrew(db: DbOrTx, actor: Actor, id: number, input: UpdateBrewInput): Promise<void> {
+  await loadBrewForActor(db, actor, id, 'update');
+  const set: Partial<typeof brews.$inferInsert> = { updatedAt: new Date() };
+  if (input.name !== undefined) set.name = input.name;
+  if (input.brewedOn !== undefined) set.brewedOn = input.brewedOn;
+  if (input.status !== undefined) set.status = input.status;
+  if (input.notes !== undefined) set.notes = input.notes;
+  if (input.boilOffLPerHour !== undefined) set.boilOffLPerHour = input.boilOffLPerHour;
+  await db.update(brews).set(set).where(eq(brews.id, id));
+}
+
+export async function deleteBrew(db: DbOrTx, actor: Actor, id: number): Promise<void> {
+  await loadBrewForActor(db, actor, id, 'delete');
+  await db.delete(brews).where(eq(brews.id, id));
+}
+
+/** Marks a stage started (it is returned to when it was done or skipped), completed or skipped; times are kept. */
+export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: BrewStage, action: BrewStageAction): Promise<void> {
+  const stored = await loadBrewForActor(db, actor, id, 'update');
+  await db.transaction(async (tx) => {
+    const now = new Date();
+    const rows = await tx.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)).for('update');
+    const current = rows.find((r) => r.stage === stage);
+    const next: Partial<typeof brewStagesTable.$inferInsert> =
+      action === 'start'
+        ? { startedAt: current?.startedAt ?? now, completedAt: null, skippedAt: null }
+        : action === 'complete'
+          ? { startedAt: current?.startedAt ?? now, completedAt: now, skippedAt: null }
+          : { skippedAt: now, completedAt: null };
+    if (current) await tx.update(brewStagesTable).set(next).where(and(eq(brewStagesTable.brewId, id), eq(brewStagesTable.stage, stage)));
+    else await tx.insert(brewStagesTable).values({ brewId: id, stage, ...next });
+
+    let currentStage: BrewStage = stage;
+    if (action !== 'start') {
+      // On to the next stage not yet done; stay on the last one.
+      const done = (s: BrewStage) => {
+        if (s === stage) return true;
+        const r = rows.find((x) => x.stage === s);
+        return Boolean(r?.completedAt || r?.skippedAt);
+      };
+      const after = brewStages.slice(brewStages.indexOf(stage) + 1).find((s) => !done(s));
+      currentStage = after ?? brewStages.find((s) => !done(s)) ?? stage;
+    }
+    const set: Partial<typeof brews.$inferInsert> = { currentStage, updatedAt: now };
+    // The last stage done on brew day: the beer is fermenting now.
+    if (stage === 'og' && action === 'complete' && stored.row.status === 'brewing') set.status = 'fermenting';
+    await tx.update(brews).set(set).where(eq(brews.id, id));
+  });
+}
+
+/** A reading or decision in a stage starts that stage, if it was not started yet. */
+export async function touchStage(tx: DbOrTx, brewId: number, stage: BrewStage, at: Date) {
+  const [row] = await tx
+    .select()
+    .from(brewStagesTable)
+    .where(and(eq(brewStagesTable.brewId, brewId), eq(brewStagesTable.stage, stage)));
+  if (!row) await tx.insert(brewStagesTable).values({ brewId, stage, startedAt: at });
+  else if (!row.startedAt) await tx.update(brewStagesTable).set({ startedAt: at }).where(and(eq(brewStagesTable.brewId, brewId), eq(brewStagesTable.stage, stage)));
+  await tx.update(brews).set({ updatedAt: new Date() }).where(eq(brews.id, brewId));
+}
+
+/**
+ * Replaces the set of clubs the brew day is shared with (empty = private). Each club must be one
+ * the owner belongs to.
+ */
+export async function setBrewSharing(db: DbOrTx, actor: Actor, id: number, clubIds: number[]): Promise<BrewSharing> {
+  await loadBrewForActor(db, actor, id, 'share');
+  const unique = [...new Set(clubIds)].sort((a, b) => a - b);
+  const fields: Record<string, string> = {};
+  clubIds.forEach((clubId, i) => {
+    if (!canShareWithClub(actor, clubId)) fields[`clubIds.${i}`] = 'You can only share with a club you belong to.';
+  });
+  if (Object.keys(fields).length > 0) throw new BadRequest('You can only share with clubs you belong to.', fields);
+  await db.transaction(async (tx) => {
+    const existing = await tx.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, id));
+    const keep = new Set(unique);
+    const gone = existing.map((e) => e.clubId).filter((c) => !keep.has(c));
+    if (gone.length > 0) await tx.delete(brewClubShares).where(and(eq(brewClubShares.brewId, id), inArray(brewClubShares.clubId, gone)));
+    const had = new Set(existing.map((e) => e.clubId));
+    const added = unique.filter((c) => !had.has(c));
+    // Clubs shared earlier keep their original shared_at.
+    if (added.length > 0) await tx.insert(brewClubShares).values(added.map((clubId) => ({ brewId: id, clubId })));
+  });
+  return { brewId: id, clubIds: unique };
+}
+
+export async function addNote(db: DbOrTx, actor: Actor, id: number, input: { body: string; stage: BrewStage | null }): Promise<BrewNote> {
+  await loadBrewForActor(db, actor, id, 'update');
+  const [{ id: noteId }] = await db.insert(brewNotes).values({ brewId: id, kind: 'note', stage: input.stage, body: input.body, authorId: actor.id }).$returningId();
+  const [row] = await db.select().from(brewNotes).where(eq(brewNotes.id, noteId));
+  return toNote(row);
+}
+
+export async function deleteNote(db: DbOrTx, actor: Actor, id: number, noteId: number): Promise<void> {
+  await loadBrewForActor(db, actor, id, 'update');
+  const [row] = await db.select().from(brewNotes).where(and(eq(brewNotes.id, noteId), eq(brewNotes.brewId, id)));
+  if (!row) throw new NotFound('That note was not found.');
+  if (row.kind !== 'note') throw new BadRequest('Entries Wortwise wrote itself stay in the log.');
+  await db.delete(brewNotes).where(eq(brewNotes.id, noteId));
+}
