@@ -5,7 +5,7 @@ import { clubInvitations, clubMemberships } from '../db/schema';
 import { makeUser } from '../db/factories';
 import { hashLinkToken } from '../lib/tokens';
 import { createHarness, waitForMail, type TestHarness } from '../../tests/support/api';
-import { linkToken, makeClubScene } from './test-scene';
+import { linkToken, makeClubScene, makeInvitation } from './test-scene';
 
 let h: TestHarness;
 beforeAll(async () => {
@@ -174,6 +174,18 @@ describe('inviting by e-mail', () => {
     expect(res.status).toBe(410);
     expect(res.body.message).toBe('This invitation was withdrawn by the club’s organiser.');
     expect((await organiser.delete(`/api/clubs/${scene.club.id}/invitations/${sent.body.invitation.id}`)).status).toBe(404);
+  });
+
+  it('lists pending invitations to organisers, marking the expired ones', async () => {
+    const scene = await makeClubScene(h.ctx.db);
+    await makeInvitation(h.ctx.db, { clubId: scene.club.id, email: `fresh-${scene.tag}@example.org`, invitedBy: scene.organiser.id });
+    await makeInvitation(h.ctx.db, { clubId: scene.club.id, email: `stale-${scene.tag}@example.org`, expiresAt: new Date(Date.now() - 60_000) });
+    const organiser = await h.signIn(scene.organiser.email);
+    const res = await organiser.get(`/api/clubs/${scene.club.id}/invitations`);
+    expect(res.status).toBe(200);
+    const byEmail = Object.fromEntries(res.body.map((i: { email: string; expired: boolean }) => [i.email.split('-')[0], i]));
+    expect(byEmail.fresh).toMatchObject({ expired: false, invitedBy: 'Orla Organiser', role: 'member' });
+    expect(byEmail.stale).toMatchObject({ expired: true, invitedBy: null });
   });
 
   it('answers 400 per field for a bad address or role', async () => {

@@ -27,6 +27,7 @@ function toPending(row: ClubInvitation, inviterName: string | null): PendingInvi
     invitedBy: inviterName,
     createdAt: row.createdAt.toISOString(),
     expiresAt: row.expiresAt.toISOString(),
+    expired: row.expiresAt.getTime() <= Date.now(),
   };
 }
 

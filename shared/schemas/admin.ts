@@ -5,7 +5,7 @@ export const adminUsersQuerySchema = z.object({
   pageSize: z.coerce.number({ error: 'Expected a page size.' }).int().min(1).max(100, { error: 'At most 100 per page.' }).default(25),
   q: z.string().trim().max(254).optional(),
 });
-export type AdminUsersQuery = z.input<typeof adminUsersQuerySchema>;
+export type AdminUsersQuery = z.output<typeof adminUsersQuerySchema>;
 
 export interface AdminUser {
   id: number;

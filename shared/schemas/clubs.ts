@@ -99,6 +99,8 @@ export interface PendingInvitation {
   invitedBy: string | null;
   createdAt: string;
   expiresAt: string;
+  /** Past its expiry: the link no longer works; sending again makes a new one. */
+  expired: boolean;
 }
 
 export interface InvitationSent {

@@ -1,4 +1,4 @@
-import { BookOpen, FlaskConical, Gauge, House, Users, type LucideIcon } from 'lucide-react';
+import { BookOpen, FlaskConical, Gauge, House, ShieldCheck, Users, type LucideIcon } from 'lucide-react';
 
 export interface NavItem {
   to: string;
@@ -6,11 +6,16 @@ export interface NavItem {
   icon: LucideIcon;
   /** Shown to visitors who are not signed in. */
   public?: boolean;
+  /** Shown to site admins only (the server refuses everyone else anyway). */
+  admin?: true;
 }
 
 /** The main navigation; features add their entry here when their pages exist. */
 export const navItems: NavItem[] = [
   { to: '/', label: 'Home', icon: House },
+  { to: '/clubs', label: 'Clubs', icon: Users },
+  { to: '/late-boil-check', label: 'Late-boil check', icon: FlaskConical, public: true },
+  { to: '/admin', label: 'Admin', icon: ShieldCheck, admin: true },
 ];
 
 // Icons reserved for the recipe, instrument, brew-day and club pages.

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter } from 'react-router';
+import { createBrowserRouter, redirect } from 'react-router';
 import { meQueryOptions } from '@/lib/auth';
 import { requireSignedIn } from './guards';
 import { RootLayout } from './routes/root-layout';
@@ -24,9 +24,20 @@ export function createAppRouter(queryClient: QueryClient) {
       children: [
         { path: 'sign-in', lazy: withClient(() => import('./routes/sign-in')) },
         { path: 'sign-up', lazy: withClient(() => import('./routes/sign-up')) },
+        { path: 'forgot-password', lazy: withClient(() => import('./routes/forgot-password')) },
+        { path: 'reset-password/:token', lazy: withClient(() => import('./routes/reset-password')) },
+        { path: 'invitations/:token', lazy: withClient(() => import('./routes/invitation')) },
+        { path: 'late-boil-check', lazy: withClient(() => import('./routes/late-boil-check')) },
         {
           loader: requireSignedIn(queryClient),
-          children: [{ index: true, lazy: withClient(() => import('./routes/home')) }],
+          children: [
+            { index: true, lazy: withClient(() => import('./routes/home')) },
+            { path: 'clubs', lazy: withClient(() => import('./routes/clubs')) },
+            { path: 'clubs/:id', lazy: withClient(() => import('./routes/clubs-detail')) },
+            { path: 'admin', loader: () => redirect('/admin/users') },
+            { path: 'admin/users', lazy: withClient(() => import('./routes/admin-users')) },
+            { path: 'admin/mail', lazy: withClient(() => import('./routes/admin-mail')) },
+          ],
         },
         { path: '*', lazy: withClient(() => import('./routes/not-found')) },
       ],

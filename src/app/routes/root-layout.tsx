@@ -10,7 +10,7 @@ export function RootLayout() {
   const { data: me } = useMe();
   const navigate = useNavigate();
   const navigation = useNavigation();
-  const items = navItems.filter((i) => me || i.public);
+  const items = navItems.filter((i) => (me || i.public) && (!i.admin || me?.siteRole === 'admin'));
   return (
     <div className="flex min-h-screen flex-col">
       <header className="no-print bg-cellar-700 text-white">

@@ -1,4 +1,5 @@
 import { Form, Formik } from 'formik';
+import { Link } from 'react-router';
 import { loginSchema, type LoginInput } from '@shared/schemas/auth';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -6,11 +7,11 @@ import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useLogin } from '../api/login';
 
-export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
+export function SignInForm({ onSignedIn, initialEmail = '' }: { onSignedIn: () => void; initialEmail?: string }) {
   const login = useLogin();
   return (
     <Formik<LoginInput>
-      initialValues={{ email: '', password: '' }}
+      initialValues={{ email: initialEmail, password: '' }}
       validate={zodValidate(loginSchema)}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
@@ -30,6 +31,11 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
           <Button type="submit" busy={isSubmitting} className="w-full">
             Sign in
           </Button>
+          <p className="text-center">
+            <Link to="/forgot-password" className="inline-flex min-h-touch items-center font-semibold text-cellar-700 underline">
+              Forgot your password?
+            </Link>
+          </p>
         </Form>
       )}
     </Formik>

@@ -1,0 +1,12 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { InvitationPreview } from '@shared/schemas/clubs';
+import { api } from '@/lib/api-client';
+
+export const getInvitation = (token: string) => api.get<InvitationPreview>(`/api/invitations/${encodeURIComponent(token)}`);
+
+export const invitationQueryOptions = (token: string) =>
+  queryOptions({ queryKey: ['invitations', token], queryFn: () => getInvitation(token), staleTime: 0 });
+
+export function useInvitation(token: string) {
+  return useQuery(invitationQueryOptions(token));
+}
