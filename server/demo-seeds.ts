@@ -1,4 +1,5 @@
 // Each feature registers its demo data here, in order (recipes before brew days, and so on).
 import './recipes/demo-seed';
 import './instruments/demo-seed';
+import './brews/demo-seed';
 export {};

@@ -41,11 +41,16 @@ function chosenOption(outcome: ReturnType<typeof runBoilCheck>, input: BoilCheck
   return option;
 }
 
-export async function addDecision(db: Db, actor: Actor, brewId: number, body: { input: BoilCheckParsed; choice: DecisionChoice; note: string }): Promise<BrewDecision> {
+export async function addDecision(
+  db: Db,
+  actor: Actor,
+  brewId: number,
+  body: { input: BoilCheckParsed; choice: DecisionChoice; note: string },
+  now = new Date(),
+): Promise<BrewDecision> {
   await loadBrewForActor(db, actor, brewId, 'update');
   const outcome = recompute(body.input);
   const chosen = chosenOption(outcome, body.input, body.choice);
-  const now = new Date();
   const id = await db.transaction(async (tx) => {
     const [{ id }] = await tx
       .insert(brewDecisions)

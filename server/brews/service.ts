@@ -273,12 +273,11 @@ function todayIso() {
 }
 
 /** Starts a brew day from a recipe the brewer may read: snapshots its targets and the equipment profile. */
-export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput): Promise<number> {
+export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput, now = new Date()): Promise<number> {
   await loadRecipeForActor(db, actor, input.recipeId, 'read');
   const targets = await getRecipeTargets(db, input.recipeId);
   const equipment = await getEquipmentProfile(db, actor.id);
   return db.transaction(async (tx) => {
-    const now = new Date();
     const [{ id }] = await tx
       .insert(brews)
       .values({
@@ -290,6 +289,8 @@ export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput)
         equipmentSnapshot: equipment,
         currentStage: 'mash',
         notes: '',
+        createdAt: now,
+        updatedAt: now,
       })
       .$returningId();
     await tx.insert(brewStagesTable).values(brewStages.map((stage) => ({ brewId: id, stage, startedAt: stage === 'mash' ? now : null })));
@@ -314,10 +315,9 @@ export async function deleteBrew(db: DbOrTx, actor: Actor, id: number): Promise<
 }
 
 /** Marks a stage started (it is returned to when it was done or skipped), completed or skipped; times are kept. */
-export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: BrewStage, action: BrewStageAction): Promise<void> {
+export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: BrewStage, action: BrewStageAction, now = new Date()): Promise<void> {
   const stored = await loadBrewForActor(db, actor, id, 'update');
   await db.transaction(async (tx) => {
-    const now = new Date();
     const rows = await tx.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)).for('update');
     const current = rows.find((r) => r.stage === stage);
     const next: Partial<typeof brewStagesTable.$inferInsert> =
@@ -355,7 +355,7 @@ export async function touchStage(tx: DbOrTx, brewId: number, stage: BrewStage, a
     .where(and(eq(brewStagesTable.brewId, brewId), eq(brewStagesTable.stage, stage)));
   if (!row) await tx.insert(brewStagesTable).values({ brewId, stage, startedAt: at });
   else if (!row.startedAt) await tx.update(brewStagesTable).set({ startedAt: at }).where(and(eq(brewStagesTable.brewId, brewId), eq(brewStagesTable.stage, stage)));
-  await tx.update(brews).set({ updatedAt: new Date() }).where(eq(brews.id, brewId));
+  await tx.update(brews).set({ updatedAt: at }).where(eq(brews.id, brewId));
 }
 
 /**
@@ -383,9 +383,12 @@ export async function setBrewSharing(db: DbOrTx, actor: Actor, id: number, clubI
   return { brewId: id, clubIds: unique };
 }
 
-export async function addNote(db: DbOrTx, actor: Actor, id: number, input: { body: string; stage: BrewStage | null }): Promise<BrewNote> {
+export async function addNote(db: DbOrTx, actor: Actor, id: number, input: { body: string; stage: BrewStage | null }, now = new Date()): Promise<BrewNote> {
   await loadBrewForActor(db, actor, id, 'update');
-  const [{ id: noteId }] = await db.insert(brewNotes).values({ brewId: id, kind: 'note', stage: input.stage, body: input.body, authorId: actor.id }).$returningId();
+  const [{ id: noteId }] = await db
+    .insert(brewNotes)
+    .values({ brewId: id, kind: 'note', stage: input.stage, body: input.body, authorId: actor.id, createdAt: now })
+    .$returningId();
   const [row] = await db.select().from(brewNotes).where(eq(brewNotes.id, noteId));
   return toNote(row);
 }
