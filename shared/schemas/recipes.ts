@@ -368,7 +368,15 @@ export const listRecipesQuerySchema = z.object({
   page: z.coerce.number({ error: 'Page must be a number.' }).int().min(1, { error: 'Pages start at 1.' }).default(1),
   pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int().min(1).max(100, { error: 'Ask for at most 100 recipes a page.' }).default(20),
 });
-export type ListRecipesQuery = z.input<typeof listRecipesQuerySchema>;
+/** What a client asks for; the server fills in the defaults. */
+export interface ListRecipesQuery {
+  q?: string;
+  scope?: RecipeScope;
+  sort?: RecipeSort;
+  dir?: 'asc' | 'desc';
+  page?: number;
+  pageSize?: number;
+}
 
 export interface RecipeListItem {
   id: number;

@@ -13,6 +13,7 @@ export interface NavItem {
 /** The main navigation; features add their entry here when their pages exist. */
 export const navItems: NavItem[] = [
   { to: '/', label: 'Home', icon: House },
+  { to: '/recipes', label: 'Recipes', icon: BookOpen },
   { to: '/clubs', label: 'Clubs', icon: Users },
   { to: '/late-boil-check', label: 'Late-boil check', icon: FlaskConical, public: true },
   { to: '/admin', label: 'Admin', icon: ShieldCheck, admin: true },

@@ -32,6 +32,10 @@ export function createAppRouter(queryClient: QueryClient) {
           loader: requireSignedIn(queryClient),
           children: [
             { index: true, lazy: withClient(() => import('./routes/home')) },
+            { path: 'recipes', lazy: withClient(() => import('./routes/recipes')) },
+            { path: 'recipes/new', lazy: withClient(() => import('./routes/recipes-new')) },
+            { path: 'recipes/:id', lazy: withClient(() => import('./routes/recipes-view')) },
+            { path: 'recipes/:id/edit', lazy: withClient(() => import('./routes/recipes-edit')) },
             { path: 'clubs', lazy: withClient(() => import('./routes/clubs')) },
             { path: 'clubs/:id', lazy: withClient(() => import('./routes/clubs-detail')) },
             { path: 'admin', loader: () => redirect('/admin/users') },
