@@ -479,6 +479,8 @@ export interface CsvPreview {
   /** Rows that are already in the log (or twice in the file): they will be skipped. */
   duplicateCount: number;
   newCount: number;
+  /** Why the mapping cannot be used yet, per field (e.g. `columns.value`); null when it can. */
+  mappingErrors: Record<string, string> | null;
 }
 
 export interface CsvImportResult {

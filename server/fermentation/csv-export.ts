@@ -1,0 +1,56 @@
+/**
+ * The whole fermentation log as our CSV (docs/fermentation-csv.md): the columns the import reads,
+ * then three for people (corrected value, estimate, source) that the import ignores. Values are
+ * written at the precision the duplicate check uses, so importing an export adds nothing.
+ */
+import { CSV_COLUMNS, CSV_EXPORT_EXTRA_COLUMNS, roundFor, toCsvLine } from '@shared/fermentation';
+import type { FermentationRaw } from '@shared/schemas/fermentation';
+import type { Actor } from '../auth/permissions';
+import { loadBrewForActor } from '../brews/service';
+import type { Db } from '../db/client';
+import { readingRows } from './service';
+
+/** A spreadsheet would run text starting with = + - @ as a formula; an apostrophe stops that. */
+function safeText(text: string) {
+  return /^[=+\-@]/.test(text) ? `'${text}` : text;
+}
+
+function valueAndUnit(raw: FermentationRaw): { value: string; unit: string; sample: string; original: string } {
+  switch (raw.method) {
+    case 'hydrometer':
+      return { value: roundFor('sg', raw.sg), unit: 'sg', sample: raw.sampleTempC === null ? '' : roundFor('c', raw.sampleTempC), original: '' };
+    case 'refractometer':
+      return { value: roundFor('brix', raw.brix), unit: 'brix', sample: '', original: roundFor('brix', raw.originalBrix) };
+    case 'thermometer':
+      return { value: roundFor('c', raw.tempC), unit: 'c', sample: '', original: '' };
+  }
+}
+
+export async function exportCsv(db: Db, actor: Actor, brewId: number): Promise<{ filename: string; body: string }> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  const rows = await readingRows(db, brewId);
+  const lines = [toCsvLine([...CSV_COLUMNS, ...CSV_EXPORT_EXTRA_COLUMNS])];
+  for (const r of rows) {
+    const raw = r.raw as FermentationRaw;
+    const { value, unit, sample, original } = valueAndUnit(raw);
+    const snapshot = r.instrumentSnapshot as { name?: string };
+    lines.push(
+      toCsvLine([
+        r.takenAt.toISOString(),
+        r.kind,
+        value,
+        unit,
+        sample,
+        original,
+        // The common-practice stand-ins have no saved instrument to name.
+        r.instrumentId === null ? '' : safeText(snapshot.name ?? ''),
+        safeText(r.note),
+        r.kind === 'gravity' ? r.correctedValue.toFixed(4) : r.correctedValue.toFixed(2),
+        r.estimate ? 'yes' : 'no',
+        r.source,
+      ]),
+    );
+  }
+  const slug = stored.row.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'brew';
+  return { filename: `${slug}-fermentation.csv`, body: `${lines.join('\r\n')}\r\n` };
+}

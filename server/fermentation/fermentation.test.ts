@@ -1,0 +1,215 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { count, eq } from 'drizzle-orm';
+import { createHarness, type TestHarness } from '../../tests/support/api';
+import { makeInstrument } from '../brews/test-scene';
+import { brewNotes, fermentationReadings } from '../db/schema';
+import { makeFermentationScene } from './test-scene';
+
+let h: TestHarness;
+beforeAll(async () => {
+  h = await createHarness();
+});
+
+async function readingCount(brewId: number) {
+  const [row] = await h.ctx.db.select({ n: count() }).from(fermentationReadings).where(eq(fermentationReadings.brewId, brewId));
+  return row.n;
+}
+
+describe('the fermentation log', () => {
+  it('corrects a hydrometer reading for sample temperature with the instrument it was taken with', async () => {
+    const s = await makeFermentationScene(h);
+    const hydrometer = await makeInstrument(s, { kind: 'hydrometer', name: 'Trial-jar hydrometer', calibrationTempC: 20 });
+    const res = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/readings`)
+      .send({ method: 'hydrometer', instrumentId: hydrometer, sg: 1.01, sampleTempC: 30, takenAt: s.day(12) });
+    expect(res.status).toBe(201);
+    // Water density (CRC Handbook table, as in Tanaka et al. 2001): 998.2071 kg/m³ at 20 °C,
+    // 995.6502 kg/m³ at 30 °C, so 1.010 read at 30 °C is 1.010 × 998.2071 / 995.6502 at 20 °C.
+    expect(res.body.reading.corrected).toBeCloseTo((1.01 * 998.2071) / 995.6502, 5);
+    expect(res.body.reading.instrument).toMatchObject({ instrumentId: hydrometer, name: 'Trial-jar hydrometer', calibrationTempC: 20 });
+    expect(res.body.reading.day).toBeCloseTo(12, 6);
+    expect(res.body.log.verdict.state).toBe('too-early');
+  });
+
+  it('labels a refractometer reading as an alcohol-corrected estimate and keeps the original Brix it used', async () => {
+    const s = await makeFermentationScene(h);
+    const res = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/readings`)
+      .send({ method: 'refractometer', brix: 6.2, originalBrix: 12.8, takenAt: s.day(12) });
+    expect(res.status).toBe(201);
+    expect(res.body.reading.estimate).toBe(true);
+    expect(res.body.reading.raw).toMatchObject({ brix: 6.2, originalBrix: 12.8 });
+    expect(res.body.reading.correction).toMatchObject({ kind: 'wcf-alcohol', originalBrix: 12.8, formula: 'terrill-2011-cubic' });
+    expect(res.body.reading.warnings.join(' ')).toMatch(/estimate/);
+  });
+
+  // Common practice, no source: two hydrometer readings two days apart after day 12 that agree.
+  it('changes its verdict from too early to still moving to stable as readings come in', async () => {
+    const s = await makeFermentationScene(h);
+    const add = (day: number, sg: number) =>
+      s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg, sampleTempC: 20, takenAt: s.day(day) });
+    expect((await add(3, 1.02)).body.log.verdict.state).toBe('too-early');
+    expect((await add(12, 1.016)).body.log.verdict.state).toBe('too-early');
+    const moving = await add(14, 1.012);
+    expect(moving.body.log.verdict.state).toBe('moving');
+    expect(moving.body.log.verdict.reason).toMatch(/still going/);
+    const stable = await add(16, 1.012);
+    expect(stable.body.log.verdict).toMatchObject({ state: 'stable', needsHydrometer: false });
+    // Apparent attenuation against the brew day's OG 1.050: (1.050 − 1.012) / 0.050 = 76 %.
+    expect(stable.body.log.progress.current.apparentAttenuation).toBeCloseTo(0.76, 6);
+    expect(stable.body.log.progress.current.abvSimple).toBeCloseTo((1.05 - 1.012) * 131.25, 6);
+  });
+
+  it('never calls refractometer estimates alone stable', async () => {
+    const s = await makeFermentationScene(h);
+    for (const day of [12, 14, 16]) {
+      await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'refractometer', brix: 6, originalBrix: 12.4, takenAt: s.day(day) }).expect(201);
+    }
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.verdict).toMatchObject({ state: 'too-early', needsHydrometer: true });
+    expect(log.body.verdict.reason).toMatch(/hydrometer/);
+  });
+
+  it("summarises fermenter temperature and flags readings outside the recipe's 18–20 °C", async () => {
+    const s = await makeFermentationScene(h, { pitchedDaysAgo: 3 });
+    const now = Date.now();
+    for (const [hoursAgo, tempC] of [
+      [60, 18.5],
+      [30, 21.5],
+      [10, 19],
+      [2, 17.5],
+    ]) {
+      await s.owner.agent
+        .post(`/api/brews/${s.brewId}/fermentation/readings`)
+        .send({ method: 'thermometer', tempC, takenAt: new Date(now - hoursAgo * 3_600_000).toISOString() })
+        .expect(201);
+    }
+    const { body } = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(body.temperature.target).toEqual({ minC: 18, maxC: 20 });
+    expect(body.temperature.last24h).toMatchObject({ minC: 17.5, maxC: 19, count: 2 });
+    expect(body.temperature.overall).toMatchObject({ minC: 17.5, maxC: 21.5, count: 4 });
+    expect(body.temperature.excursions.map((e: { direction: string; byC: number }) => [e.direction, Number(e.byC.toFixed(2))])).toEqual([
+      ['warm', 1.5],
+      ['cold', 0.5],
+    ]);
+  });
+
+  it.each([
+    ['before pitching', (s: { day: (n: number) => string }) => ({ method: 'hydrometer', sg: 1.02, sampleTempC: 20, takenAt: s.day(-1) }), 'takenAt', /before the yeast was pitched/],
+    ['in the future', () => ({ method: 'hydrometer', sg: 1.02, sampleTempC: 20, takenAt: new Date(Date.now() + 3 * 86_400_000).toISOString() }), 'takenAt', /future/],
+    ['a gravity of 1.5', () => ({ method: 'hydrometer', sg: 1.5, sampleTempC: 20 }), 'sg', /0.980 and 1.200/],
+    ['a hot sample', () => ({ method: 'hydrometer', sg: 1.02, sampleTempC: 80 }), 'sampleTempC', /between 0 and 60 °C/],
+    ['a Brix above the original', () => ({ method: 'refractometer', brix: 14, originalBrix: 12 }), 'brix', /only lowers it/],
+    ['a fermenter at 90 °C', () => ({ method: 'thermometer', tempC: 90 }), 'tempC', /Check the thermometer/],
+  ])('refuses a reading %s with a message under the field, and saves nothing', async (_what, body, field, message) => {
+    const s = await makeFermentationScene(h);
+    const res = await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send(body(s));
+    expect(res.status).toBe(400);
+    expect(res.body.fields[field]).toMatch(message);
+    expect(await readingCount(s.brewId)).toBe(0);
+  });
+
+  it('stores a retried reading once', async () => {
+    const s = await makeFermentationScene(h);
+    const body = { method: 'hydrometer', sg: 1.014, sampleTempC: 20, takenAt: s.day(13) };
+    const first = await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send(body);
+    const again = await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send(body);
+    expect([first.status, again.status]).toEqual([201, 200]);
+    expect(again.body).toMatchObject({ duplicate: true, reading: { id: first.body.reading.id } });
+    expect(await readingCount(s.brewId)).toBe(1);
+  });
+
+  it('asks for the pitch time before taking readings', async () => {
+    const s = await makeFermentationScene(h);
+    const other = await s.owner.agent.post('/api/brews').send({ recipeId: s.recipeId }).expect(201);
+    const res = await s.owner.agent.post(`/api/brews/${other.body.id}/fermentation/readings`).send({ method: 'thermometer', tempC: 19 });
+    expect(res.status).toBe(409);
+    expect(res.body.message).toMatch(/no pitch time/);
+  });
+});
+
+describe('who may see and write the log', () => {
+  it('lets club members of a shared brew read it; only the owner writes; everyone else gets 404', async () => {
+    const s = await makeFermentationScene(h, { shared: true });
+    await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'thermometer', tempC: 19, takenAt: s.day(1) }).expect(201);
+    for (const reader of [s.member, s.mentor]) {
+      const log = await reader.agent.get(`/api/brews/${s.brewId}/fermentation`);
+      expect(log.status).toBe(200);
+      expect(log.body.brew.isOwner).toBe(false);
+      expect(log.body.remindersEnabled).toBeNull();
+      await reader.agent.get(`/api/brews/${s.brewId}/fermentation.csv`).expect(200);
+      const write = await reader.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'thermometer', tempC: 19 });
+      expect(write.status).toBe(403);
+      const pack = await reader.agent
+        .post(`/api/brews/${s.brewId}/fermentation/packaging`)
+        .send({ container: 'keg', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'none', override: true, overrideReason: 'not mine to decide' });
+      expect(pack.status).toBe(403);
+    }
+    await s.other.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(404);
+    await s.other.agent.get(`/api/brews/${s.brewId}/fermentation.csv`).expect(404);
+    await s.other.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'thermometer', tempC: 19 }).expect(404);
+    expect(await readingCount(s.brewId)).toBe(1);
+  });
+
+  it('refuses an instrument of another brewer', async () => {
+    const s = await makeFermentationScene(h);
+    const foreign = await s.other.agent.post('/api/instruments').send({ kind: 'hydrometer', name: 'Not yours' }).expect(201);
+    const res = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/readings`)
+      .send({ method: 'hydrometer', instrumentId: foreign.body.id, sg: 1.012, sampleTempC: 20 });
+    expect(res.status).toBe(400);
+    expect(res.body.fields.instrumentId).toMatch(/not found/);
+  });
+});
+
+describe('packaging', () => {
+  const keg = { container: 'keg', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'none' };
+
+  it('refuses to package before the verdict is stable unless the brewer overrides, and records the override for the mentor', async () => {
+    const s = await makeFermentationScene(h, { shared: true });
+    await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg: 1.014, sampleTempC: 20, takenAt: s.day(12) }).expect(201);
+    const refused = await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/packaging`).send(keg);
+    expect(refused.status).toBe(409);
+    expect(refused.body.fields.override).toMatch(/Not stable yet/);
+    const noReason = await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/packaging`).send({ ...keg, override: true });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.fields.overrideReason).toMatch(/why/);
+
+    const ok = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/packaging`)
+      .send({ ...keg, override: true, overrideReason: 'Moving house tomorrow; kegged cold and kept under watch.' });
+    expect(ok.status).toBe(201);
+    expect(ok.body.packaging).toMatchObject({ override: true, verdictState: 'too-early', overrideReason: 'Moving house tomorrow; kegged cold and kept under watch.' });
+    expect(ok.body.brew.status).toBe('packaged');
+
+    const seenByMentor = await s.mentor.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(seenByMentor.body.packaging).toMatchObject({ override: true, overrideReason: expect.stringMatching(/Moving house/) });
+    const notes = await h.ctx.db.select().from(brewNotes).where(eq(brewNotes.brewId, s.brewId));
+    expect(notes.map((n) => n.body).join('\n')).toMatch(/before the final gravity was proven stable/);
+
+    const twice = await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/packaging`).send({ ...keg, override: true, overrideReason: 'again, again' });
+    expect(twice.status).toBe(409);
+  });
+
+  it('works out priming sugar with primingSugarG once the gravity is stable', async () => {
+    const s = await makeFermentationScene(h);
+    for (const day of [12, 15]) {
+      await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg: 1.011, sampleTempC: 20, takenAt: s.day(day) }).expect(201);
+    }
+    const res = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/packaging`)
+      .send({ container: 'bottles', volumeL: 20, warmestTempC: 20, targetCo2Volumes: 2.5, sugar: 'sucrose' });
+    expect(res.status).toBe(201);
+    // Residual CO2 at 20 °C (68 °F) from the quadratic in shared/brewmath/priming.ts (recalled from
+    // memory): 3.0378 − 0.050062·68 + 0.00026555·68² = 0.8615 volumes. Sucrose: 342.30 g gives
+    // 4 × 44.01 g CO2 (stoichiometry), and one volume is 1.9635 g/L, so 3.818 g/L per volume:
+    // (2.5 − 0.8615) × 3.818 × 20 L = 125.1 g.
+    expect(res.body.packaging.residualCo2Volumes).toBeCloseTo(0.8615, 3);
+    expect(res.body.packaging.primingSugarG).toBeCloseTo(125.1, 0);
+    expect(res.body.packaging).toMatchObject({ override: false, verdictState: 'stable' });
+    await s.owner.agent.delete(`/api/brews/${s.brewId}/fermentation/packaging`).expect(200);
+    const back = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(back.body.packaging).toBeNull();
+    expect(back.body.brew.status).toBe('fermenting');
+  });
+});

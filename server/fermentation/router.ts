@@ -1,0 +1,121 @@
+import { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import { z } from 'zod';
+import { CSV_MAX_BYTES, fermentationReadingInputSchema, fermentationSettingsSchema, packagingInputSchema } from '@shared/schemas/fermentation';
+import { currentUser, requireUser } from '../auth/session';
+import type { AppContext } from '../context';
+import { BadRequest } from '../lib/errors';
+import { handle } from '../lib/handle';
+import { exportCsv } from './csv-export';
+import { importReadings, parseMapping, previewImport } from './csv-import';
+import { addReading, deletePackaging, deleteReading, getLog, recordPackaging, remindersEnabledFor, setRemindersEnabled } from './service';
+
+const idNum = z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' });
+const brewParams = z.object({ brewId: idNum });
+const readingParams = z.object({ brewId: idNum, readingId: idNum });
+const uploadBody = z.object({ mapping: z.string().max(20_000).optional() });
+
+/** One file in memory, at most 5 MB: CSV is read straight from the buffer and never stored. */
+const upload: RequestHandler = multer({ storage: multer.memoryStorage(), limits: { fileSize: CSV_MAX_BYTES, files: 1, fields: 5, fieldSize: 20_000 } }).single('file');
+
+function fileOf(req: { file?: Express.Multer.File }) {
+  if (!req.file) throw new BadRequest('Choose a CSV file to upload.', { file: 'Choose a CSV file to upload.' });
+  return req.file.buffer;
+}
+
+/**
+ * The fermentation log of a brew day: `/api/brews/:brewId/fermentation…`, and the brewer's
+ * reminder setting at `/api/fermentation/settings`. Mounted on the API root before the brew-day
+ * router; it answers only its own paths.
+ */
+export function fermentationRouter(ctx: AppContext) {
+  const { db } = ctx;
+  const router = Router();
+
+  router.get(
+    '/fermentation/settings',
+    requireUser,
+    handle({}, async (_v, req) => ({ remindersEnabled: await remindersEnabledFor(db, currentUser(req).id) })),
+  );
+  router.put(
+    '/fermentation/settings',
+    requireUser,
+    handle({ body: fermentationSettingsSchema }, ({ body }, req) => setRemindersEnabled(db, currentUser(req), body.remindersEnabled)),
+  );
+
+  router.get(
+    '/brews/:brewId/fermentation.csv',
+    requireUser,
+    handle({ params: brewParams }, async ({ params }, req, res) => {
+      const { filename, body } = await exportCsv(db, currentUser(req), params.brewId);
+      res
+        .status(200)
+        .type('text/csv; charset=utf-8')
+        .set('Content-Disposition', `attachment; filename="${filename}"`)
+        .set('Cache-Control', 'no-store')
+        .send(body);
+    }),
+  );
+
+  router.get(
+    '/brews/:brewId/fermentation',
+    requireUser,
+    handle({ params: brewParams }, ({ params }, req) => getLog(db, currentUser(req), params.brewId)),
+  );
+
+  router.post(
+    '/brews/:brewId/fermentation/readings',
+    requireUser,
+    handle({ params: brewParams, body: fermentationReadingInputSchema }, async ({ params, body }, req, res) => {
+      const result = await addReading(db, currentUser(req), params.brewId, body);
+      res.status(result.duplicate ? 200 : 201);
+      return result;
+    }),
+  );
+
+  router.delete(
+    '/brews/:brewId/fermentation/readings/:readingId',
+    requireUser,
+    handle({ params: readingParams }, ({ params }, req) => deleteReading(db, currentUser(req), params.brewId, params.readingId)),
+  );
+
+  router.post(
+    '/brews/:brewId/fermentation/packaging',
+    requireUser,
+    handle({ params: brewParams, body: packagingInputSchema }, async ({ params, body }, req, res) => {
+      const log = await recordPackaging(db, currentUser(req), params.brewId, body);
+      res.status(201);
+      return log;
+    }),
+  );
+
+  router.delete(
+    '/brews/:brewId/fermentation/packaging',
+    requireUser,
+    handle({ params: brewParams }, ({ params }, req) => deletePackaging(db, currentUser(req), params.brewId)),
+  );
+
+  router.post(
+    '/brews/:brewId/fermentation/import/preview',
+    requireUser,
+    upload,
+    handle({ params: brewParams, body: uploadBody }, ({ params, body }, req) =>
+      previewImport(db, currentUser(req), params.brewId, fileOf(req), parseMapping(body.mapping)),
+    ),
+  );
+
+  router.post(
+    '/brews/:brewId/fermentation/import',
+    requireUser,
+    upload,
+    handle({ params: brewParams, body: uploadBody }, async ({ params, body }, req, res) => {
+      const mapping = parseMapping(body.mapping);
+      if (!mapping) throw new BadRequest('Confirm the column mapping first.', { mapping: 'Confirm the column mapping first.' });
+      const result = await importReadings(db, currentUser(req), params.brewId, fileOf(req), mapping);
+      res.status(result.added > 0 ? 201 : 200);
+      return result;
+    }),
+  );
+
+  return router;
+}

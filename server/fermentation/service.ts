@@ -1,0 +1,455 @@
+/**
+ * The fermentation log of a brew day: readings from pitching to packaging, the verdict on final
+ * gravity, and the packaging record. Access goes through the brew day (loadBrewForActor, which
+ * asks server/auth/permissions.ts): club members of a shared brew read the log, only its owner
+ * writes, everyone else gets a 404.
+ */
+import { createHash } from 'node:crypto';
+import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
+import { BrewMathError, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
+import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
+import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
+import {
+  methodKind,
+  type FermentationBrew,
+  type FermentationLog,
+  type FermentationMethod,
+  type FermentationRaw,
+  type FermentationReading,
+  type FermentationReadingBody,
+  type FermentationVerdict,
+  type PackagingBody,
+  type PackagingRecord,
+  type ScheduledReminder,
+} from '@shared/schemas/fermentation';
+import type { InstrumentSnapshot } from '@shared/schemas/instruments';
+import type { RecipeTargets } from '@shared/schemas/recipes';
+import type { Actor } from '../auth/permissions';
+import { loadBrewForActor, type StoredBrew } from '../brews/service';
+import type { Db, DbOrTx } from '../db/client';
+import {
+  brewNotes,
+  brewReadings,
+  brews,
+  fermentationReadings,
+  fermentationReminders,
+  fermentationSettings,
+  packagingRecords,
+  type FermentationReadingRow,
+  type PackagingRecordRow,
+} from '../db/schema';
+import { loadInstrumentSnapshot } from '../instruments/service';
+import { BadRequest, Conflict, NotFound } from '../lib/errors';
+import { scheduleAfterReadings } from './reminders';
+
+const DAY_MS = 86_400_000;
+const iso = (d: Date) => d.toISOString();
+const when = (d: Date) => `${d.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+
+export function dedupeKey(brewId: number, takenAt: Date, method: FermentationMethod, value: number) {
+  return createHash('sha256').update(dedupeMaterial(brewId, takenAt, method, value), 'utf8').digest('hex');
+}
+
+export function isDuplicateKeyError(error: unknown) {
+  const e = error as { code?: string; cause?: { code?: string } };
+  return e?.code === 'ER_DUP_ENTRY' || e?.cause?.code === 'ER_DUP_ENTRY';
+}
+
+// ---------------------------------------------------------------------------------------------
+// Reading rows
+
+export function primaryOf(raw: FermentationRaw): number {
+  return raw.method === 'hydrometer' ? raw.sg : raw.method === 'refractometer' ? raw.brix : raw.tempC;
+}
+
+/** One reading through its instrument's calibration; impossible input is a 400 under the field typed. */
+export function correctRaw(snapshot: InstrumentSnapshot, raw: FermentationRaw): CorrectedReading {
+  try {
+    switch (raw.method) {
+      case 'hydrometer': {
+        if (snapshot.kind !== 'hydrometer') break;
+        // Without a sample temperature (a CSV row) the reading is taken as read at calibration temperature.
+        const result = correctReading(snapshot, { sg: raw.sg, sampleTempC: raw.sampleTempC ?? snapshot.calibrationTempC });
+        if (raw.sampleTempC === null) {
+          result.warnings.push(`No sample temperature was given, so this reading is taken as read at ${snapshot.calibrationTempC} °C, uncorrected.`);
+        }
+        return result;
+      }
+      case 'refractometer':
+        if (snapshot.kind !== 'refractometer') break;
+        return correctReading(snapshot, { brix: raw.brix, originalBrix: raw.originalBrix, fermentationStarted: true });
+      case 'thermometer':
+        if (snapshot.kind !== 'thermometer') break;
+        return correctReading(snapshot, { tempC: raw.tempC });
+    }
+  } catch (error) {
+    if (error instanceof BrewMathError) throw new BadRequest(error.message, { [error.field ?? '_']: error.message });
+    throw error;
+  }
+  throw new BadRequest(`That instrument is a ${snapshot.kind}, not a ${raw.method}.`, { instrumentId: `Choose a ${raw.method}.` });
+}
+
+export function toFermentationReading(row: FermentationReadingRow, pitchedAt: Date | null): FermentationReading {
+  return {
+    id: row.id,
+    brewId: row.brewId,
+    kind: row.kind,
+    method: row.method,
+    instrumentId: row.instrumentId,
+    instrument: row.instrumentSnapshot as InstrumentSnapshot,
+    raw: row.raw as FermentationRaw,
+    corrected: row.correctedValue,
+    correction: row.correction as Record<string, unknown> | null,
+    estimate: row.estimate,
+    warnings: row.warnings,
+    takenAt: iso(row.takenAt),
+    day: pitchedAt ? (row.takenAt.getTime() - pitchedAt.getTime()) / DAY_MS : 0,
+    note: row.note,
+    source: row.source,
+    createdAt: iso(row.createdAt),
+  };
+}
+
+function toPackaging(row: PackagingRecordRow): PackagingRecord {
+  return {
+    id: row.id,
+    brewId: row.brewId,
+    container: row.container,
+    volumeL: row.volumeL,
+    warmestTempC: row.warmestTempC,
+    targetCo2Volumes: row.targetCo2Volumes,
+    sugar: row.sugar,
+    primingSugarG: row.primingSugarG,
+    residualCo2Volumes: row.residualCo2Volumes,
+    verdictState: row.verdictState,
+    verdictReason: row.verdictReason,
+    override: row.override,
+    overrideReason: row.overrideReason,
+    note: row.note,
+    packagedAt: iso(row.packagedAt),
+    createdAt: iso(row.createdAt),
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// The log
+
+export async function measuredOg(db: DbOrTx, brewId: number): Promise<number | null> {
+  const [row] = await db
+    .select({ value: brewReadings.correctedValue })
+    .from(brewReadings)
+    .where(and(eq(brewReadings.brewId, brewId), eq(brewReadings.kind, 'og')))
+    .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
+    .limit(1);
+  return row?.value ?? null;
+}
+
+export async function remindersEnabledFor(db: DbOrTx, userId: number): Promise<boolean> {
+  const [row] = await db.select({ on: fermentationSettings.remindersEnabled }).from(fermentationSettings).where(eq(fermentationSettings.userId, userId));
+  return row?.on ?? true;
+}
+
+export async function setRemindersEnabled(db: Db, actor: Actor, enabled: boolean) {
+  await db
+    .insert(fermentationSettings)
+    .values({ userId: actor.id, remindersEnabled: enabled })
+    .onDuplicateKeyUpdate({ set: { remindersEnabled: enabled, updatedAt: new Date() } });
+  return { remindersEnabled: enabled };
+}
+
+function targetsOf(stored: StoredBrew): Partial<RecipeTargets> {
+  return (stored.row.targetsSnapshot ?? {}) as Partial<RecipeTargets>;
+}
+
+function brewOf(actor: Actor, stored: StoredBrew, og: number | null): FermentationBrew {
+  const t = targetsOf(stored);
+  const n = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+  return {
+    id: stored.row.id,
+    name: stored.row.name,
+    status: stored.row.status,
+    ownerId: stored.row.ownerId,
+    ownerName: stored.ownerName,
+    isOwner: stored.row.ownerId === actor.id,
+    pitchedAt: stored.row.pitchedAt ? iso(stored.row.pitchedAt) : null,
+    brewedOn: stored.row.brewedOn ?? null,
+    targetOg: n(t.targetOg),
+    targetFg: n(t.targetFg),
+    fermentationTempMinC: n(t.fermentationTempMinC),
+    fermentationTempMaxC: n(t.fermentationTempMaxC),
+    batchVolumeL: n(t.batchVolumeL),
+    og,
+  };
+}
+
+export function verdictFor(rows: readonly FermentationReadingRow[], pitchedAt: Date | null, now: Date): FermentationVerdict | null {
+  if (!pitchedAt) return null;
+  const gravity = rows.filter((r) => r.kind === 'gravity').map((r) => ({ takenAt: r.takenAt, sg: r.correctedValue, estimate: r.estimate }));
+  return fermentationVerdict(gravity, pitchedAt, now);
+}
+
+export async function readingRows(db: DbOrTx, brewId: number) {
+  return db.select().from(fermentationReadings).where(eq(fermentationReadings.brewId, brewId)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id));
+}
+
+export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date()): Promise<FermentationLog> {
+  const brewId = stored.row.id;
+  const isOwner = stored.row.ownerId === actor.id;
+  const [rows, og, [packagingRow], reminderRows, enabled] = await Promise.all([
+    readingRows(db, brewId),
+    measuredOg(db, brewId),
+    db.select().from(packagingRecords).where(eq(packagingRecords.brewId, brewId)),
+    isOwner
+      ? db.select().from(fermentationReminders).where(eq(fermentationReminders.brewId, brewId)).orderBy(asc(fermentationReminders.dueAt))
+      : Promise.resolve([]),
+    isOwner ? remindersEnabledFor(db, actor.id) : Promise.resolve(null),
+  ]);
+  const pitchedAt = stored.row.pitchedAt;
+  const brew = brewOf(actor, stored, og);
+  const range =
+    brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
+  const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
+  const gravity = rows.filter((r) => r.kind === 'gravity');
+  const latest = gravity.length ? gravity[gravity.length - 1] : null;
+  const reminders: ScheduledReminder[] = reminderRows.map((r) => ({
+    kind: r.kind,
+    dueAt: iso(r.dueAt),
+    sentAt: r.sentAt ? iso(r.sentAt) : null,
+    outcome: r.outcome,
+  }));
+  return {
+    brew,
+    readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
+    verdict: verdictFor(rows, pitchedAt, now),
+    temperature: temperatureSummary(temps, range, now),
+    progress: fermentationProgress({
+      og,
+      targetOg: brew.targetOg,
+      targetFg: brew.targetFg,
+      current: latest ? { sg: latest.correctedValue, estimate: latest.estimate, takenAt: iso(latest.takenAt) } : null,
+    }),
+    packaging: packagingRow ? toPackaging(packagingRow) : null,
+    remindersEnabled: enabled,
+    reminders,
+    now: iso(now),
+  };
+}
+
+export async function getLog(db: Db, actor: Actor, brewId: number): Promise<FermentationLog> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  return assembleLog(db, actor, stored);
+}
+
+/** The brew must have a pitch time, and a reading must fall between it and now. */
+export function requirePitched(stored: StoredBrew): Date {
+  const pitchedAt = stored.row.pitchedAt;
+  if (!pitchedAt) {
+    throw new Conflict('This brew day has no pitch time yet. Log the pitch temperature with "yeast pitched" on the brew day first: fermentation counts its days from there.');
+  }
+  return pitchedAt;
+}
+
+export function checkTakenAt(takenAt: Date, pitchedAt: Date, now: Date, field = 'takenAt') {
+  if (takenAt.getTime() < pitchedAt.getTime()) {
+    const message = `${when(takenAt)} is before the yeast was pitched (${when(pitchedAt)}). Check the date and time.`;
+    throw new BadRequest(message, { [field]: message });
+  }
+  if (takenAt.getTime() > now.getTime() + 5 * 60_000) {
+    const message = 'A reading cannot be taken in the future. Check the date and time.';
+    throw new BadRequest(message, { [field]: message });
+  }
+}
+
+async function snapshotFor(db: DbOrTx, actor: Actor, method: FermentationMethod, instrumentId: number | null): Promise<InstrumentSnapshot> {
+  if (instrumentId === null) return defaultSnapshot(method);
+  try {
+    return await loadInstrumentSnapshot(db, actor, instrumentId, { kind: method, field: 'instrumentId' });
+  } catch (error) {
+    if (error instanceof NotFound) throw new BadRequest('Pick one of your own instruments.', { instrumentId: 'That instrument was not found; pick one of your own.' });
+    throw error;
+  }
+}
+
+function rawOf(body: FermentationReadingBody): FermentationRaw {
+  switch (body.method) {
+    case 'hydrometer':
+      return { method: 'hydrometer', sg: body.sg, sampleTempC: body.sampleTempC };
+    case 'refractometer':
+      return { method: 'refractometer', brix: body.brix, originalBrix: body.originalBrix, originalBrixSource: 'entered' };
+    case 'thermometer':
+      return { method: 'thermometer', tempC: body.tempC };
+  }
+}
+
+/**
+ * Adds one reading. The same reading sent twice (a retry on a flaky connection) is stored once:
+ * the second answer says `duplicate` and returns the first.
+ */
+export async function addReading(db: Db, actor: Actor, brewId: number, body: FermentationReadingBody, now = new Date()) {
+  const stored = await loadBrewForActor(db, actor, brewId, 'update');
+  const pitchedAt = requirePitched(stored);
+  const takenAt = body.takenAt ? new Date(body.takenAt) : now;
+  checkTakenAt(takenAt, pitchedAt, now);
+  const snapshot = await snapshotFor(db, actor, body.method, body.instrumentId);
+  const raw = rawOf(body);
+  const { corrected, correction, warnings } = correctRaw(snapshot, raw);
+  const key = dedupeKey(brewId, takenAt, body.method, primaryOf(raw));
+  let duplicate = false;
+  let id: number;
+  try {
+    [{ id }] = await db
+      .insert(fermentationReadings)
+      .values({
+        brewId,
+        kind: methodKind[body.method],
+        method: body.method,
+        instrumentId: snapshot.instrumentId,
+        instrumentSnapshot: snapshot,
+        raw,
+        correctedValue: corrected,
+        correction,
+        warnings,
+        estimate: correction.kind === 'wcf-alcohol',
+        takenAt,
+        note: body.note,
+        source: 'manual',
+        dedupeKey: key,
+        createdBy: actor.id,
+      })
+      .$returningId();
+  } catch (error) {
+    if (!isDuplicateKeyError(error)) throw error;
+    duplicate = true;
+    const [existing] = await db
+      .select({ id: fermentationReadings.id })
+      .from(fermentationReadings)
+      .where(and(eq(fermentationReadings.brewId, brewId), eq(fermentationReadings.dedupeKey, key)));
+    id = existing.id;
+  }
+  const log = await assembleLog(db, actor, stored, now);
+  if (!duplicate) await scheduleAfterReadings(db, stored, log.verdict, now);
+  const reading = log.readings.find((r) => r.id === id)!;
+  return { reading, duplicate, log };
+}
+
+export async function deleteReading(db: Db, actor: Actor, brewId: number, readingId: number) {
+  const stored = await loadBrewForActor(db, actor, brewId, 'update');
+  const [row] = await db
+    .select({ id: fermentationReadings.id })
+    .from(fermentationReadings)
+    .where(and(eq(fermentationReadings.id, readingId), eq(fermentationReadings.brewId, brewId)));
+  if (!row) throw new NotFound('That reading was not found.');
+  await db.delete(fermentationReadings).where(eq(fermentationReadings.id, readingId));
+  return assembleLog(db, actor, stored);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Packaging
+
+function brewMath<T>(fn: () => T, fieldMap: Record<string, string>): T {
+  try {
+    return fn();
+  } catch (error) {
+    if (error instanceof BrewMathError) {
+      const field = error.field ? (fieldMap[error.field] ?? error.field) : '_';
+      throw new BadRequest(error.message, { [field]: error.message });
+    }
+    throw error;
+  }
+}
+
+/**
+ * Records how the beer was packaged. Before the verdict is "stable" the brewer must say so
+ * explicitly (`override` and a reason); the override is kept with the record and written to the
+ * brew day's log, where a club mentor reads it.
+ */
+export async function recordPackaging(db: Db, actor: Actor, brewId: number, body: PackagingBody, now = new Date()) {
+  const stored = await loadBrewForActor(db, actor, brewId, 'update');
+  const pitchedAt = requirePitched(stored);
+  const packagedAt = body.packagedAt ? new Date(body.packagedAt) : now;
+  checkTakenAt(packagedAt, pitchedAt, now, 'packagedAt');
+  const rows = await readingRows(db, brewId);
+  const verdict = verdictFor(rows, pitchedAt, now)!;
+  if (verdict.state !== 'stable' && !body.override) {
+    throw new Conflict('The final gravity is not proven stable yet: bottles filled before fermentation ends can burst.', {
+      override: `Not stable yet: ${verdict.reason} To package anyway, tick the override and say why.`,
+    });
+  }
+  const fields = { volumeL: 'volumeL', warmestTempC: 'warmestTempC', targetCo2Volumes: 'targetCo2Volumes', sugar: 'sugar' };
+  const residual = brewMath(() => residualCo2Volumes(body.warmestTempC), fields);
+  const grams =
+    body.sugar === 'none'
+      ? null
+      : brewMath(() => primingSugarG({ volumeL: body.volumeL, warmestTempC: body.warmestTempC, targetCo2Volumes: body.targetCo2Volumes, sugar: body.sugar as 'sucrose' }), fields);
+  const override = verdict.state !== 'stable' && body.override;
+  try {
+    await db.transaction(async (tx) => {
+      await tx.insert(packagingRecords).values({
+        brewId,
+        container: body.container,
+        volumeL: body.volumeL,
+        warmestTempC: body.warmestTempC,
+        targetCo2Volumes: body.targetCo2Volumes,
+        sugar: body.sugar,
+        primingSugarG: grams,
+        residualCo2Volumes: residual,
+        verdictState: verdict.state,
+        verdictReason: verdict.reason,
+        override,
+        overrideReason: override ? body.overrideReason : '',
+        note: body.note,
+        packagedAt,
+        createdBy: actor.id,
+      });
+      await tx.update(brews).set({ status: 'packaged', updatedAt: now }).where(eq(brews.id, brewId));
+      if (override) {
+        await tx.insert(brewNotes).values({
+          brewId,
+          kind: 'note',
+          stage: null,
+          body: `Packaged before the final gravity was proven stable (verdict: ${verdict.state}). Reason given: ${body.overrideReason}`,
+          details: { source: 'fermentation', packagingOverride: true, verdict: verdict.state, verdictReason: verdict.reason },
+          authorId: actor.id,
+        });
+      }
+    });
+  } catch (error) {
+    if (isDuplicateKeyError(error)) throw new Conflict('This brew is already packaged. Undo that record first to change it.');
+    throw error;
+  }
+  return assembleLog(db, actor, { ...stored, row: { ...stored.row, status: 'packaged' } }, now);
+}
+
+export async function deletePackaging(db: Db, actor: Actor, brewId: number) {
+  const stored = await loadBrewForActor(db, actor, brewId, 'update');
+  await db.transaction(async (tx) => {
+    const deleted = await tx.delete(packagingRecords).where(eq(packagingRecords.brewId, brewId));
+    if ((deleted[0] as { affectedRows?: number }).affectedRows === 0) throw new NotFound('This brew has no packaging record.');
+    await tx.update(brews).set({ status: 'fermenting', updatedAt: new Date() }).where(eq(brews.id, brewId));
+  });
+  return assembleLog(db, actor, { ...stored, row: { ...stored.row, status: 'fermenting' } });
+}
+
+/** Gravity readings taken after a moment: did the brewer read again since a reminder was set? */
+export async function gravityReadAfter(db: DbOrTx, brewId: number, after: Date): Promise<boolean> {
+  const [row] = await db
+    .select({ id: fermentationReadings.id })
+    .from(fermentationReadings)
+    .where(and(eq(fermentationReadings.brewId, brewId), eq(fermentationReadings.kind, 'gravity'), gt(fermentationReadings.takenAt, after)))
+    .limit(1);
+  return Boolean(row);
+}
+
+export async function existingKeys(db: DbOrTx, brewId: number, keys: string[]): Promise<Set<string>> {
+  const found = new Set<string>();
+  for (let i = 0; i < keys.length; i += 1000) {
+    const chunk = keys.slice(i, i + 1000);
+    if (chunk.length === 0) continue;
+    const rows = await db
+      .select({ key: fermentationReadings.dedupeKey })
+      .from(fermentationReadings)
+      .where(and(eq(fermentationReadings.brewId, brewId), inArray(fermentationReadings.dedupeKey, chunk)));
+    for (const r of rows) found.add(r.key);
+  }
+  return found;
+}
