@@ -11,6 +11,7 @@ import type { AppContext } from './context';
 import { clubsRouter, invitationsRouter } from './clubs/router';
 import { calcRouter } from './calc/router';
 import { equipmentRouter } from './equipment/router';
+import { fermentationRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
@@ -42,6 +43,7 @@ export function createApp(ctx: AppContext) {
   api.use('/recipes', recipesRouter(ctx));
   api.use('/instruments', instrumentsRouter(db));
   api.use('/equipment', equipmentRouter(db));
+  api.use(fermentationRouter(ctx));
   api.use('/brews', brewsRouter(ctx));
   api.use(apiNotFound);
   app.use('/api', api);

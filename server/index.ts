@@ -2,6 +2,7 @@ import { createApp } from './app';
 import type { AppContext } from './context';
 import { createDb } from './db/client';
 import { loadEnv } from './env';
+import { startReminderWorker } from './fermentation/reminders';
 import { createMailer } from './mail/mailer';
 
 /** Starts the HTTP server; resolves with a function that shuts it down gracefully. */
@@ -15,10 +16,13 @@ export async function startServer(env = loadEnv()) {
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : env.PORT;
   console.log(`Wortwise is serving on http://${env.HOST}:${port}`);
+  // Fermentation reminders are scheduled in the database; tests run the worker themselves.
+  const stopReminders = env.NODE_ENV === 'test' ? null : startReminderWorker(ctx);
   return {
     port,
     ctx,
     async stop() {
+      stopReminders?.();
       await new Promise<void>((resolve) => {
         server.close(() => resolve());
         server.closeIdleConnections();
