@@ -21,7 +21,9 @@ export function useResetPassword(token: string) {
   return useMutation({
     mutationFn: (input: PasswordResetInput) => resetPassword(token, input),
     onSuccess: (me) => {
-      queryClient.clear();
+      // Whoever was signed in on this device before is gone; keep only this link's status, so
+      // the page does not ask about the link again (it is used up now) while it navigates away.
+      queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== 'password-reset' });
       queryClient.setQueryData(meQueryOptions().queryKey, me);
     },
   });
