@@ -326,8 +326,8 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
       .where(and(eq(fermentationReadings.brewId, brewId), eq(fermentationReadings.dedupeKey, key)));
     id = existing.id;
   }
+  if (!duplicate) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), pitchedAt, now), now);
   const log = await assembleLog(db, actor, stored, now);
-  if (!duplicate) await scheduleAfterReadings(db, stored, log.verdict, now);
   const reading = log.readings.find((r) => r.id === id)!;
   return { reading, duplicate, log };
 }
