@@ -44,7 +44,8 @@ export function QuantityField({ name, kind, label, hint, className = '', size = 
   const lastUnitKey = useRef(unitKey);
 
   useEffect(() => {
-    if (field.value !== lastSet.current || unitKey !== lastUnitKey.current) {
+    // Object.is: NaN (text that is not a number yet, such as a lone "-") equals itself here.
+    if (!Object.is(field.value, lastSet.current) || unitKey !== lastUnitKey.current) {
       lastSet.current = field.value;
       lastUnitKey.current = unitKey;
       setText(shownText(kind, units, field.value));

@@ -35,7 +35,7 @@ export function NumberField({ name, label, unit, hint, className = '', toShown =
 
   // A value set from outside (a reset, "load latest", a suggested rate) is shown afresh.
   useEffect(() => {
-    if (field.value !== lastSet.current) {
+    if (!Object.is(field.value, lastSet.current)) {
       lastSet.current = field.value;
       setText(show(field.value, toShown, decimals));
     }

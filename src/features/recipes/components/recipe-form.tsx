@@ -217,7 +217,7 @@ function BasicsSection() {
   return (
     <Section title="Recipe">
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField name="name" label="Name" autoComplete="off" />
+        <TextField name="name" label="Recipe name" autoComplete="off" />
         <TextField name="style" label="Style" autoComplete="off" hint="Free text, e.g. Pale ale." />
         <div className="sm:col-span-2">
           <TextArea name="notes" label="Notes" />
@@ -279,7 +279,16 @@ function formatGap(units: Units, estimate: number, target: number) {
 }
 
 /** Estimated OG from the fermentables beside the target, and what the target pair means. */
-export function TargetsPanel({ values, units }: { values: Pick<RecipeFormValues, 'fermentables' | 'efficiency' | 'batchVolumeL' | 'targetOg' | 'targetFg'>; units: Units }) {
+export function TargetsPanel({
+  values,
+  units,
+  estimateOnly = false,
+}: {
+  values: Pick<RecipeFormValues, 'fermentables' | 'efficiency' | 'batchVolumeL' | 'targetOg' | 'targetFg'>;
+  units: Units;
+  /** Where the targets are already shown large (the read view): only what the fermentables give. */
+  estimateOnly?: boolean;
+}) {
   const estimate = estimateRecipeOg(values);
   const abv = targetAbv(values.targetOg, values.targetFg);
   const target = typeof values.targetOg === 'number' ? values.targetOg : null;
@@ -303,8 +312,8 @@ export function TargetsPanel({ values, units }: { values: Pick<RecipeFormValues,
     <div className="space-y-3" aria-live="polite">
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <Figure label="Estimated OG" value={estimate.og === null ? '—' : units.format('gravity', estimate.og)} />
-        <Figure label="Target OG" value={target === null ? '—' : units.format('gravity', target)} />
-        <Figure label="ABV (simple)" value={abv ? `${abv.abvPercent.toFixed(1)}\u00a0%` : '—'} />
+        {!estimateOnly && <Figure label="Target OG" value={target === null ? '—' : units.format('gravity', target)} />}
+        {!estimateOnly && <Figure label="ABV (simple)" value={abv ? `${abv.abvPercent.toFixed(1)}\u00a0%` : '—'} />}
         <Figure label="Apparent attenuation" value={abv ? `${Math.round(abv.apparentAttenuation * 100)}\u00a0%` : '—'} />
       </dl>
       {estimate.og === null && <p className="text-sm text-ink-faint">{estimate.reason}</p>}

@@ -14,7 +14,7 @@ import { TargetsPanel } from './recipe-form';
 export function RecipeView({ recipe }: { recipe: Recipe }) {
   const units = useUnits();
   const hopsInOrder = [...recipe.hops].sort((a, b) => b.minutes - a.minutes);
-  const totalGrainKg = recipe.fermentables.reduce((n, f) => n + f.amountKg, 0);
+  const totalKg = recipe.fermentables.reduce((n, f) => n + f.amountKg, 0);
   return (
     <div className="space-y-4">
       <section aria-label="Targets" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
@@ -27,7 +27,7 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
       <Card>
         <h2 className="text-lg font-semibold text-cellar-900">Estimate from the fermentables</h2>
         <div className="mt-3">
-          <TargetsPanel values={recipe} units={units} />
+          <TargetsPanel values={recipe} units={units} estimateOnly />
         </div>
       </Card>
 
@@ -42,7 +42,9 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
                 </span>
                 <span className="shrink-0 text-right tabular-nums">
                   <span className="font-semibold">{units.format('mass', f.amountKg)}</span>
-                  <span className="ml-2 text-sm text-ink-faint">{Math.round((f.amountKg / totalGrainKg) * 100)}&nbsp;%</span>
+                  <span className="ml-2 text-sm text-ink-faint" title="Share of all fermentables by weight">
+                    {Math.round((f.amountKg / totalKg) * 100)}&nbsp;%<span className="sr-only"> of the fermentables by weight</span>
+                  </span>
                 </span>
               </li>
             ))}
