@@ -2,4 +2,5 @@
 import './recipes/demo-seed';
 import './instruments/demo-seed';
 import './brews/demo-seed';
+import './fermentation/demo-seed';
 export {};
