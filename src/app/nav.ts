@@ -14,6 +14,7 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { to: '/', label: 'Home', icon: House },
   { to: '/recipes', label: 'Recipes', icon: BookOpen },
+  { to: '/instruments', label: 'Instruments', icon: Gauge },
   { to: '/clubs', label: 'Clubs', icon: Users },
   { to: '/late-boil-check', label: 'Late-boil check', icon: FlaskConical, public: true },
   { to: '/admin', label: 'Admin', icon: ShieldCheck, admin: true },

@@ -36,6 +36,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: 'recipes/new', lazy: withClient(() => import('./routes/recipes-new')) },
             { path: 'recipes/:id', lazy: withClient(() => import('./routes/recipes-view')) },
             { path: 'recipes/:id/edit', lazy: withClient(() => import('./routes/recipes-edit')) },
+            { path: 'instruments', lazy: withClient(() => import('./routes/instruments')) },
             { path: 'clubs', lazy: withClient(() => import('./routes/clubs')) },
             { path: 'clubs/:id', lazy: withClient(() => import('./routes/clubs-detail')) },
             { path: 'admin', loader: () => redirect('/admin/users') },
