@@ -65,45 +65,48 @@ export function gapInWords(result: Pick<BoilCorrection, 'status' | 'projected' |
   return `About ${points} ${points === 1 ? 'point' : 'points'} ${side}`;
 }
 
-type Feasible = Extract<BoilOption, { feasible: true }>;
+export type FeasibleOption = Extract<BoilOption, { feasible: true }>;
+export type InfeasibleOption = Extract<BoilOption, { feasible: false }>;
+type Feasible = FeasibleOption;
 
-/** The action of a feasible option, e.g. "Add 349 g dry malt extract", "Boil 12 more minutes", "Leave it". */
-export function optionAction(option: Feasible, system: UnitSystem = 'metric'): string {
+export interface ActionParts {
+  /** "Add", "Boil", or '' for "Leave it". */
+  before: string;
+  /** The figure to show biggest: "349 g", "2.1 L", "12", or "Leave it". */
+  amount: string;
+  /** "dry malt extract", "water", "more minutes", or ''. */
+  after: string;
+}
+
+/** The action of a feasible option in three parts, so a screen can show the figure biggest. */
+export function optionActionParts(option: Feasible, system: UnitSystem = 'metric'): ActionParts {
   switch (option.kind) {
     case 'as-is':
-      return 'Leave it';
+      return { before: '', amount: 'Leave it', after: '' };
     case 'extract':
-      return `Add ${formatAddition(option.kg, system)} ${EXTRACT_NAMES[option.extract]}`;
+      return { before: 'Add', amount: formatAddition(option.kg, system), after: EXTRACT_NAMES[option.extract] };
     case 'water':
-      return `Add ${formatWaterAddition(option.litres, system)} water`;
+      return { before: 'Add', amount: formatWaterAddition(option.litres, system), after: 'water' };
     case 'boil-longer': {
       const minutes = wholeMinutes(option.extraMinutes);
-      return `Boil ${minutes} more ${minutes === 1 ? 'minute' : 'minutes'}`;
+      return { before: 'Boil', amount: String(minutes), after: minutes === 1 ? 'more minute' : 'more minutes' };
     }
   }
 }
 
-/** The amount alone (the figure to show biggest), or null for "Leave it". */
-export function optionAmount(option: Feasible, system: UnitSystem = 'metric'): string | null {
-  switch (option.kind) {
-    case 'as-is':
-      return null;
-    case 'extract':
-      return formatAddition(option.kg, system);
-    case 'water':
-      return formatWaterAddition(option.litres, system);
-    case 'boil-longer':
-      return `${wholeMinutes(option.extraMinutes)}${NBSP}min`;
-  }
+/** The action of a feasible option, e.g. "Add 349 g dry malt extract", "Boil 12 more minutes", "Leave it". */
+export function optionAction(option: Feasible, system: UnitSystem = 'metric'): string {
+  const { before, amount, after } = optionActionParts(option, system);
+  return [before, amount, after].filter(Boolean).join(' ');
 }
 
-/** What the option is about, for an infeasible one too: "Dry malt extract", "Water", "Boil longer". */
+/** What the option is about, for an infeasible one too: "Dry malt extract", "Water", "Boil longer", "No correction". */
 export function optionTitle(option: BoilOption): string {
   if (option.kind === 'extract') {
     const name = EXTRACT_NAMES[option.extract];
     return name.charAt(0).toUpperCase() + name.slice(1);
   }
-  return { 'as-is': 'Leave it', water: 'Water', 'boil-longer': 'Boil longer' }[option.kind];
+  return { 'as-is': 'No correction', water: 'Water', 'boil-longer': 'Boil longer' }[option.kind];
 }
 
 function volume(litres: number, system: UnitSystem): string {
@@ -115,7 +118,7 @@ function volume(litres: number, system: UnitSystem): string {
  * litres; the ones that quote a volume are re-worded here for US units.
  */
 export function reasonInWords(
-  option: Extract<BoilOption, { feasible: false }>,
+  option: InfeasibleOption,
   context: { result: Pick<BoilCorrection, 'projected' | 'targetSg'>; targetVolumeL?: number; kettleCapacityL?: number; boilOffLPerHour?: number },
   system: UnitSystem = 'metric',
 ): string {

@@ -1,0 +1,240 @@
+import { Check, RotateCcw } from 'lucide-react';
+import { useId, type ReactNode } from 'react';
+import {
+  gapInWords,
+  optionActionParts,
+  optionTitle,
+  reasonInWords,
+  wholeMinutes,
+  type BoilCheckOutcome,
+  type FeasibleOption,
+  type InfeasibleOption,
+} from '@shared/boil-check';
+import { formatAbv, type ExtractKind } from '@shared/brewmath';
+import type { BoilCheckParsed } from '@shared/schemas/boil-check';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import type { Units } from '@/lib/units';
+
+export type ChoiceState = { key: string; state: 'saving' | 'saved' | 'failed'; message?: string };
+
+export function optionKey(option: { kind: string; extract?: ExtractKind }) {
+  return option.kind === 'extract' ? `extract-${option.extract}` : option.kind;
+}
+
+interface ResultsProps {
+  input: BoilCheckParsed;
+  outcome: BoilCheckOutcome;
+  units: Units;
+  choice: ChoiceState | null;
+  onChoose?: (option: FeasibleOption) => void;
+}
+
+/** The answer: where the wort is heading, then one card per thing the brewer can do about it. */
+export function CheckResults({ input, outcome, units, choice, onChoose }: ResultsProps) {
+  const { result, currentSg, reading, warnings } = outcome;
+  const ordered = orderedOptions(result);
+  const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
+  const anyExtract = ordered.some((o) => o.kind === 'extract');
+  const tone = result.status === 'on-target' ? 'text-ok-700' : 'text-malt-700';
+
+  return (
+    <div className="space-y-4">
+      <section aria-label="Where the wort is heading" className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
+        <p className="text-sm font-semibold text-ink-soft">With no action, at the end of the boil</p>
+        <p role="status" className={`text-3xl font-bold ${tone}`} data-testid="gap">
+          {gapInWords(result, units.gravityUnit)}
+        </p>
+        <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3">
+          <Stat label="Gravity now" value={units.format('gravity', currentSg)} note={reading.kind === 'refractometer' ? `from ${reading.brix} °Bx` : 'corrected for temperature'} />
+          <Stat label="OG at the end" value={units.format('gravity', result.projected.endSg)} note={`target ${units.format('gravity', result.targetSg)}`} testId="projected-og" />
+          <Stat label="Hot at flame-out" value={units.format('volume', result.projected.endVolumeL)} testId="projected-hot" />
+          <Stat
+            label="Into the fermenter"
+            value={units.format('volume', result.projected.fermenterVolumeL)}
+            note={input.targetVolumeL !== undefined ? `recipe ${units.format('volume', input.targetVolumeL)}` : undefined}
+            testId="projected-fermenter"
+          />
+          <Stat label="ABV" value={formatAbv(result.projected.abvPercent)} />
+        </dl>
+        {result.fgAssumed && (
+          <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
+        )}
+      </section>
+
+      {warnings.map((w) => (
+        <Notice key={w} tone="caution">
+          {w}
+        </Notice>
+      ))}
+
+      <h2 className="text-lg font-bold text-cellar-900">Your options</h2>
+      {anyExtract && <p className="text-sm text-ink-soft">Adding extract or sugar: sprinkle it in slowly while stirring, as it can foam up and boil over.</p>}
+      <ul className="space-y-3">
+        {ordered.map((option) => (
+          <li key={optionKey(option)}>
+            <OptionCard option={option} input={input} outcome={outcome} units={units} choice={choice?.key === optionKey(option) ? choice : null} onChoose={onChoose} />
+          </li>
+        ))}
+      </ul>
+
+      {infeasible.length > 0 && (
+        <section aria-label="Not possible now" className="rounded-xl bg-cellar-50 p-4">
+          <h3 className="text-sm font-semibold text-ink-soft">Not possible now</h3>
+          <ul className="mt-2 space-y-2 text-sm">
+            {groupReasons(infeasible, input, outcome, units).map(({ title, reason }) => (
+              <li key={title}>
+                <span className="font-semibold">{title}:</span> {reason}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+    </div>
+  );
+}
+
+function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
+  return (
+    <div className="min-w-0">
+      <dt className="text-ink-faint">{label}</dt>
+      <dd className="text-xl font-bold tabular-nums text-ink" data-testid={testId}>
+        {value}
+      </dd>
+      {note && <dd className="text-xs text-ink-faint">{note}</dd>}
+    </div>
+  );
+}
+
+/** The same reason for all four extracts (e.g. the wort is already over) reads once. */
+function groupReasons(options: InfeasibleOption[], input: BoilCheckParsed, outcome: BoilCheckOutcome, units: Units) {
+  const context = {
+    result: outcome.result,
+    targetVolumeL: input.targetVolumeL,
+    kettleCapacityL: input.kettleCapacityL,
+    boilOffLPerHour: input.boilOffLPerHour,
+  };
+  const rows = options.map((o) => ({ title: optionTitle(o), reason: reasonInWords(o, context, units.unitSystem), extract: o.kind === 'extract' }));
+  const extractRows = rows.filter((r) => r.extract);
+  const sameForAll = extractRows.length > 1 && extractRows.every((r) => r.reason === extractRows[0].reason);
+  if (!sameForAll) return rows;
+  return [{ title: 'Extract or sugar', reason: extractRows[0].reason }, ...rows.filter((r) => !r.extract)];
+}
+
+const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
+
+/** Feasible options, the likely action first; "Leave it" leads only when the wort is on target. */
+export function orderedOptions(result: BoilCheckOutcome['result']): FeasibleOption[] {
+  const feasible = result.options.filter((o): o is FeasibleOption => o.feasible);
+  const asIs = feasible.filter((o) => o.kind === 'as-is');
+  const corrections = feasible.filter((o) => o.kind !== 'as-is');
+  return result.status === 'on-target' ? [...asIs, ...corrections] : [...corrections, ...asIs];
+}
+
+function hintFor(option: FeasibleOption, input: BoilCheckParsed, outcome: BoilCheckOutcome, units: Units): string | null {
+  switch (option.kind) {
+    case 'extract':
+      return null;
+    case 'water':
+      return 'Clean drinking water, now or into the fermenter after chilling: the result is the same.';
+    case 'boil-longer':
+      return `Flame-out in ${input.minutesLeft + wholeMinutes(option.extraMinutes)} minutes from now instead of ${input.minutesLeft}.`;
+    case 'as-is':
+      return outcome.result.status === 'on-target' ? 'The wort will finish on target.' : `The wort will finish ${lowerFirst(gapInWords(outcome.result, units.gravityUnit))}.`;
+  }
+}
+
+function OptionCard({
+  option,
+  input,
+  outcome,
+  units,
+  choice,
+  onChoose,
+}: {
+  option: FeasibleOption;
+  input: BoilCheckParsed;
+  outcome: BoilCheckOutcome;
+  units: Units;
+  choice: ChoiceState | null;
+  onChoose?: (option: FeasibleOption) => void;
+}) {
+  const headingId = useId();
+  const { before, amount, after } = optionActionParts(option, units.unitSystem);
+  const hint = hintFor(option, input, outcome, units);
+  // Leaving the wort short or strong is an option, not the headline.
+  const quiet = option.kind === 'as-is' && outcome.result.status !== 'on-target';
+  return (
+    <article aria-labelledby={headingId} data-option={optionKey(option)} className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
+      <p className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{optionTitle(option)}</p>
+      <h3 id={headingId} className="mt-1 text-2xl font-bold leading-tight text-cellar-900">
+        {before && `${before} `}
+        <span className={`${quiet ? 'text-3xl' : 'text-5xl'} tabular-nums text-ink`}>{amount}</span>
+        {after && ` ${after}`}
+      </h3>
+      {hint && <p className="mt-1 text-sm text-ink-soft">{hint}</p>}
+      <dl className="mt-3 grid grid-cols-3 gap-2 text-sm">
+        <div className="min-w-0">
+          <dt className="text-ink-faint">OG</dt>
+          <dd className="text-xl font-bold tabular-nums">{units.format('gravity', option.endSg)}</dd>
+        </div>
+        <div className="min-w-0">
+          <dt className="text-ink-faint">Into fermenter</dt>
+          <dd className="text-xl font-bold tabular-nums">{units.format('volume', option.fermenterVolumeL)}</dd>
+        </div>
+        <div className="min-w-0">
+          <dt className="text-ink-faint">ABV</dt>
+          <dd className="text-xl font-bold tabular-nums">{formatAbv(option.abvPercent)}</dd>
+        </div>
+      </dl>
+      {onChoose && (
+        <div className="mt-3 space-y-2">
+          {choice?.state === 'failed' ? (
+            <>
+              <Notice tone="error" title="Not saved">
+                {choice.message} Everything you typed is still here.
+              </Notice>
+              <Button variant="primary" className="w-full" icon={<RotateCcw aria-hidden className="size-5" />} onClick={() => onChoose(option)}>
+                Try again
+              </Button>
+            </>
+          ) : choice?.state === 'saved' ? (
+            <Notice tone="success">Saved to the brew-day log.</Notice>
+          ) : (
+            <Button
+              variant="primary"
+              className="w-full"
+              busy={choice?.state === 'saving'}
+              icon={<Check aria-hidden className="size-5" />}
+              onClick={() => onChoose(option)}
+              aria-describedby={headingId}
+            >
+              Choose this
+            </Button>
+          )}
+        </div>
+      )}
+    </article>
+  );
+}
+
+export function NotReady({ missing, problems }: { missing: string[]; problems: { path: string; message: string }[] }): ReactNode {
+  return (
+    <section aria-label="Your options" className="rounded-xl border-2 border-dashed border-cellar-100 p-4 text-ink-soft">
+      {problems.length > 0 ? (
+        <>
+          <p className="font-semibold text-alert-700">Fix this to see your options:</p>
+          <ul className="mt-1 list-disc space-y-1 pl-5 text-sm" data-testid="problems">
+            {problems.map((p) => (
+              <li key={p.path + p.message}>{p.message}</li>
+            ))}
+          </ul>
+        </>
+      ) : (
+        <p>
+          Your options appear here as you type. Still needed: <span className="font-semibold">{missing.join(', ')}</span>.
+        </p>
+      )}
+    </section>
+  );
+}

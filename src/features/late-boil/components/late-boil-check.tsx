@@ -1,0 +1,312 @@
+import { Field, Form, Formik, useFormikContext } from 'formik';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { Link } from 'react-router';
+import { ArrowDown, ChevronRight } from 'lucide-react';
+import { gapInWords, optionAction, runBoilCheck, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
+import { BrewMathError, EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
+import { boilCheckInputSchema, type BoilCheckParsed } from '@shared/schemas/boil-check';
+import { Notice } from '@/components/ui/notice';
+import { QuantityField } from '@/components/ui/quantity-field';
+import { zodValidate } from '@/lib/form';
+import { useUnits, type Units } from '@/lib/units';
+import { CheckResults, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-results';
+import { parseCheck, toCheckInput, toFormValues, type LateBoilFormValues, type LateBoilInitialValues } from './form-values';
+import { NumberField } from './number-field';
+
+export interface LateBoilChoice {
+  /** The option the brewer picked, exactly as the check produced it. */
+  option: FeasibleOption;
+  /** Everything the brewer entered, parsed (SI): what the server recomputes from. */
+  input: BoilCheckParsed;
+  /** The whole check as it stood when the brewer chose. */
+  result: BoilCheckOutcome;
+}
+
+export interface LateBoilCheckProps {
+  /** Prefill, all SI: a brew day's snapshot targets and equipment profile. */
+  initialValues?: LateBoilInitialValues;
+  /** Show and read numbers in these units instead of the signed-in brewer's. */
+  units?: Units;
+  /**
+   * Called when the brewer picks an option. Return a promise to show saving, saved or a
+   * "Not saved" message with a retry: what the brewer typed is kept either way.
+   * Without it, the nudge is shown in place of the "Choose this" buttons.
+   */
+  onChoose?: (choice: LateBoilChoice) => Promise<unknown> | void;
+  /** Shown below the options when there is no onChoose; a sign-up invitation by default. */
+  nudge?: ReactNode;
+  /** Rendered after the options, with the current check (or null while it cannot run). */
+  renderAfterOptions?: (check: { input: BoilCheckParsed; result: BoilCheckOutcome } | null) => ReactNode;
+}
+
+const validateForm = (values: LateBoilFormValues) => zodValidate(boilCheckInputSchema)(toCheckInput(values));
+
+const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
+  dme: 'Dry malt extract',
+  lme: 'Liquid malt extract',
+  sucrose: 'Table sugar',
+  dextrose: 'Dextrose',
+};
+
+/**
+ * The late-boil check: the brewer enters a reading about ten minutes before the end of the boil
+ * and sees, as they type, where the wort is heading and what to do about it. Everything is
+ * worked out in the browser with the shared brewing math, so it keeps working on a lost connection.
+ */
+export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions }: LateBoilCheckProps) {
+  const userUnits = useUnits();
+  const units = unitsOverride ?? userUnits;
+  const start = useMemo(() => toFormValues(initialValues), [initialValues]);
+  return (
+    <Formik<LateBoilFormValues> initialValues={start} validate={validateForm} onSubmit={() => {}}>
+      <Form noValidate aria-label="Late-boil check">
+        <TouchWhatChanges />
+        <div className="grid gap-4 pb-20 lg:grid-cols-2 lg:items-start lg:pb-0">
+          <Inputs units={units} />
+          <div className="lg:sticky lg:top-4">
+            <Answer units={units} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} />
+          </div>
+        </div>
+      </Form>
+    </Formik>
+  );
+}
+
+/** Marks a field touched as soon as it changes, so a wrong number is said at once, not on blur. */
+function TouchWhatChanges() {
+  const { values, setFieldTouched } = useFormikContext<LateBoilFormValues>();
+  const previous = useRef(values);
+  useEffect(() => {
+    const before = flatten(previous.current);
+    const now = flatten(values);
+    for (const key of Object.keys(now)) if (!Object.is(before[key], now[key])) void setFieldTouched(key, true, false);
+    previous.current = values;
+  }, [values, setFieldTouched]);
+  return null;
+}
+
+function flatten(value: unknown, prefix = '', out: Record<string, unknown> = {}): Record<string, unknown> {
+  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
+    for (const [k, v] of Object.entries(value)) flatten(v, prefix ? `${prefix}.${k}` : k, out);
+  } else {
+    out[prefix] = Array.isArray(value) ? value.join(',') : value;
+  }
+  return out;
+}
+
+function Panel({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <fieldset className="min-w-0 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
+      <legend className="float-left mb-3 w-full text-lg font-bold text-cellar-900">{title}</legend>
+      <div className="clear-both space-y-4">{children}</div>
+    </fieldset>
+  );
+}
+
+function Inputs({ units }: { units: Units }) {
+  const { values } = useFormikContext<LateBoilFormValues>();
+  const hydrometer = values.reading.kind === 'hydrometer';
+  // Potentials read in points per pound per US gallon in US units: 1 ppg = 8.3454 points·L/kg.
+  const ppgScale = KG_PER_LB / LITRES_PER_US_GALLON;
+  const us = units.unitSystem === 'us';
+  return (
+    <div className="min-w-0 space-y-4">
+      <Notice tone="caution" title="Hot wort and steam burn">
+        Take the sample with a long spoon or a sampling tube, keep your face out of the steam, and let the drop cool before you read it.
+      </Notice>
+
+      <Panel title="Reading">
+        <div role="radiogroup" aria-label="Read with" className="grid grid-cols-2 gap-2">
+          {(
+            [
+              ['refractometer', 'Refractometer'],
+              ['hydrometer', 'Hydrometer (cooled sample)'],
+            ] as const
+          ).map(([kind, label]) => (
+            <label
+              key={kind}
+              className={`flex min-h-touch cursor-pointer items-center justify-center rounded-lg px-2 py-2 text-center text-sm font-semibold ring-1 ${values.reading.kind === kind ? 'bg-cellar-700 text-white ring-cellar-700' : 'bg-white text-cellar-700 ring-cellar-300'}`}
+            >
+              <Field type="radio" name="reading.kind" value={kind} className="sr-only" />
+              {label}
+            </label>
+          ))}
+        </div>
+        {hydrometer ? (
+          <>
+            <p className="text-sm text-ink-soft">A hydrometer cannot be read in hot wort: cool a sample in a covered jar first.</p>
+            <QuantityField name="reading.sg" kind="gravity" label="Hydrometer reading" size="large" units={units} />
+            <div className="grid grid-cols-2 gap-3">
+              <QuantityField name="reading.sampleTempC" kind="temperature" label="Sample temperature" units={units} />
+              <QuantityField name="reading.calibrationTempC" kind="temperature" label="Calibrated at" units={units} />
+            </div>
+          </>
+        ) : (
+          <div className="grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-3">
+            <NumberField name="reading.brix" label="Brix" unit="°Bx" size="large" />
+            <NumberField name="reading.wcf" label="Wort correction factor" hint="About 1.04 is common." />
+          </div>
+        )}
+      </Panel>
+
+      <Panel title="Kettle now">
+        <QuantityField name="volumeL" kind="volume" label="Wort in the kettle (hot)" size="large" units={units} />
+        <div className="grid grid-cols-2 gap-3">
+          <NumberField name="minutesLeft" label="Minutes left" unit="min" />
+          <QuantityField name="boilOffLPerHour" kind="rate" label="Boil-off rate" units={units} />
+        </div>
+      </Panel>
+
+      <Panel title="Recipe target">
+        <div className="grid grid-cols-2 gap-3">
+          <QuantityField name="targetSg" kind="gravity" label="Target OG" units={units} />
+          <QuantityField name="targetVolumeL" kind="volume" label="Into the fermenter" hint="Optional" units={units} />
+        </div>
+        <fieldset>
+          <legend className="mb-1 text-sm font-semibold text-ink-soft">Extracts on hand</legend>
+          <div className="grid grid-cols-2 gap-2">
+            {EXTRACT_KINDS.map((kind) => (
+              <label key={kind} className="flex min-h-touch cursor-pointer items-center gap-2 rounded-lg px-2 ring-1 ring-cellar-100">
+                <Field type="checkbox" name="extractsOnHand" value={kind} className="size-5 accent-cellar-700" />
+                <span className="text-sm">{extractLabels[kind]}</span>
+              </label>
+            ))}
+          </div>
+        </fieldset>
+        <details className="group">
+          <summary className="flex min-h-touch cursor-pointer list-none items-center gap-1 font-semibold text-cellar-700 [&::-webkit-details-marker]:hidden">
+            <ChevronRight aria-hidden className="size-5 transition-transform group-open:rotate-90" />
+            More settings: FG, kettle size, shrinkage, potentials
+          </summary>
+          <div className="mt-2 space-y-4">
+            <div className="grid grid-cols-2 gap-3">
+              <QuantityField name="targetFg" kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
+              <QuantityField name="kettleCapacityL" kind="volume" label="Kettle size" hint="Optional" units={units} />
+            </div>
+            <NumberField name="coolingShrinkage" label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
+            <fieldset>
+              <legend className="mb-1 text-sm font-semibold text-ink-soft">Extract potentials, if yours differ ({us ? 'points per lb per gallon' : 'points × litres per kg'})</legend>
+              <div className="grid grid-cols-2 gap-3">
+                {EXTRACT_KINDS.map((kind) => (
+                  <NumberField
+                    key={kind}
+                    name={`potentials.${kind}`}
+                    label={extractLabels[kind]}
+                    unit={us ? 'ppg' : 'pts·L/kg'}
+                    scale={us ? ppgScale : 1}
+                    placeholder={(EXTRACT_POTENTIALS_POINTS_L_PER_KG[kind] * (us ? ppgScale : 1)).toFixed(0)}
+                  />
+                ))}
+              </div>
+            </fieldset>
+          </div>
+        </details>
+      </Panel>
+    </div>
+  );
+}
+
+type Check =
+  | { ok: true; input: BoilCheckParsed; outcome: BoilCheckOutcome }
+  | { ok: false; missing: string[]; problems: { path: string; message: string }[] };
+
+function useCheck(values: LateBoilFormValues): Check {
+  return useMemo(() => {
+    const parsed = parseCheck(values);
+    if (!parsed.ok) return parsed;
+    try {
+      return { ok: true, input: parsed.input, outcome: runBoilCheck(parsed.input) };
+    } catch (error) {
+      if (!(error instanceof BrewMathError)) throw error;
+      return { ok: false, missing: [], problems: [{ path: error.field ?? '', message: error.message }] };
+    }
+  }, [values]);
+}
+
+function Answer({ units, onChoose, nudge, renderAfterOptions }: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions'> & { units: Units }) {
+  const { values } = useFormikContext<LateBoilFormValues>();
+  const check = useCheck(values);
+  const [choice, setChoice] = useState<ChoiceState | null>(null);
+  const mounted = useRef(true);
+  useEffect(() => {
+    mounted.current = true;
+    return () => {
+      mounted.current = false;
+    };
+  }, []);
+
+  async function choose(option: FeasibleOption) {
+    if (!onChoose || !check.ok) return;
+    const key = optionKey(option);
+    setChoice({ key, state: 'saving' });
+    try {
+      await onChoose({ option, input: check.input, result: check.outcome });
+      if (mounted.current) setChoice({ key, state: 'saved' });
+    } catch (error) {
+      if (mounted.current) setChoice({ key, state: 'failed', message: (error as Error).message });
+    }
+  }
+
+  const resultsRef = useRef<HTMLDivElement>(null);
+  const resultsInView = useInView(resultsRef);
+
+  return (
+    <div className="min-w-0 space-y-4">
+      <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
+        {check.ok ? (
+          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onChoose ? (o) => void choose(o) : undefined} />
+        ) : (
+          <NotReady missing={check.missing} problems={check.problems} />
+        )}
+      </div>
+      {check.ok && resultsInView === false && <AnswerBar outcome={check.outcome} units={units} onShow={() => resultsRef.current?.scrollIntoView({ behavior: 'smooth' })} />}
+      {renderAfterOptions?.(check.ok ? { input: check.input, result: check.outcome } : null)}
+      {!onChoose && (nudge ?? <SignUpNudge />)}
+    </div>
+  );
+}
+
+/** Whether the element is on screen; null where the browser cannot tell (then nothing extra is shown). */
+function useInView(ref: React.RefObject<HTMLElement | null>): boolean | null {
+  const [inView, setInView] = useState<boolean | null>(null);
+  useEffect(() => {
+    const el = ref.current;
+    if (!el || typeof IntersectionObserver === 'undefined') return;
+    const observer = new IntersectionObserver(([entry]) => setInView(entry.isIntersecting), { threshold: 0 });
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, [ref]);
+  return inView;
+}
+
+/**
+ * On a phone the answer sits below the inputs; while it is off screen this bar at the bottom
+ * shows the gap and the first thing to do, so the brewer sees it change as they type.
+ */
+function AnswerBar({ outcome, units, onShow }: { outcome: BoilCheckOutcome; units: Units; onShow: () => void }) {
+  const first = orderedOptions(outcome.result)[0];
+  return (
+    <div className="fixed inset-x-0 bottom-0 z-10 border-t border-cellar-900 bg-cellar-900 px-3 py-2 text-white shadow-lg lg:hidden" data-testid="answer-bar">
+      <div className="mx-auto flex max-w-5xl items-center gap-3">
+        <div className="min-w-0 flex-1" aria-live="polite">
+          <p className="text-sm text-cellar-100">{gapInWords(outcome.result, units.gravityUnit)}</p>
+          {first && <p className="text-lg font-bold leading-tight">{optionAction(first, units.unitSystem)}</p>}
+        </div>
+        <button type="button" onClick={onShow} className="flex min-h-touch shrink-0 items-center gap-1 rounded-lg bg-white px-3 font-semibold text-cellar-900">
+          All options <ArrowDown aria-hidden className="size-4" />
+        </button>
+      </div>
+    </div>
+  );
+}
+
+function SignUpNudge() {
+  return (
+    <p className="rounded-xl bg-malt-50 p-4 text-malt-700">
+      <Link to="/sign-up" className="font-semibold underline">
+        Sign up to keep a log of your brew days
+      </Link>{' '}
+      — every reading and every choice, with its reasons, for you and your mentor.
+    </p>
+  );
+}
