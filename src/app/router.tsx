@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, redirect } from 'react-router';
+import { createBrowserRouter, Navigate } from 'react-router';
 import { meQueryOptions } from '@/lib/auth';
 import { requireSignedIn } from './guards';
 import { RootLayout } from './routes/root-layout';
@@ -36,10 +36,13 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: 'recipes/new', lazy: withClient(() => import('./routes/recipes-new')) },
             { path: 'recipes/:id', lazy: withClient(() => import('./routes/recipes-view')) },
             { path: 'recipes/:id/edit', lazy: withClient(() => import('./routes/recipes-edit')) },
+            { path: 'brews', lazy: withClient(() => import('./routes/brews')) },
+            { path: 'brews/:id', lazy: withClient(() => import('./routes/brews-day')) },
+            { path: 'brews/:id/log', lazy: withClient(() => import('./routes/brews-log')) },
             { path: 'instruments', lazy: withClient(() => import('./routes/instruments')) },
             { path: 'clubs', lazy: withClient(() => import('./routes/clubs')) },
             { path: 'clubs/:id', lazy: withClient(() => import('./routes/clubs-detail')) },
-            { path: 'admin', loader: () => redirect('/admin/users') },
+            { path: 'admin', element: <Navigate to="/admin/users" replace /> },
             { path: 'admin/users', lazy: withClient(() => import('./routes/admin-users')) },
             { path: 'admin/mail', lazy: withClient(() => import('./routes/admin-mail')) },
           ],

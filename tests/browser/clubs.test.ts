@@ -57,9 +57,12 @@ describe('club invitations, on a phone-sized window', () => {
     await guest.page.getByRole('button', { name: `Create my account and join ${clubName}` }).click();
     await guest.page.waitForURL(/\/clubs\/\d+$/);
     await guest.page.getByRole('heading', { name: clubName }).waitFor();
-    await guest.page.getByText('You are member here.').waitFor();
+    await guest.page.getByText('You are a member here.').waitFor();
     await guest.page.getByText('Wynn Carrow (you)').waitFor();
     expect(await noSidewaysScroll(guest.page)).toBeLessThanOrEqual(0);
+
+    // Nothing failed on the way in (the 401 is the client learning nobody was signed in yet).
+    expect(guest.errors.filter((e) => !/Failed to load resource.*401/.test(e))).toEqual([]);
 
     // The link is single-use: opening it again says so.
     await guest.page.goto(linkPath(mail.text, 'invitations'));

@@ -8,7 +8,7 @@ import { ClubMembers } from '@/features/clubs/components/club-members';
 import { InviteForm } from '@/features/clubs/components/invite-form';
 import { LeaveClub } from '@/features/clubs/components/leave-club';
 import { PendingInvitations } from '@/features/clubs/components/pending-invitations';
-import { roleLabels } from '@/features/clubs/components/role-words';
+import { roleWithArticle } from '@/features/clubs/components/role-words';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Card, Loading, PageHeader } from '@/components/ui/page';
@@ -58,7 +58,7 @@ export function Component() {
           subtitle={
             <>
               {club.description && <span className="block whitespace-pre-line">{club.description}</span>}
-              <span className="block text-sm text-ink-faint">{club.myRole ? `You are ${roleLabels[club.myRole].toLowerCase()} here.` : 'You are viewing as site admin.'}</span>
+              <span className="block text-sm text-ink-faint">{club.myRole ? `You are ${roleWithArticle[club.myRole]} here.` : 'You are viewing as site admin.'}</span>
             </>
           }
           actions={
@@ -71,7 +71,7 @@ export function Component() {
         />
       )}
 
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
         <Card>
           <h2 className="mb-2 text-lg font-semibold text-cellar-900">
             Members <span className="font-normal text-ink-faint">({club.members.length})</span>

@@ -3,7 +3,6 @@ import { useLogout } from '@/features/auth/api/logout';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { useAcceptInvitation } from '@/features/clubs/api/accept-invitation';
 import { useInvitation } from '@/features/clubs/api/get-invitation';
-import { AcceptButton } from '@/features/clubs/components/accept-button';
 import { InvitationSummary } from '@/features/clubs/components/invitation-summary';
 import { NewcomerForm } from '@/features/clubs/components/newcomer-form';
 import { Button, ButtonLink } from '@/components/ui/button';
@@ -16,12 +15,16 @@ import { useMe } from '@/lib/auth';
 export function Component() {
   const token = useParams().token ?? '';
   const { data: me } = useMe();
-  const { data: invitation, error, isPending, refetch, isRefetching } = useInvitation(token);
+  const accept = useAcceptInvitation(token);
+  const accepting = accept.isPending || accept.isSuccess;
+  const { data: invitation, error, isPending, refetch, isRefetching } = useInvitation(token, !accepting);
   const logout = useLogout();
-  const acceptAfterSignIn = useAcceptInvitation(token);
   const navigate = useNavigate();
   const joined = (clubId: number) => navigate(`/clubs/${clubId}`, { replace: true });
 
+  // While accepting, the forms stay on screen (a failure keeps what was typed); once accepted, the
+  // cache is reset for the new session and the page moves on to the club.
+  if (accept.isSuccess) return <Loading label="Joining the club…" />;
   if (isPending) return <Loading label="Opening the invitation…" />;
   if (error) {
     const final = error instanceof ApiError && (error.status === 404 || error.status === 410);
@@ -50,13 +53,17 @@ export function Component() {
       <div className="mb-4">
         <InvitationSummary invitation={invitation} />
       </div>
-      {acceptAfterSignIn.error && (
+      {accept.error && (
         <Notice tone="error" className="mb-4">
-          {acceptAfterSignIn.error.message}
+          {accept.error.message}
         </Notice>
       )}
       <Card>
-        {me && isForMe && <AcceptButton token={token} clubName={invitation.clubName} onJoined={(a) => joined(a.clubId)} />}
+        {me && isForMe && (
+          <Button className="w-full" busy={accept.isPending} onClick={() => accept.mutate(undefined, { onSuccess: (a) => joined(a.clubId) })}>
+            Join {invitation.clubName}
+          </Button>
+        )}
         {me && !isForMe && (
           <div className="space-y-3">
             <Notice tone="caution">
@@ -74,7 +81,7 @@ export function Component() {
             <SignInForm
               initialEmail={invitation.email}
               // Signed in: accept straight away rather than asking for a second click.
-              onSignedIn={() => acceptAfterSignIn.mutate(undefined, { onSuccess: (a) => joined(a.clubId) })}
+              onSignedIn={() => accept.mutate(undefined, { onSuccess: (a) => joined(a.clubId) })}
             />
           </>
         )}
@@ -83,7 +90,11 @@ export function Component() {
             <p className="mb-4 text-ink-soft">
               New to Wortwise? Choose your name and a password; your account is created and you join the club in one step.
             </p>
-            <NewcomerForm token={token} email={invitation.email} clubName={invitation.clubName} onJoined={(a) => joined(a.clubId)} />
+            <NewcomerForm
+              email={invitation.email}
+              clubName={invitation.clubName}
+              onSubmit={async (values) => joined((await accept.mutateAsync(values)).clubId)}
+            />
             <p className="mt-4 text-center text-sm text-ink-soft">
               Wrong address?{' '}
               <Link to="/" className="font-semibold text-cellar-700 underline">

@@ -7,6 +7,7 @@ export const getInvitation = (token: string) => api.get<InvitationPreview>(`/api
 export const invitationQueryOptions = (token: string) =>
   queryOptions({ queryKey: ['invitations', token], queryFn: () => getInvitation(token), staleTime: 0 });
 
-export function useInvitation(token: string) {
-  return useQuery(invitationQueryOptions(token));
+/** `enabled: false` once the invitation is being accepted: asking again would only find it used. */
+export function useInvitation(token: string, enabled = true) {
+  return useQuery({ ...invitationQueryOptions(token), enabled });
 }

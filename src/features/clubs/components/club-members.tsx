@@ -86,7 +86,7 @@ function MemberName({ member, isMe }: { member: ClubMember; isMe: boolean }) {
         {member.displayName}
         {isMe && <span className="font-normal text-ink-faint"> (you)</span>}
       </p>
-      {member.email && <p className="truncate text-sm text-ink-soft">{member.email}</p>}
+      {member.email && <p className="break-all text-sm text-ink-soft">{member.email}</p>}
     </div>
   );
 }

@@ -4,11 +4,12 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
-import { useAcceptInvitation, type Accepted } from '../api/accept-invitation';
 
-/** Creates the account for the invited address and joins the club, in one step. */
-export function NewcomerForm({ token, email, clubName, onJoined }: { token: string; email: string; clubName: string; onJoined: (accepted: Accepted) => void }) {
-  const accept = useAcceptInvitation(token);
+/**
+ * Creates the account for the invited address and joins the club, in one step. The page owns the
+ * acceptance (`onSubmit`), so it can stop asking about the invitation while it is being used.
+ */
+export function NewcomerForm({ email, clubName, onSubmit }: { email: string; clubName: string; onSubmit: (values: NewcomerInput) => Promise<unknown> }) {
   return (
     <Formik<NewcomerInput>
       initialValues={{ displayName: '', password: '' }}
@@ -16,7 +17,7 @@ export function NewcomerForm({ token, email, clubName, onJoined }: { token: stri
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
         try {
-          onJoined(await accept.mutateAsync(values));
+          await onSubmit(values);
         } catch (error) {
           applyApiError(error, helpers);
         }

@@ -51,8 +51,9 @@ export function PendingInvitations({ clubId }: { clubId: number }) {
 function PendingRow({ invitation, busy, onResend, onRevoke }: { invitation: PendingInvitation; busy: boolean; onResend: () => void; onRevoke: () => void }) {
   return (
     <li className="flex flex-wrap items-center gap-x-3 gap-y-2 py-3">
-      <div className="min-w-0 flex-1">
-        <p className="truncate font-semibold text-ink">{invitation.email}</p>
+      {/* At least 12rem for the address, so on a phone the buttons wrap below it. */}
+      <div className="min-w-48 flex-1">
+        <p className="break-all font-semibold text-ink">{invitation.email}</p>
         <p className="text-sm text-ink-soft">
           {roleLabels[invitation.role]}
           {invitation.invitedBy && <> · invited by {invitation.invitedBy}</>} ·{' '}

@@ -2,6 +2,8 @@ import type { ClubRole } from '@shared/schemas/clubs';
 
 export const roleLabels: Record<ClubRole, string> = { member: 'Member', mentor: 'Mentor', organiser: 'Organiser' };
 
+export const roleWithArticle: Record<ClubRole, string> = { member: 'a member', mentor: 'a mentor', organiser: 'an organiser' };
+
 export const roleHints: Record<ClubRole, string> = {
   member: 'shares brews and recipes with the club',
   mentor: 'reads what members share and comments',
