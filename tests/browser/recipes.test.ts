@@ -133,4 +133,53 @@ describe('a recipe written in US units and read in metric', () => {
     expect(errors).toEqual([]);
     await context.close();
   });
+
+  it('refuses a save over a newer version, keeps what was typed, and can load the latest', async () => {
+    const { page, context, errors } = await newPage(b.browser, { width: 1280, height: 900 });
+    const email = `two-tabs-${Date.now()}@example.org`;
+    await context.request.post('/api/auth/signup', { data: { email, password: 'a-long-password', displayName: 'Tove Marrin' } });
+    const created = await context.request.post('/api/recipes', {
+      data: {
+        name: 'Two Tab Mild',
+        batchVolumeL: 20,
+        preBoilVolumeL: 25,
+        postBoilVolumeL: 21,
+        boilMinutes: 60,
+        boilOffLPerHour: 4,
+        efficiency: 0.7,
+        targetOg: 1.036,
+        targetFg: 1.01,
+        fermentationTempMinC: 18,
+        fermentationTempMaxC: 20,
+        fermentables: [{ name: 'Mild malt', kind: 'grain', amountKg: 3.5, potentialPointsLPerKg: 300 }],
+      },
+    });
+    const { id } = await created.json();
+
+    await page.goto(`/recipes/${id}/edit`);
+    await fillIn(page, 'Recipe name', 'Two Tab Mild, edited here');
+    // Meanwhile the same recipe is saved from another tab.
+    const other = await context.newPage();
+    await other.goto(`/recipes/${id}/edit`);
+    await fillIn(other, 'Style', 'Dark mild');
+    await other.getByRole('button', { name: 'Save recipe' }).click();
+    await other.waitForURL(new RegExp(`/recipes/${id}$`));
+    await other.close();
+
+    await page.getByRole('button', { name: 'Save recipe' }).click();
+    await page.getByText('Not saved: this recipe changed elsewhere').waitFor();
+    expect(await text(page.getByRole('status').filter({ hasText: 'Not saved' }))).toMatch(/you were editing version 1, and version 2 was saved at/);
+    expect(await page.getByLabel('Recipe name').inputValue()).toBe('Two Tab Mild, edited here');
+
+    await page.getByRole('button', { name: 'Load the latest version' }).click();
+    await page.waitForFunction(() => (document.querySelector('input[name="style"]') as HTMLInputElement | null)?.value === 'Dark mild');
+    expect(await page.getByLabel('Recipe name').inputValue()).toBe('Two Tab Mild');
+    await fillIn(page, 'Recipe name', 'Two Tab Mild, on top of version 2');
+    await page.getByRole('button', { name: 'Save recipe' }).click();
+    await page.waitForURL(new RegExp(`/recipes/${id}$`));
+    const saved = await (await context.request.get(`/api/recipes/${id}`)).json();
+    expect(saved).toMatchObject({ name: 'Two Tab Mild, on top of version 2', style: 'Dark mild', version: 3 });
+    expect(errors.filter((e) => !/409/.test(e))).toEqual([]);
+    await context.close();
+  });
 });

@@ -1,7 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { FieldArray, Form, Formik, getIn, useField, useFormikContext, type FormikErrors } from 'formik';
 import { Plus, RefreshCw, Save, Trash2 } from 'lucide-react';
-import { useId, useState, type ReactNode } from 'react';
+import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
 import {
   boilOffMismatch,
@@ -150,7 +150,15 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
 
 /** After a submit attempt, says how many fields still need attention (they may be off screen on a phone). */
 function FormErrorSummary() {
-  const { errors, submitCount, isValid } = useFormikContext<RecipeFormValues>();
+  const { errors, submitCount, isValid, isSubmitting } = useFormikContext<RecipeFormValues>();
+  const focusedFor = useRef(0);
+  // On a phone the first problem is often off screen: take the brewer to it, once per attempt.
+  useEffect(() => {
+    if (submitCount > focusedFor.current && !isSubmitting && !isValid) {
+      focusedFor.current = submitCount;
+      document.querySelector<HTMLElement>('form [aria-invalid="true"]')?.focus();
+    }
+  }, [submitCount, isSubmitting, isValid]);
   if (submitCount === 0 || isValid) return null;
   const count = countErrors(errors);
   return (
