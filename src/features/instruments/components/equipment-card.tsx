@@ -109,7 +109,7 @@ export function EquipmentCard({ profile, units, canDelete, onSaved }: { profile:
       >
         <KettleForm units={units} justSaved={save.isSuccess} saveLabel={profile.id === null ? 'Save as my kettle' : 'Save kettle'} />
       </Formik>
-      {profile.id !== null && (
+      {profile.id !== null && (!profile.isDefault || canDelete || remove.isError || save.isError) && (
         <div className="mt-3 flex flex-wrap gap-2 border-t border-cellar-100 pt-3">
           {!profile.isDefault && (
             <Button variant="secondary" icon={<Star aria-hidden className="size-5" />} onClick={() => save.mutate({ ...profileInput(profile), isDefault: true })}>
@@ -165,6 +165,7 @@ function KettleForm({ units, saveLabel, justSaved }: { units: Units; saveLabel: 
           <legend className="px-1 font-semibold text-cellar-900">Measure the boil-off</legend>
           <p className="mb-2 text-sm text-ink-soft">
             Read the volume in the kettle when the boil starts and again at the end, both hot, the same way (a marked paddle or the kettle's sight glass).
+            Boiling wort and steam burn: keep hands and face clear of the kettle.
           </p>
           <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
             <QuantityField name="measurement.startL" kind="volume" label="At the start" units={units} />

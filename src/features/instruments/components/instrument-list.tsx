@@ -51,9 +51,11 @@ export function InstrumentList({ units, elevationM }: { units: Units; elevationM
       {groups.map((g) => (
         <section key={g.kind} aria-label={`${instrumentKindLabels[g.kind]}s`} className="space-y-3">
           <h2 className="text-lg font-bold text-cellar-900">{g.kind === 'ph_meter' ? 'pH meters' : `${instrumentKindLabels[g.kind]}s`}</h2>
-          {g.items.map((instrument) => (
-            <InstrumentCard key={instrument.id} instrument={instrument} hydrometers={hydrometers} units={units} elevationM={elevationM} />
-          ))}
+          <div className="grid items-start gap-3 lg:grid-cols-2">
+            {g.items.map((instrument) => (
+              <InstrumentCard key={instrument.id} instrument={instrument} hydrometers={hydrometers} units={units} elevationM={elevationM} />
+            ))}
+          </div>
         </section>
       ))}
 
