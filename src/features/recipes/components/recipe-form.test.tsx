@@ -34,7 +34,8 @@ async function fill(label: string | RegExp, text: string, container: HTMLElement
 
 afterEach(() => vi.unstubAllGlobals());
 
-describe('RecipeForm validation', () => {
+// Typing into a long form in jsdom is slow; a test's budget is about the form, not the machine.
+describe('RecipeForm validation', { timeout: 30_000 }, () => {
   it('shows every missing field inline and sends nothing', async () => {
     const fetchSpy = vi.fn();
     vi.stubGlobal('fetch', fetchSpy);
@@ -110,5 +111,34 @@ describe('RecipeForm validation', () => {
     await fill('Target OG', '12');
     await fill('Target FG', '14');
     await waitFor(() => expect(errorOf('Target FG')).toBe('Target FG must be below the target OG: fermentation only lowers gravity.'));
+  });
+
+  it('keeps everything typed when the connection drops, and offers to try again', async () => {
+    const fetchSpy = vi.fn().mockRejectedValue(new TypeError('Failed to fetch'));
+    vi.stubGlobal('fetch', fetchSpy);
+    const { onSaved } = renderForm();
+    await fill('Recipe name', 'Kettle-side Saison');
+    await fill('Batch volume into the fermenter', '20');
+    await fill('Pre-boil volume', '26');
+    await fill('Post-boil volume', '22');
+    await fill('Boil-off rate', '4');
+    await fill('Target OG', '1.052');
+    await fill('Target FG', '1.006');
+    await fill('Lowest fermentation temperature', '20');
+    await fill('Highest fermentation temperature', '26');
+    const fermentable = screen.getByRole('group', { name: 'Fermentable 1' });
+    await fill('Name', 'Pilsner malt', fermentable);
+    await fill('Amount', '4.5', fermentable);
+    await userEvent.click(screen.getByRole('button', { name: 'Create recipe' }));
+    await screen.findByText(/No connection to Wortwise: nothing was saved/);
+    expect(screen.getByLabelText('Recipe name')).toHaveValue('Kettle-side Saison');
+    expect(within(fermentable).getByLabelText('Amount')).toHaveValue('4.5');
+    expect(fetchSpy).toHaveBeenCalledTimes(1);
+    const sent = JSON.parse(fetchSpy.mock.calls[0][1].body);
+    expect(sent).toMatchObject({ name: 'Kettle-side Saison', batchVolumeL: 20, efficiency: 0.72, fermentables: [{ name: 'Pilsner malt', kind: 'grain', amountKg: 4.5, potentialPointsLPerKg: 300 }] });
+
+    await userEvent.click(screen.getByRole('button', { name: 'Try again' }));
+    await waitFor(() => expect(fetchSpy).toHaveBeenCalledTimes(2));
+    expect(onSaved).not.toHaveBeenCalled();
   });
 });
