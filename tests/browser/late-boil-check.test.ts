@@ -34,6 +34,14 @@ describe('the public late-boil check, on a phone-sized window', () => {
     const largestInput = await page.locator('input').evaluateAll((els) => Math.max(...els.map((el) => parseFloat(getComputedStyle(el).fontSize))));
     expect(amountPx).toBeGreaterThan(largestInput);
 
+    // Back at the reading, the answer is below the screen: a bar at the bottom shows it as the brewer types.
+    await page.evaluate(() => window.scrollTo(0, 0));
+    const bar = page.getByTestId('answer-bar');
+    await bar.waitFor();
+    await expect(bar.textContent()).resolves.toMatch(/About 5 points short\s*Add 349\sg dry malt extract/);
+    await bar.getByRole('button', { name: 'All options' }).click();
+    await bar.waitFor({ state: 'detached' });
+
     // No sideways scroll on a 375 px phone.
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);

@@ -24,10 +24,13 @@ function renderCheck(props: Partial<LateBoilCheckProps> & { units?: Units } = {}
   );
 }
 
+// No pause between keystrokes: the check recomputes on each one anyway.
+const user = userEvent.setup({ delay: null });
+
 async function typeInto(label: string, text: string) {
   const input = screen.getByLabelText(label);
-  await userEvent.clear(input);
-  await userEvent.type(input, text);
+  await user.clear(input);
+  await user.type(input, text);
 }
 
 const optionHeadings = () =>
@@ -51,7 +54,8 @@ async function enterWorkedExample() {
   await typeInto('Into the fermenter', '23');
 }
 
-describe('LateBoilCheck', () => {
+// Many keystrokes per test; generous on a loaded machine (no timing is asserted).
+describe('LateBoilCheck', { timeout: 30_000 }, () => {
   it('updates the projection and the options live as the brewer types (worked example, gravity points × litres mass balance, hand calculation)', async () => {
     renderCheck();
     expect(screen.getByText(/Your options appear here as you type/)).toBeInTheDocument();
@@ -147,7 +151,7 @@ describe('LateBoilCheck', () => {
     renderCheck({ onChoose });
     await enterWorkedExample();
     const dme = screen.getByRole('article', { name: /349\sg dry malt extract/ });
-    await userEvent.click(within(dme).getByRole('button', { name: 'Choose this' }));
+    await user.click(within(dme).getByRole('button', { name: 'Choose this' }));
 
     expect(await within(dme).findByText('Not saved')).toBeInTheDocument();
     expect(within(dme).getByText(/No connection to Wortwise/)).toBeInTheDocument();
@@ -159,14 +163,14 @@ describe('LateBoilCheck', () => {
     expect(first.input.reading).toEqual({ kind: 'refractometer', brix: 11.4, wcf: 1.04 });
     expect(first.result.currentSg).toBeCloseTo(1.04402, 5);
 
-    await userEvent.click(within(dme).getByRole('button', { name: 'Try again' }));
+    await user.click(within(dme).getByRole('button', { name: 'Try again' }));
     expect(await within(dme).findByText('Saved to the brew-day log.')).toBeInTheDocument();
     expect(onChoose).toHaveBeenCalledTimes(2);
   });
 
   it('reads a cooled hydrometer sample and warns when it is far from the calibration temperature', async () => {
     renderCheck({ initialValues: { volumeL: 26, boilOffLPerHour: 4, targetSg: 1.05 } });
-    await userEvent.click(screen.getByLabelText('Hydrometer (cooled sample)'));
+    await user.click(screen.getByLabelText('Hydrometer (cooled sample)'));
     await typeInto('Hydrometer reading', '1.040');
     await typeInto('Sample temperature', '45');
     // Water at 45 °C is 990.2 kg/m³ against 998.2 at 20 °C (CRC Handbook, recalled from memory):

@@ -57,14 +57,17 @@ export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, n
   const userUnits = useUnits();
   const units = unitsOverride ?? userUnits;
   const start = useMemo(() => toFormValues(initialValues), [initialValues]);
+  const inputsRef = useRef<HTMLDivElement>(null);
   return (
     <Formik<LateBoilFormValues> initialValues={start} validate={validateForm} onSubmit={() => {}}>
       <Form noValidate aria-label="Late-boil check">
         <TouchWhatChanges />
         <div className="grid gap-4 pb-20 lg:grid-cols-2 lg:items-start lg:pb-0">
-          <Inputs units={units} />
+          <div ref={inputsRef} className="min-w-0">
+            <Inputs units={units} />
+          </div>
           <div className="lg:sticky lg:top-4">
-            <Answer units={units} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} />
+            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} />
           </div>
         </div>
       </Form>
@@ -223,7 +226,13 @@ function useCheck(values: LateBoilFormValues): Check {
   }, [values]);
 }
 
-function Answer({ units, onChoose, nudge, renderAfterOptions }: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions'> & { units: Units }) {
+function Answer({
+  units,
+  inputsRef,
+  onChoose,
+  nudge,
+  renderAfterOptions,
+}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
   const { values } = useFormikContext<LateBoilFormValues>();
   const check = useCheck(values);
   const [choice, setChoice] = useState<ChoiceState | null>(null);
@@ -248,7 +257,7 @@ function Answer({ units, onChoose, nudge, renderAfterOptions }: Pick<LateBoilChe
   }
 
   const resultsRef = useRef<HTMLDivElement>(null);
-  const resultsInView = useInView(resultsRef);
+  const answerBelow = useAnswerBelowInputs(inputsRef, resultsRef);
 
   return (
     <div className="min-w-0 space-y-4">
@@ -259,24 +268,38 @@ function Answer({ units, onChoose, nudge, renderAfterOptions }: Pick<LateBoilChe
           <NotReady missing={check.missing} problems={check.problems} />
         )}
       </div>
-      {check.ok && resultsInView === false && <AnswerBar outcome={check.outcome} units={units} onShow={() => resultsRef.current?.scrollIntoView({ behavior: 'smooth' })} />}
+      {check.ok && answerBelow && <AnswerBar outcome={check.outcome} units={units} onShow={() => resultsRef.current?.scrollIntoView({ behavior: 'smooth' })} />}
       {renderAfterOptions?.(check.ok ? { input: check.input, result: check.outcome } : null)}
       {!onChoose && (nudge ?? <SignUpNudge />)}
     </div>
   );
 }
 
-/** Whether the element is on screen; null where the browser cannot tell (then nothing extra is shown). */
-function useInView(ref: React.RefObject<HTMLElement | null>): boolean | null {
-  const [inView, setInView] = useState<boolean | null>(null);
+/**
+ * True while the brewer is typing in the inputs and the answer is still below the screen (a
+ * phone); false where the browser cannot tell, so nothing extra is shown there.
+ */
+function useAnswerBelowInputs(inputsRef: React.RefObject<HTMLElement | null>, resultsRef: React.RefObject<HTMLElement | null>): boolean {
+  const [seen, setSeen] = useState({ inputs: false, resultsBelow: false });
   useEffect(() => {
-    const el = ref.current;
-    if (!el || typeof IntersectionObserver === 'undefined') return;
-    const observer = new IntersectionObserver(([entry]) => setInView(entry.isIntersecting), { threshold: 0 });
-    observer.observe(el);
+    const inputs = inputsRef.current;
+    const results = resultsRef.current;
+    if (!inputs || !results || typeof IntersectionObserver === 'undefined') return;
+    const observer = new IntersectionObserver((entries) => {
+      setSeen((prev) => {
+        const next = { ...prev };
+        for (const entry of entries) {
+          if (entry.target === inputs) next.inputs = entry.isIntersecting;
+          else next.resultsBelow = !entry.isIntersecting && entry.boundingClientRect.top > 0;
+        }
+        return next;
+      });
+    });
+    observer.observe(inputs);
+    observer.observe(results);
     return () => observer.disconnect();
-  }, [ref]);
-  return inView;
+  }, [inputsRef, resultsRef]);
+  return seen.inputs && seen.resultsBelow;
 }
 
 /**
