@@ -1,7 +1,7 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import request from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
-import { clubInvitations, clubMemberships } from '../db/schema';
+import { brewClubShares, brews, clubInvitations, clubMemberships, recipeClubShares, recipes } from '../db/schema';
 import { makeUser } from '../db/factories';
 import { hashLinkToken } from '../lib/tokens';
 import { createHarness, waitForMail, type TestHarness } from '../../tests/support/api';
@@ -269,6 +269,33 @@ describe('roles, removal and leaving', () => {
     expect(res.status).toBe(409);
     expect(res.body.message).toBe('You are the club’s last organiser: name another member as organiser before you leave.');
     expect(await memberRole(scene.club.id, scene.organiser.id)).toBe('organiser');
+  });
+
+  it('stops sharing a leaver’s recipes and brew days with the club, and only with that club', async () => {
+    const scene = await makeClubScene(h.ctx.db);
+    const db = h.ctx.db;
+    await db.insert(clubMemberships).values({ clubId: scene.otherClub.id, userId: scene.member.id, role: 'member' });
+    const recipe = { name: 'Leaver Amber', notes: '', batchVolumeL: 20, preBoilVolumeL: 26, postBoilVolumeL: 22, boilMinutes: 60, boilOffLPerHour: 4, efficiency: 0.72, targetOg: 1.05, targetFg: 1.012, fermentationTempMinC: 18, fermentationTempMaxC: 20 };
+    const [{ id: mine }] = await db.insert(recipes).values({ ...recipe, ownerId: scene.member.id }).$returningId();
+    const [{ id: theirs }] = await db.insert(recipes).values({ ...recipe, ownerId: scene.mentor.id }).$returningId();
+    const [{ id: brew }] = await db.insert(brews).values({ ownerId: scene.member.id, name: 'Leaver Amber, day 1', brewedOn: '2026-03-01', targetsSnapshot: {}, equipmentSnapshot: {}, notes: '' }).$returningId();
+    await db.insert(recipeClubShares).values([
+      { recipeId: mine, clubId: scene.club.id },
+      { recipeId: mine, clubId: scene.otherClub.id },
+      { recipeId: theirs, clubId: scene.club.id },
+    ]);
+    await db.insert(brewClubShares).values([{ brewId: brew, clubId: scene.club.id }]);
+
+    const member = await h.signIn(scene.member.email);
+    await member.post(`/api/clubs/${scene.club.id}/leave`).expect(204);
+    const recipeShares = await db.select().from(recipeClubShares).where(inArray(recipeClubShares.recipeId, [mine, theirs]));
+    expect(recipeShares.map((r) => [r.recipeId, r.clubId]).sort()).toEqual(
+      [
+        [mine, scene.otherClub.id],
+        [theirs, scene.club.id],
+      ].sort(),
+    );
+    expect(await db.select().from(brewClubShares).where(eq(brewClubShares.brewId, brew))).toEqual([]);
   });
 
   it('lets only one of two organisers step down when both try at once', async () => {

@@ -3,11 +3,11 @@
  * need a count (a club always keeps at least one organiser) live here, checked inside a
  * transaction that locks the club row, so two organisers stepping down at once cannot both win.
  */
-import { and, asc, count, eq, isNull } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, isNull } from 'drizzle-orm';
 import type { ClubDetail, ClubMember, ClubRole, ClubSummary, CreateClubInput, UpdateClubInput } from '@shared/schemas/clubs';
 import { canInClub, requireClubAccess, type Actor } from '../auth/permissions';
 import type { DbOrTx, Db, Tx } from '../db/client';
-import { clubInvitations, clubMemberships, clubs, users } from '../db/schema';
+import { brewClubShares, brews, clubInvitations, clubMemberships, clubs, recipeClubShares, recipes, users } from '../db/schema';
 import { Conflict, NotFound } from '../lib/errors';
 
 export async function listMyClubs(db: Db, userId: number): Promise<ClubSummary[]> {
@@ -129,6 +129,13 @@ async function removeMembership(tx: Tx, clubId: number, userId: number, lastOrga
   if (!current) throw notAMember();
   if (current.role === 'organiser' && (await organiserCount(tx, clubId)) <= 1) throw new Conflict(lastOrganiserMessage);
   await tx.delete(clubMemberships).where(and(eq(clubMemberships.clubId, clubId), eq(clubMemberships.userId, userId)));
+  // Whoever leaves takes what they shared with them: the club stops seeing it at once.
+  await tx
+    .delete(recipeClubShares)
+    .where(and(eq(recipeClubShares.clubId, clubId), inArray(recipeClubShares.recipeId, tx.select({ id: recipes.id }).from(recipes).where(eq(recipes.ownerId, userId)))));
+  await tx
+    .delete(brewClubShares)
+    .where(and(eq(brewClubShares.clubId, clubId), inArray(brewClubShares.brewId, tx.select({ id: brews.id }).from(brews).where(eq(brews.ownerId, userId)))));
 }
 
 export async function removeMember(db: Db, actor: Actor, clubId: number, userId: number) {
