@@ -39,6 +39,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: 'brews', lazy: withClient(() => import('./routes/brews')) },
             { path: 'brews/:id', lazy: withClient(() => import('./routes/brews-day')) },
             { path: 'brews/:id/log', lazy: withClient(() => import('./routes/brews-log')) },
+            { path: 'brews/:id/fermentation', lazy: withClient(() => import('./routes/fermentation')) },
             { path: 'instruments', lazy: withClient(() => import('./routes/instruments')) },
             { path: 'clubs', lazy: withClient(() => import('./routes/clubs')) },
             { path: 'clubs/:id', lazy: withClient(() => import('./routes/clubs-detail')) },

@@ -1,0 +1,47 @@
+import type { TemperatureRange, TemperatureSummary } from '@shared/schemas/fermentation';
+import { Notice } from '@/components/ui/notice';
+import { useUnits } from '@/lib/units';
+import { shortDateTime } from './words';
+
+/** Fermenter temperature: the last 24 hours, the whole fermentation, and every swing beyond the recipe's range. */
+export function TemperaturePanel({ summary }: { summary: TemperatureSummary }) {
+  const units = useUnits();
+  const t = (c: number) => units.format('temperature', c);
+  const range = (r: TemperatureRange | null) => (r ? (r.minC === r.maxC ? t(r.minC) : `${t(r.minC)} – ${t(r.maxC)}`) : '—');
+  return (
+    <div className="space-y-3">
+      <dl className="grid grid-cols-2 gap-3">
+        <Figure label="Last 24 hours" value={range(summary.last24h)} hint={summary.last24h ? `${summary.last24h.count} readings` : 'No reading in the last 24 hours'} />
+        <Figure label="Whole fermentation" value={range(summary.overall)} hint={summary.overall ? `${summary.overall.count} readings` : 'No readings yet'} />
+        <Figure label="Recipe range" value={summary.target ? `${t(summary.target.minC)} – ${t(summary.target.maxC)}` : '—'} />
+        <Figure label="Latest" value={summary.latest ? t(summary.latest.tempC) : '—'} hint={summary.latest ? shortDateTime(summary.latest.takenAt) : undefined} />
+      </dl>
+      {summary.excursions.length > 0 && (
+        <Notice tone="caution" title={`${summary.excursions.length} ${summary.excursions.length === 1 ? 'reading' : 'readings'} outside the recipe's range`}>
+          <ul className="mt-1 space-y-0.5">
+            {summary.excursions.map((e) => (
+              <li key={`${e.takenAt}-${e.tempC}`}>
+                {shortDateTime(e.takenAt)}: {t(e.tempC)}, {units.format('temperatureDelta', e.byC)} too {e.direction}
+              </li>
+            ))}
+          </ul>
+        </Notice>
+      )}
+      {summary.swingFlagged && summary.largestSwing24hC !== null && (
+        <Notice tone="caution">
+          The temperature moved by {units.format('temperatureDelta', summary.largestSwing24hC)} within one day. Yeast works best when it stays steady.
+        </Notice>
+      )}
+    </div>
+  );
+}
+
+function Figure({ label, value, hint }: { label: string; value: string; hint?: string }) {
+  return (
+    <div className="rounded-lg bg-cellar-50 p-3">
+      <dt className="text-sm font-semibold text-ink-soft">{label}</dt>
+      <dd className="text-lg font-bold tabular-nums text-cellar-900">{value}</dd>
+      {hint && <dd className="text-xs text-ink-faint">{hint}</dd>}
+    </div>
+  );
+}
