@@ -1,4 +1,4 @@
-import { BookOpen, FlaskConical, Gauge, House, ShieldCheck, Users, type LucideIcon } from 'lucide-react';
+import { BookOpen, Flame, FlaskConical, Gauge, House, ShieldCheck, Users, type LucideIcon } from 'lucide-react';
 
 export interface NavItem {
   to: string;
@@ -14,11 +14,9 @@ export interface NavItem {
 export const navItems: NavItem[] = [
   { to: '/', label: 'Home', icon: House },
   { to: '/recipes', label: 'Recipes', icon: BookOpen },
+  { to: '/brews', label: 'Brew days', icon: Flame },
   { to: '/instruments', label: 'Instruments', icon: Gauge },
   { to: '/clubs', label: 'Clubs', icon: Users },
   { to: '/late-boil-check', label: 'Late-boil check', icon: FlaskConical, public: true },
   { to: '/admin', label: 'Admin', icon: ShieldCheck, admin: true },
 ];
-
-// Icons reserved for the recipe, instrument, brew-day and club pages.
-export const featureIcons = { BookOpen, FlaskConical, Gauge, Users };

@@ -1,0 +1,121 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
+import { ScrollText } from 'lucide-react';
+import { useMemo, useRef, useState } from 'react';
+import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { brewStages, type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
+import type { BoilCheckParsed } from '@shared/schemas/boil-check';
+import { useAddDecision } from '@/features/brews/api/add-decision';
+import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
+import { BrewDay } from '@/features/brews/components/brew-day';
+import { BrewMissing } from '@/features/brews/components/brew-missing';
+import { DecisionExtras } from '@/features/brews/components/decision-extras';
+import { BrewSharingPanel } from '@/features/brews/components/sharing-panel';
+import { instrumentsQueryOptions } from '@/features/instruments/api/list-instruments';
+import type { LateBoilInitialValues } from '@/features/late-boil/components/form-values';
+import { LateBoilCheck, type LateBoilChoice } from '@/features/late-boil/components/late-boil-check';
+import { ButtonLink } from '@/components/ui/button';
+import { Loading, PageHeader } from '@/components/ui/page';
+
+export function loader(queryClient: QueryClient) {
+  return async ({ params }: LoaderFunctionArgs) => {
+    const id = Number(params.id);
+    if (Number.isInteger(id) && id > 0) void queryClient.prefetchQuery(brewQueryOptions(id));
+    void queryClient.prefetchQuery(instrumentsQueryOptions());
+    return null;
+  };
+}
+
+/** The brew day's snapshot, as the late-boil check's starting values. */
+function checkStart(brew: BrewDetail, wcf: number | undefined, calibrationTempC: number | undefined): LateBoilInitialValues {
+  return {
+    reading: { kind: 'refractometer', wcf, calibrationTempC },
+    minutesLeft: 10,
+    boilOffLPerHour: brew.boilOffLPerHour,
+    targetSg: brew.targets.targetOg,
+    targetVolumeL: brew.targets.batchVolumeL,
+    targetFg: brew.targets.targetFg,
+    kettleCapacityL: brew.equipment.kettleCapacityL ?? undefined,
+    coolingShrinkage: brew.equipment.coolingShrinkage,
+  };
+}
+
+const toChoice = (option: LateBoilChoice['option']): DecisionChoice =>
+  option.kind === 'extract' ? { kind: 'extract', extract: option.extract } : { kind: option.kind };
+
+export function Component() {
+  const id = Number(useParams().id);
+  const [params, setParams] = useSearchParams();
+  const { data: brew, isPending, error } = useBrew(id);
+  const instruments = useQuery({ ...instrumentsQueryOptions(), enabled: Boolean(brew?.permissions.edit) });
+  const addDecision = useAddDecision(id);
+  const reason = useRef('');
+  const [checkKey, setCheckKey] = useState(0);
+
+  const refractometer = instruments.data?.find((i) => i.kind === 'refractometer' && !i.archived);
+  const hydrometer = instruments.data?.find((i) => i.kind === 'hydrometer' && !i.archived);
+  const initialValues = useMemo(
+    () => (brew ? checkStart(brew, refractometer?.wcf != null ? Number(refractometer.wcf.toFixed(3)) : undefined, hydrometer?.calibrationTempC ?? undefined) : undefined),
+    // Only what the check starts from; a refetch after saving must not reset what is typed.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [brew?.id, brew?.boilOffLPerHour, refractometer?.id, hydrometer?.id],
+  );
+
+  if (isPending) return <Loading label="Loading the brew day…" />;
+  if (error || !brew) return <BrewMissing error={error} />;
+  if (brew.permissions.edit && instruments.isPending) return <Loading label="Loading your instruments…" />;
+
+  const stageParam = params.get('stage') as BrewStage | null;
+  const selected = stageParam && brewStages.includes(stageParam) ? stageParam : brew.currentStage;
+  const select = (stage: BrewStage) => setParams({ stage }, { replace: true });
+
+  const saveDecision = (input: BoilCheckParsed, choice: DecisionChoice) => addDecision.mutateAsync({ input, choice, note: reason.current });
+
+  const boilCheck = brew.permissions.edit ? (
+    <>
+      <LateBoilCheck
+        key={checkKey}
+        initialValues={initialValues}
+        onChoose={({ option, input }) => saveDecision(input, toChoice(option))}
+        renderAfterOptions={(check) => (
+          <DecisionExtras
+            ready={check !== null}
+            onReasonChange={(text) => (reason.current = text)}
+            onOwnAction={(description) => (check ? saveDecision(check.input, { kind: 'own', description }) : Promise.resolve())}
+          />
+        )}
+      />
+      <button type="button" className="no-print min-h-touch text-sm font-semibold text-cellar-700 underline" onClick={() => setCheckKey((k) => k + 1)}>
+        Start a fresh check
+      </button>
+    </>
+  ) : undefined;
+
+  return (
+    <>
+      <PageHeader
+        title={brew.name}
+        subtitle={
+          <>
+            {brew.brewedOn} · {brew.recipeName}
+            {!brew.isOwner && <> · by {brew.ownerName}</>}
+          </>
+        }
+        actions={
+          <ButtonLink to={`/brews/${brew.id}/log`} variant="secondary">
+            <ScrollText aria-hidden className="size-5" /> Log and brew sheet
+          </ButtonLink>
+        }
+      />
+      <BrewDay brew={brew} instruments={instruments.data ?? []} selected={selected} onSelect={select} boilCheck={boilCheck} />
+      {brew.permissions.edit && (
+        <details className="no-print mt-6 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
+          <summary className="flex min-h-touch cursor-pointer items-center text-lg font-bold text-cellar-900">Sharing</summary>
+          <div className="mt-3">
+            <BrewSharingPanel brew={brew} />
+          </div>
+        </details>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,16 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ReadingPhoto } from '@shared/schemas/brews';
+import { api } from '@/lib/api-client';
+import { brewKeys } from './keys';
+
+export const deletePhoto = (photo: Pick<ReadingPhoto, 'url'>) => api.delete(photo.url);
+
+export function useDeletePhoto(brewId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    // Send even when the browser says it is offline: a failed save must say so and offer a retry, not wait silently.
+    networkMode: 'always',
+    mutationFn: deletePhoto,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) }),
+  });
+}

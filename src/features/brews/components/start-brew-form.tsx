@@ -1,0 +1,88 @@
+import { Field, Form, Formik } from 'formik';
+import { startBrewSchema, type BrewDetail } from '@shared/schemas/brews';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { TextField } from '@/components/ui/text-field';
+import { NetworkError } from '@/lib/api-client';
+import { applyApiError, zodValidate } from '@/lib/form';
+import { useStartBrew } from '../api/start-brew';
+import { NotSaved } from './not-saved';
+
+export interface RecipeChoice {
+  id: number;
+  name: string;
+  ownerName: string;
+  isOwner: boolean;
+}
+
+interface StartValues {
+  recipeId: string;
+  name: string;
+  brewedOn: string;
+}
+
+function localToday() {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+}
+
+const toInput = (v: StartValues) => ({
+  recipeId: v.recipeId === '' ? undefined : Number(v.recipeId),
+  name: v.name.trim() === '' ? undefined : v.name,
+  brewedOn: v.brewedOn === '' ? undefined : v.brewedOn,
+});
+
+/** Start a brew day from one of my recipes or one shared with my clubs: its targets are copied as they are now. */
+export function StartBrewForm({ recipes, onStarted }: { recipes: readonly RecipeChoice[]; onStarted: (brew: BrewDetail) => void }) {
+  const start = useStartBrew();
+  if (recipes.length === 0) {
+    return <p className="text-ink-soft">Write a recipe first, or ask your club to share one: a brew day is judged against a recipe’s targets.</p>;
+  }
+  return (
+    <Formik<StartValues>
+      initialValues={{ recipeId: String(recipes[0].id), name: '', brewedOn: localToday() }}
+      validate={(v) => zodValidate(startBrewSchema)(toInput(v))}
+      onSubmit={async (values, helpers) => {
+        helpers.setStatus(undefined);
+        try {
+          onStarted(await start.mutateAsync(startBrewSchema.parse(toInput(values))));
+        } catch (error) {
+          if (error instanceof NetworkError) helpers.setStatus({ offline: true });
+          else applyApiError(error, helpers);
+        }
+      }}
+    >
+      {({ isSubmitting, status, submitForm, errors }) => (
+        <Form noValidate aria-label="Start a brew day" className="space-y-4">
+          <label className="block">
+            <span className="mb-1 block text-sm font-semibold text-ink-soft">Recipe</span>
+            <Field as="select" name="recipeId" className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base">
+              {recipes.map((r) => (
+                <option key={r.id} value={String(r.id)}>
+                  {r.isOwner ? r.name : `${r.name} (by ${r.ownerName})`}
+                </option>
+              ))}
+            </Field>
+            {errors.recipeId && (
+              <span role="alert" className="mt-1 block text-sm font-semibold text-alert-700">
+                {errors.recipeId}
+              </span>
+            )}
+          </label>
+          <div className="grid gap-3 sm:grid-cols-2">
+            <TextField name="name" label="Name (optional)" hint="The recipe’s name if left empty." />
+            <TextField name="brewedOn" type="date" label="Brew date" />
+          </div>
+          {typeof status === 'string' && <Notice tone="error">{status}</Notice>}
+          {status?.offline ? (
+            <NotSaved busy={isSubmitting} onRetry={() => void submitForm()} />
+          ) : (
+            <Button type="submit" busy={isSubmitting} className="w-full sm:w-auto">
+              Start the brew day
+            </Button>
+          )}
+        </Form>
+      )}
+    </Formik>
+  );
+}

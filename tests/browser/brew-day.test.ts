@@ -1,0 +1,141 @@
+import { describe, expect, it } from 'vitest';
+import { brixToSg, EXTRACT_POTENTIALS_POINTS_L_PER_KG, EXTRACT_VOLUME_L_PER_KG } from '../../shared/brewmath';
+import { newPage, phone, signInViaApi, useBrowser } from '../support/browser';
+
+const b = useBrowser();
+
+/**
+ * Worked example, gravity points × litres mass balance, hand calculation.
+ * Late in the boil of "Hollow Oak Harvest Pale" (target OG 1.050, 23 L into the fermenter) a drop
+ * reads 11.6 °Brix on a refractometer with wort correction factor 1.04; 25.5 L hot in the kettle,
+ * 10 minutes left, boiling off 4 L/h; wort shrinks 4 % on cooling (common practice, no source).
+ * - 11.6 / 1.04 = 11.154 °P → SG 1.04483 (the ASBC extract-table cubic in shared/brewmath, itself
+ *   checked against the ASBC table; the rational approximation 1 + P / (258.6 − P / 258.2 × 227.1)
+ *   gives 1.04483 too), i.e. 44.83 gravity points.
+ * - End of boil: 25.5 − 4 × 10/60 = 24.833 L hot; × 0.96 = 23.84 L cold.
+ * - Extract in the kettle: 44.83 × 25.5 × 0.96 = 1097.3 points·L.
+ * - Dry malt extract, 367 points·L/kg, adding 0.62 L/kg (shared/brewmath's
+ *   EXTRACT_POTENTIALS_POINTS_L_PER_KG and EXTRACT_VOLUME_L_PER_KG):
+ *   kg = (50 × 23.84 − 1097.3) / (367 − 50 × 0.62) = 94.7 / 336 = 0.2818 kg → 282 g.
+ */
+function handWorkedDmeGrams(): number {
+  const points = (brixToSg(11.6, 1.04) - 1) * 1000;
+  const approxPoints = (11.6 / 1.04 / (258.6 - (11.6 / 1.04 / 258.2) * 227.1)) * 1000;
+  expect(points).toBeCloseTo(approxPoints, 1);
+  const coldEndL = (25.5 - (4 * 10) / 60) * 0.96;
+  const pointsL = points * 25.5 * 0.96;
+  const kg = (50 * coldEndL - pointsL) / (EXTRACT_POTENTIALS_POINTS_L_PER_KG.dme - 50 * EXTRACT_VOLUME_L_PER_KG.dme);
+  return Math.round(kg * 1000);
+}
+
+const nbsp = (s: string | null) => (s ?? '').replace(/\u00a0/g, ' ').replace(/\s+/g, ' ').trim();
+
+describe('a brew day on a phone-sized window', () => {
+  it('starts from a demo recipe, logs a reading through a lost connection, runs the late-boil check, chooses dry malt extract and finds the decision in the log', async () => {
+    const grams = handWorkedDmeGrams();
+    expect(grams).toBe(282);
+    const { page, context, errors } = await newPage(b.browser);
+    await signInViaApi(context, 'priya@hollow-oak.example', 'wortwise-demo');
+
+    // Start a brew day from the demo recipe.
+    await page.goto('/brews');
+    await page.getByRole('link', { name: 'Brew days' }).waitFor();
+    const start = page.getByRole('form', { name: 'Start a brew day' });
+    await start.getByLabel('Recipe').selectOption({ label: 'Hollow Oak Harvest Pale' });
+    await start.getByLabel('Name (optional)').fill('Harvest Pale, browser test');
+    await start.getByRole('button', { name: 'Start the brew day' }).click();
+    await page.waitForURL(/\/brews\/\d+$/);
+    await page.getByRole('heading', { name: 'Harvest Pale, browser test' }).waitFor();
+    const brewId = Number(new URL(page.url()).pathname.split('/').pop());
+
+    // The mash: raw and corrected side by side as the brewer types. Priya's probe read 0.4 °C
+    // in an ice bath (0 °C), so 66.6 as read is 66.2 corrected.
+    const mashTemp = page.getByRole('form', { name: 'New reading' }).filter({ has: page.getByLabel('Mash temperature, as read') });
+    await mashTemp.getByLabel('Mash temperature, as read').fill('66.6');
+    await expect.poll(async () => nbsp(await mashTemp.getByTestId('corrected-value').textContent())).toBe('66.2 °C');
+    expect(nbsp(await mashTemp.getByTestId('raw-value').textContent())).toBe('66.6 °C');
+
+    // The connection drops while saving: nothing is lost, and a retry saves it.
+    await context.setOffline(true);
+    await mashTemp.getByRole('button', { name: 'Save reading' }).click();
+    await mashTemp.getByText('Not saved — no connection').waitFor();
+    expect(await mashTemp.getByLabel('Mash temperature, as read').inputValue()).toBe('66.6');
+    await context.setOffline(false);
+    await mashTemp.getByRole('button', { name: 'Retry' }).click();
+    await mashTemp.getByText('Mash temperature saved.').waitFor();
+    await page.getByRole('article', { name: 'Mash temperature' }).waitFor();
+
+    // The boil: the late-boil check, prefilled from the brew day's snapshot.
+    await page.getByRole('tab', { name: /^Boil/ }).click();
+    const check = page.getByRole('form', { name: 'Late-boil check' });
+    await check.waitFor();
+    await expect.poll(async () => check.getByLabel('Target OG').inputValue()).toBe('1.05');
+    expect(await check.getByLabel('Into the fermenter').inputValue()).toBe('23');
+    await check.getByLabel('Brix').fill('11.6');
+    await check.getByLabel('Wort correction factor').fill('1.04');
+    await check.getByLabel('Wort in the kettle (hot)').fill('25.5');
+    await check.getByLabel('Minutes left').fill('10');
+    await check.getByLabel('Boil-off rate').fill('4');
+
+    const dme = check.getByRole('article').filter({ hasText: 'dry malt extract' });
+    await expect.poll(async () => nbsp(await dme.getByRole('heading', { level: 3 }).textContent())).toBe(`Add ${grams} g dry malt extract`);
+
+    // Saving the choice fails once on a dropped connection, then goes through on retry.
+    await context.setOffline(true);
+    await dme.getByRole('button', { name: 'Choose this' }).click();
+    await dme.getByText('Not saved').waitFor();
+    expect(await check.getByLabel('Brix').inputValue()).toBe('11.6');
+    await context.setOffline(false);
+    await dme.getByRole('button', { name: 'Try again' }).click();
+    await dme.getByText('Saved to the brew-day log.').waitFor();
+    const decisions = page.getByTestId('decision');
+    await expect.poll(() => decisions.count()).toBe(1);
+    expect(nbsp(await decisions.first().getByRole('heading').textContent())).toBe(`Add ${grams} g dry malt extract`);
+
+    // No sideways scroll on a 375 px phone.
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+
+    // The decision in the log, with the numbers the server recomputed.
+    await page.getByRole('link', { name: 'Log and brew sheet' }).click();
+    await page.waitForURL(new RegExp(`/brews/${brewId}/log$`));
+    const timeline = page.getByRole('list', { name: 'Timeline' });
+    await timeline.waitFor();
+    const logged = timeline.getByTestId('decision');
+    expect(nbsp(await logged.getByRole('heading').textContent())).toBe(`Add ${grams} g dry malt extract`);
+    expect(nbsp(await logged.textContent())).toContain('Predicted OG 1.050');
+    expect(nbsp(await timeline.textContent())).toContain('As read 66.6 °C · corrected 66.2 °C');
+    await page.getByTestId('brew-chart').waitFor();
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+
+    const unexpected = errors.filter((e) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED/.test(e));
+    expect(unexpected).toEqual([]);
+    await context.close();
+  });
+
+  it('prints the brew sheet within the width of A4 and US Letter, without the navigation', async () => {
+    const { page, context } = await newPage(b.browser);
+    await signInViaApi(context, 'priya@hollow-oak.example', 'wortwise-demo');
+    const list = await context.request.get('/api/brews');
+    const demo = ((await list.json()) as { id: number; name: string }[]).find((x) => x.name === 'Hollow Oak Harvest Pale, first batch');
+    expect(demo).toBeDefined();
+    await page.goto(`/brews/${demo!.id}/log`);
+    await page.getByRole('list', { name: 'Timeline' }).waitFor();
+    await page.emulateMedia({ media: 'print' });
+    // Printable width at 96 CSS px per inch with 12 mm margins each side: A4 210 mm → 186 mm, Letter 8.5 in → 191.9 mm.
+    for (const [paper, widthMm] of [
+      ['A4', 186],
+      ['US Letter', 191.9],
+    ] as const) {
+      await page.setViewportSize({ width: Math.floor((widthMm / 25.4) * 96), height: 1000 });
+      const layout = await page.evaluate(() => ({
+        overflow: document.documentElement.scrollWidth - window.innerWidth,
+        navShown: document.querySelector('nav[aria-label="Main"]')?.checkVisibility() ?? false,
+        buttonsShown: [...document.querySelectorAll('button')].filter((el) => el.checkVisibility()).length,
+      }));
+      expect(layout, paper).toEqual({ overflow: 0, navShown: false, buttonsShown: 0 });
+    }
+    await page.setViewportSize(phone);
+    await context.close();
+  });
+});
