@@ -34,7 +34,7 @@ export function RootLayout() {
             )}
           </div>
         </div>
-        {items.length > 1 && (
+        {items.length > 0 && (
           <nav aria-label="Main" className="mx-auto max-w-5xl overflow-x-auto px-1 sm:px-4">
             <ul className="flex gap-1">
               {items.map(({ to, label, icon: Icon }) => (

@@ -18,6 +18,13 @@ export function Component() {
           Create an account
         </Link>
       </p>
+      <p className="mt-2 text-center text-ink-soft">
+        Or try the{' '}
+        <Link to="/late-boil-check" className="font-semibold text-cellar-700 underline">
+          late-boil check
+        </Link>{' '}
+        without an account.
+      </p>
     </div>
   );
 }
