@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQuery } from '@tanstack/react-query';
-import { ScrollText } from 'lucide-react';
+import { FlaskConical, ScrollText } from 'lucide-react';
 import { useMemo, useRef, useState } from 'react';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { brewStages, type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
@@ -102,9 +102,16 @@ export function Component() {
           </>
         }
         actions={
-          <ButtonLink to={`/brews/${brew.id}/log`} variant="secondary">
-            <ScrollText aria-hidden className="size-5" /> Log and brew sheet
-          </ButtonLink>
+          <>
+            <ButtonLink to={`/brews/${brew.id}/log`} variant="secondary">
+              <ScrollText aria-hidden className="size-5" /> Log and brew sheet
+            </ButtonLink>
+            {brew.pitchedAt && (
+              <ButtonLink to={`/brews/${brew.id}/fermentation`} variant="secondary">
+                <FlaskConical aria-hidden className="size-5" /> Fermentation
+              </ButtonLink>
+            )}
+          </>
         }
       />
       <BrewDay brew={brew} instruments={instruments.data ?? []} selected={selected} onSelect={select} boilCheck={boilCheck} />
