@@ -79,7 +79,13 @@ export interface ReminderRun {
  */
 export async function runDueReminders(ctx: AppContext, now = new Date(), { limit = 50, workerId = `${hostname()}-${process.pid}` } = {}): Promise<ReminderRun> {
   const { db } = ctx;
-  await scheduleFirstChecks(db, now);
+  try {
+    await scheduleFirstChecks(db, now);
+  } catch (error) {
+    // Two instances scheduling the same rows can deadlock in InnoDB; the next run schedules them.
+    const code = (error as { code?: string; cause?: { code?: string } }).cause?.code ?? (error as { code?: string }).code;
+    if (code !== 'ER_LOCK_DEADLOCK' && code !== 'ER_LOCK_WAIT_TIMEOUT') throw error;
+  }
   const token = `${workerId}-${randomUUID().slice(0, 8)}`.slice(0, 64);
   await db
     .update(fermentationReminders)
