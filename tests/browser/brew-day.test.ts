@@ -1,3 +1,4 @@
+import { crc32, deflateSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { brixToSg, EXTRACT_POTENTIALS_POINTS_L_PER_KG, EXTRACT_VOLUME_L_PER_KG } from '../../shared/brewmath';
 import { newPage, phone, signInViaApi, useBrowser } from '../support/browser';
@@ -26,6 +27,25 @@ function handWorkedDmeGrams(): number {
   const pointsL = points * 25.5 * 0.96;
   const kg = (50 * coldEndL - pointsL) / (EXTRACT_POTENTIALS_POINTS_L_PER_KG.dme - 50 * EXTRACT_VOLUME_L_PER_KG.dme);
   return Math.round(kg * 1000);
+}
+
+/** A real 1 × 1 PNG by the PNG specification (W3C, 2nd edition): signature, IHDR, IDAT, IEND, each chunk with its CRC-32. */
+function tinyPng(): Buffer {
+  const chunk = (type: string, data: Buffer) => {
+    const length = Buffer.alloc(4);
+    length.writeUInt32BE(data.length);
+    const body = Buffer.concat([Buffer.from(type, 'latin1'), data]);
+    const crc = Buffer.alloc(4);
+    crc.writeUInt32BE(crc32(body));
+    return Buffer.concat([length, body, crc]);
+  };
+  const ihdr = Buffer.from([0, 0, 0, 1, 0, 0, 0, 1, 8, 2, 0, 0, 0]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', ihdr),
+    chunk('IDAT', deflateSync(Buffer.from([0, 200, 140, 40]))),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 const nbsp = (s: string | null) => (s ?? '').replace(/\u00a0/g, ' ').replace(/\s+/g, ' ').trim();
@@ -63,7 +83,16 @@ describe('a brew day on a phone-sized window', () => {
     await context.setOffline(false);
     await mashTemp.getByRole('button', { name: 'Retry' }).click();
     await mashTemp.getByText('Mash temperature saved.').waitFor();
-    await page.getByRole('article', { name: 'Mash temperature' }).waitFor();
+    const card = page.getByRole('article', { name: 'Mash temperature' });
+    await card.waitFor();
+
+    // A photo of the reading: a text file named .png is refused by its bytes; a real PNG is kept and shown.
+    await card.getByLabel('Add a photo').setInputFiles({ name: 'thermometer.png', mimeType: 'image/png', buffer: Buffer.from('not really a picture') });
+    await card.getByText('That file is not a JPEG, PNG or WebP image. Choose a photo taken with your camera.').waitFor();
+    await card.getByLabel('Add a photo').setInputFiles({ name: 'thermometer.png', mimeType: 'image/png', buffer: tinyPng() });
+    const photo = card.getByRole('img', { name: 'Photo of the mash temperature reading' });
+    await photo.waitFor();
+    await expect.poll(() => photo.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
 
     // The boil: the late-boil check, prefilled from the brew day's snapshot.
     await page.getByRole('tab', { name: /^Boil/ }).click();
@@ -108,6 +137,7 @@ describe('a brew day on a phone-sized window', () => {
     await page.getByTestId('brew-chart').waitFor();
     expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
 
+    // The refused upload (415) and the dropped connection show up as failed requests in the console.
     const unexpected = errors.filter((e) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED/.test(e));
     expect(unexpected).toEqual([]);
     await context.close();

@@ -2,13 +2,14 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useQuery } from '@tanstack/react-query';
 import { FlaskConical, ScrollText } from 'lucide-react';
 import { useMemo, useRef, useState } from 'react';
-import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { brewStages, type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { useAddDecision } from '@/features/brews/api/add-decision';
 import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
 import { BrewDay } from '@/features/brews/components/brew-day';
 import { BrewMissing } from '@/features/brews/components/brew-missing';
+import { DeleteBrew } from '@/features/brews/components/delete-brew';
 import { DecisionExtras } from '@/features/brews/components/decision-extras';
 import { BrewSharingPanel } from '@/features/brews/components/sharing-panel';
 import { instrumentsQueryOptions } from '@/features/instruments/api/list-instruments';
@@ -46,6 +47,7 @@ const toChoice = (option: LateBoilChoice['option']): DecisionChoice =>
 export function Component() {
   const id = Number(useParams().id);
   const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
   const { data: brew, isPending, error } = useBrew(id);
   const instruments = useQuery({ ...instrumentsQueryOptions(), enabled: Boolean(brew?.permissions.edit) });
   const addDecision = useAddDecision(id);
@@ -117,9 +119,10 @@ export function Component() {
       <BrewDay brew={brew} instruments={instruments.data ?? []} selected={selected} onSelect={select} boilCheck={boilCheck} />
       {brew.permissions.edit && (
         <details className="no-print mt-6 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
-          <summary className="flex min-h-touch cursor-pointer items-center text-lg font-bold text-cellar-900">Sharing</summary>
-          <div className="mt-3">
+          <summary className="flex min-h-touch cursor-pointer items-center text-lg font-bold text-cellar-900">Sharing and deleting</summary>
+          <div className="mt-3 space-y-4">
             <BrewSharingPanel brew={brew} />
+            <DeleteBrew brewId={brew.id} onDeleted={() => navigate('/brews')} />
           </div>
         </details>
       )}

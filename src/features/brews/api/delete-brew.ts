@@ -12,7 +12,8 @@ export function useDeleteBrew() {
     mutationFn: deleteBrew,
     onSuccess: (_void, id) => {
       queryClient.removeQueries({ queryKey: brewKeys.detail(id) });
-      return queryClient.invalidateQueries({ queryKey: brewKeys.all });
+      // Lists only: refetching the deleted brew day would only answer 404.
+      return queryClient.invalidateQueries({ queryKey: [...brewKeys.all, 'list'] });
     },
   });
 }
