@@ -117,6 +117,7 @@ describe('describeDeviation', () => {
     expect(describeDeviation(d, { unitSystem: 'us', gravityUnit: 'sg' })).toBe('Mash at 147.9\u00a0°F is 2.9\u00a0°F below the 150.8\u00a0°F step.');
     const [og] = findDeviations({ targets, readings: [reading('og', 1.045)] });
     // 1.050 is 12.4 °P and 1.045 is 11.2 °P by the ASBC cubic (ASBC Methods of Analysis, extract table).
-    expect(describeDeviation(og, { unitSystem: 'metric', gravityUnit: 'plato' })).toBe('OG 11.2\u00a0°P is 5 points short of the target 12.4\u00a0°P.');
+    expect(describeDeviation(og, { unitSystem: 'metric', gravityUnit: 'plato' })).toBe('OG 11.2\u00a0°P is 1.2\u00a0°P short of the target 12.4\u00a0°P.');
+    expect(describeDeviation(og, { unitSystem: 'metric', gravityUnit: 'sg' })).toBe('OG 1.045 is 5 points short of the target 1.050.');
   });
 });

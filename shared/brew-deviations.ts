@@ -8,6 +8,7 @@
  * the fermenter within 5 %, mash pH inside MASH_PH_BAND, pitch no warmer than the recipe's
  * fermentation range.
  */
+import { sgToPlato } from './brewmath/gravity';
 import { MASH_PH_BAND } from './brewmath/mash';
 import { formatGravity, formatTemperature, formatVolume, type GravityUnit, type UnitSystem } from './brewmath/format';
 import type { InstrumentSnapshot } from './schemas/instruments';
@@ -60,11 +61,12 @@ function instrumentDeviation(reading: DeviationReading, stage: BrewDeviation['st
   const snap = reading.instrument;
   const base = { stage, readingId: reading.id, decisionId: null, expected: null, actual: null, quantity: null } as const;
   if (!snap || snap.instrumentId === null) {
+    const kind = snap ? { hydrometer: 'hydrometer', refractometer: 'refractometer', thermometer: 'thermometer', ph_meter: 'pH meter' }[snap.kind] : 'instrument';
     return {
       ...base,
       code: 'instrument-uncalibrated',
       instrumentName: snap?.name ?? null,
-      message: 'No instrument of your own was picked: common-practice defaults were used, not a calibration.',
+      message: `No ${kind} of your own was picked: common-practice defaults were used, not a calibration.`,
     };
   }
   switch (snap.kind) {
@@ -230,6 +232,12 @@ export function findDeviations(input: {
   return out;
 }
 
+/** A gravity difference as the brewer reads gravity: points for SG, degrees for °Plato. */
+function gap(a: number, e: number, unit: GravityUnit): string {
+  if (unit === 'plato') return `${Math.abs(sgToPlato(a) - sgToPlato(e)).toFixed(1)}\u00a0°P`;
+  return `${Math.abs(round(points(a) - points(e), 1)).toFixed(0)} points`;
+}
+
 /** The same deviation worded in the brewer's own units. */
 export function describeDeviation(d: BrewDeviation, prefs: { unitSystem: UnitSystem; gravityUnit: GravityUnit }): string {
   const g = (sg: number) => formatGravity(sg, prefs.gravityUnit);
@@ -245,14 +253,14 @@ export function describeDeviation(d: BrewDeviation, prefs: { unitSystem: UnitSys
     }
     case 'og-low':
     case 'og-high':
-      return `OG ${g(a)} is ${Math.abs(round(points(a) - points(e), 1)).toFixed(0)} points ${d.code === 'og-low' ? 'short of' : 'over'} the target ${g(e)}.`;
+      return `OG ${g(a)} is ${gap(a, e, prefs.gravityUnit)} ${d.code === 'og-low' ? 'short of' : 'over'} the target ${g(e)}.`;
     case 'volume-low':
     case 'volume-high':
       return `${v(a)} went into the fermenter, ${Math.abs(((a - e) / e) * 100).toFixed(0)}\u00a0% ${d.code === 'volume-low' ? 'short of' : 'over'} the recipe's ${v(e)}.`;
     case 'pitch-too-warm':
       return `Pitched at ${t(a)}, above the top of the recipe's fermentation range, ${t(e)}.`;
     case 'accepted-off-target':
-      return `Left as is, the wort was projected to finish at ${g(a)}, ${Math.abs(round(points(a) - points(e), 1)).toFixed(0)} points ${a < e ? 'short of' : 'over'} the target ${g(e)}.`;
+      return `Left as is, the wort was projected to finish at ${g(a)}, ${gap(a, e, prefs.gravityUnit)} ${a < e ? 'short of' : 'over'} the target ${g(e)}.`;
     default:
       return d.message;
   }

@@ -7,7 +7,7 @@ import { useUnits, type Units } from '@/lib/units';
 import { useDeleteNote } from '../api/delete-note';
 import { BrewChart } from './brew-chart';
 import { DecisionCard } from './decision-card';
-import { correctedText, correctionText, instrumentText, rawText, timeText } from './describe';
+import { correctedText, correctionText, instrumentText, rawText, timeText, deviationTitle } from './describe';
 import './brew-sheet.css';
 
 interface Entry {
@@ -38,7 +38,7 @@ function ReadingEntry({ reading, brew, units }: { reading: BrewReading; brew: Br
       </p>
       {reading.note && <p className="whitespace-pre-line">{reading.note}</p>}
       {deviations.map((d) => (
-        <Notice key={d.code} tone="caution" className="mt-1" title="Off target">
+        <Notice key={d.code} tone="caution" className="mt-1" title={deviationTitle(d)}>
           {describeDeviation(d, units)}
         </Notice>
       ))}

@@ -3,7 +3,7 @@ import { describeDeviation } from '@shared/brew-deviations';
 import type { BrewDecision, BrewDeviation } from '@shared/schemas/brews';
 import { Notice } from '@/components/ui/notice';
 import { useUnits } from '@/lib/units';
-import { decisionAction, decisionOutcomeText, decisionReadingText, timeText } from './describe';
+import { decisionAction, decisionOutcomeText, decisionReadingText, timeText, deviationTitle } from './describe';
 
 /** A late-boil decision as recorded: what was read, what was chosen, where it leads, and why. */
 export function DecisionCard({ decision, deviations }: { decision: BrewDecision; deviations: readonly BrewDeviation[] }) {
@@ -24,7 +24,7 @@ export function DecisionCard({ decision, deviations }: { decision: BrewDecision;
       {outcome && <p className="mt-1 font-semibold">{outcome}</p>}
       {decision.note && <p className="mt-2 whitespace-pre-line">Why: {decision.note}</p>}
       {mine.map((d) => (
-        <Notice key={d.code} tone="caution" className="mt-2" title="Off target">
+        <Notice key={d.code} tone="caution" className="mt-2" title={deviationTitle(d)}>
           {describeDeviation(d, units)}
         </Notice>
       ))}

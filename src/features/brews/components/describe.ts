@@ -96,3 +96,8 @@ export function decisionOutcomeText(decision: Pick<BrewDecision, 'chosen' | 'res
   const where = `OG ${units.format('gravity', end.endSg)}, ${units.format('volume', end.fermenterVolumeL ?? null)} into the fermenter`;
   return chosen ? `Predicted ${where}${abv}` : `Left as is, it was heading for ${where}`;
 }
+
+/** A short heading for a deviation: an instrument worth checking is not the beer being off target. */
+export function deviationTitle(deviation: { code: string }): string {
+  return deviation.code.startsWith('instrument-') ? 'Instrument' : 'Off target';
+}

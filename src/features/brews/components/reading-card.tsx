@@ -10,7 +10,7 @@ import { useDeletePhoto } from '../api/delete-photo';
 import { useDeleteReading } from '../api/delete-reading';
 import { useRecomputeReading } from '../api/recompute-reading';
 import { useUploadPhoto } from '../api/upload-photo';
-import { correctedText, correctionText, instrumentText, rawText, timeText } from './describe';
+import { correctedText, correctionText, instrumentText, rawText, timeText, deviationTitle } from './describe';
 import { NotSaved } from './not-saved';
 
 interface ReadingCardProps {
@@ -59,7 +59,7 @@ export function ReadingCard({ brewId, reading, deviations, canEdit }: ReadingCar
       )}
       {reading.note && <p className="mt-2 whitespace-pre-line">{reading.note}</p>}
       {mine.map((d) => (
-        <Notice key={`${d.code}-${d.readingId}`} tone="caution" className="mt-2" title="Off target">
+        <Notice key={`${d.code}-${d.readingId}`} tone="caution" className="mt-2" title={deviationTitle(d)}>
           {describeDeviation(d, units)}
         </Notice>
       ))}
