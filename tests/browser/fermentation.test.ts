@@ -1,22 +1,28 @@
+import type { BrowserContext } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { newPage, signInViaApi, useBrowser } from '../support/browser';
 
 const b = useBrowser();
 const DAY_MS = 86_400_000;
 
+/** A brew day of the demo brewer's own recipe whose yeast went in some days ago. */
+async function pitchedBrew(context: BrowserContext, name: string, daysAgo: number) {
+  const recipes = ((await (await context.request.get('/api/recipes')).json()) as { items: { id: number }[] }).items;
+  const started = await context.request.post('/api/brews', { data: { recipeId: recipes[0].id, name } });
+  expect(started.status()).toBe(201);
+  const brewId = ((await started.json()) as { id: number }).id;
+  const pitchedAt = new Date(Math.floor((Date.now() - daysAgo * DAY_MS) / 60_000) * 60_000);
+  const pitched = await context.request.post(`/api/brews/${brewId}/readings`, { data: { kind: 'pitch_temp', tempC: 19, takenAt: pitchedAt.toISOString(), pitched: true } });
+  expect(pitched.status()).toBe(201);
+  return { brewId, pitchedAt };
+}
+
 describe('the fermentation log, on a phone-sized window', () => {
   it('logs three hydrometer readings and watches the verdict go from too early to still moving to stable', async () => {
     const { page, context, errors } = await newPage(b.browser);
     await signInViaApi(context, 'priya@hollow-oak.example', 'wortwise-demo');
 
-    // A brew day of her own recipe whose yeast went in 17 days ago.
-    const recipes = ((await (await context.request.get('/api/recipes')).json()) as { items: { id: number }[] }).items;
-    const started = await context.request.post('/api/brews', { data: { recipeId: recipes[0].id, name: 'Verdict walk-through' } });
-    expect(started.status()).toBe(201);
-    const brewId = ((await started.json()) as { id: number }).id;
-    const pitchedAt = new Date(Math.floor((Date.now() - 17 * DAY_MS) / 60_000) * 60_000);
-    const pitched = await context.request.post(`/api/brews/${brewId}/readings`, { data: { kind: 'pitch_temp', tempC: 19, takenAt: pitchedAt.toISOString(), pitched: true } });
-    expect(pitched.status()).toBe(201);
+    const { brewId, pitchedAt } = await pitchedBrew(context, 'Verdict walk-through', 17);
 
     await page.goto(`/brews/${brewId}/fermentation`);
     const banner = page.locator('section[data-state]');
@@ -55,6 +61,30 @@ describe('the fermentation log, on a phone-sized window', () => {
     await expect(page.getByTestId('priming-grams').textContent()).resolves.toMatch(/^\d+\sg$/);
     await page.getByRole('button', { name: 'Record packaging' }).click();
     await page.getByText('Packaged with a stable final gravity.').waitFor();
+
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('imports a logger file through the column mapping and the preview', async () => {
+    const { page, context, errors } = await newPage(b.browser);
+    await signInViaApi(context, 'priya@hollow-oak.example', 'wortwise-demo');
+    const { brewId, pitchedAt } = await pitchedBrew(context, 'Logger import', 15);
+    const at = (day: number) => new Date(pitchedAt.getTime() + day * DAY_MS).toISOString().slice(0, 16).replace('T', ' ');
+    // A semicolon file with its own column names and decimal commas, as a spreadsheet in many countries writes it.
+    const file = ['When;Reading;Comment', `${at(12)};1,011;logger`, `${at(14)};1,011;logger`].join('\n');
+
+    await page.goto(`/brews/${brewId}/fermentation`);
+    await page.getByLabel('CSV file').setInputFiles({ name: 'logger.csv', mimeType: 'text/csv', buffer: Buffer.from(file) });
+    await page.getByText('Choose the unit column, or the unit every row is in.').waitFor();
+    await expect(page.getByLabel('Date and time').inputValue()).resolves.toBe('0');
+    await page.getByLabel('Every value is in').selectOption('sg');
+    await page.getByRole('button', { name: 'Import 2 readings' }).click();
+    await page.getByText('Imported 2 readings.').waitFor();
+    // Common practice, no source: equal hydrometer readings on days 12 and 14 are stable.
+    await page.getByRole('heading', { name: 'Stable: safe to package' }).waitFor();
 
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
