@@ -1,6 +1,7 @@
 import { useField } from 'formik';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { displayDecimals, useUnits, type QuantityKind, type Units } from '@/lib/units';
+import { FieldShell, fieldAria, inputClass } from './field-shell';
 
 interface QuantityFieldProps {
   /** Formik field holding the SI value (number, or '' / null when empty). */
@@ -76,43 +77,24 @@ export function QuantityField({ name, kind, label, hint, className = '', size = 
     void helpers.setValue(value);
   }
 
-  const error = conversionError ?? (meta.touched ? meta.error : undefined);
-  const invalid = Boolean(error) && (meta.touched || Boolean(conversionError));
-  const unit = units.unit(kind);
+  const fieldError = meta.touched && typeof meta.error === 'string' ? meta.error : null;
+  const error = conversionError ?? fieldError;
   const big = size === 'large';
   return (
-    <div className={className}>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
-        {label}
-      </label>
-      <div className="relative">
-        <input
-          id={id}
-          name={name}
-          type="text"
-          inputMode="decimal"
-          autoComplete="off"
-          value={text}
-          disabled={disabled}
-          placeholder={placeholder}
-          onChange={(e) => onChange(e.target.value)}
-          onBlur={field.onBlur}
-          aria-invalid={invalid || undefined}
-          aria-describedby={invalid ? `${id}-error` : hint ? `${id}-hint` : undefined}
-          className={`block w-full rounded-lg border bg-white py-2 pl-3 pr-16 tabular-nums ${big ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'} ${invalid ? 'border-alert-500' : 'border-cellar-300'} focus:border-cellar-500 disabled:bg-cellar-50`}
-        />
-        <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm font-semibold text-ink-faint">{unit}</span>
-      </div>
-      {hint && !invalid && (
-        <p id={`${id}-hint`} className="mt-1 text-sm text-ink-faint">
-          {hint}
-        </p>
-      )}
-      {invalid && (
-        <p id={`${id}-error`} role="alert" className="mt-1 text-sm font-semibold text-alert-700">
-          {error}
-        </p>
-      )}
-    </div>
+    <FieldShell id={id} label={label} hint={hint} error={error} suffix={units.unit(kind)} className={className}>
+      <input
+        name={name}
+        type="text"
+        inputMode="decimal"
+        autoComplete="off"
+        value={text}
+        disabled={disabled}
+        placeholder={placeholder}
+        onChange={(e) => onChange(e.target.value)}
+        onBlur={field.onBlur}
+        {...fieldAria(id, { invalid: Boolean(error), hint })}
+        className={inputClass(Boolean(error), `py-2 pl-3 pr-16 tabular-nums ${big ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`)}
+      />
+    </FieldShell>
   );
 }

@@ -20,7 +20,7 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import { useUnits, type Units } from '@/lib/units';
 import { useAddReading } from '../api/add-reading';
 import { NotSaved } from './not-saved';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 type NumberValue = number | '' | null;
 

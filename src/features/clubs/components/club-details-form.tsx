@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useUpdateClub } from '../api/update-club';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 
 /** Organisers rename the club and change its description. */
 export function ClubDetailsForm({ club, onDone }: { club: ClubDetail; onDone: () => void }) {

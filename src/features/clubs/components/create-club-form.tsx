@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useCreateClub } from '../api/create-club';
-import { TextAreaField } from './text-area-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 
 export function CreateClubForm({ onCreated }: { onCreated: (club: ClubDetail) => void }) {
   const create = useCreateClub();

@@ -17,7 +17,7 @@ import type { Units } from '@/lib/units';
 import { useCreateInstrument } from '../api/create-instrument';
 import { formNumber, type FormNumber } from './describe';
 import { kindIcons } from './instrument-card';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 interface AddValues {
   kind: InstrumentKind;

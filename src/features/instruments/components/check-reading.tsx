@@ -7,7 +7,7 @@ import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import type { Units } from '@/lib/units';
 import { correctionInWords, formNumber, type FormNumber } from './describe';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 interface CheckValues {
   sg: FormNumber;

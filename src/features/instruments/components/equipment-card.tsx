@@ -11,7 +11,7 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import type { Units } from '@/lib/units';
 import { useDeleteEquipment, useSaveEquipment } from '../api/save-equipment';
 import { formNumber, type FormNumber } from './describe';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 const M_PER_FT = 0.3048;
 

@@ -7,7 +7,7 @@ import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, type FormNumber } from './describe';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 interface PhValues {
   calibratedOn: string;

@@ -8,7 +8,7 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import type { Units } from '@/lib/units';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, type FormNumber } from './describe';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 interface SettingsValues {
   preset: string;

@@ -10,7 +10,7 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import type { Units } from '@/lib/units';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, signedDelta, type FormNumber } from './describe';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 interface CheckValues {
   iceReadingC: FormNumber;

@@ -11,7 +11,7 @@ import { zodValidate } from '@/lib/form';
 import { useUnits, type Units } from '@/lib/units';
 import { CheckResults, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-results';
 import { parseCheck, toCheckInput, toFormValues, type LateBoilFormValues, type LateBoilInitialValues } from './form-values';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
 
 export interface LateBoilChoice {
   /** The option the brewer picked, exactly as the check produced it. */

@@ -28,7 +28,8 @@ import { useUnits, type Units } from '@/lib/units';
 import { useCreateRecipe } from '../api/create-recipe';
 import { recipeQueryOptions } from '../api/get-recipe';
 import { useUpdateRecipe } from '../api/update-recipe';
-import { NumberField } from './number-field';
+import { NumberField } from '@/components/ui/number-field';
+import { TextAreaField } from '@/components/ui/text-area-field';
 import { emptyFermentable, emptyHop, emptyMashStep, newRecipeValues, toFormValues, type RecipeFormValues } from './recipe-form-values';
 
 /** 1 point per pound per US gallon in points·L/kg: from the exact gallon and pound. */
@@ -190,36 +191,6 @@ function Section({ title, children, description }: { title: string; children: Re
   );
 }
 
-function TextArea({ name, label, hint }: { name: string; label: string; hint?: string }) {
-  const [field, meta] = useField<string>(name);
-  const id = useId();
-  const invalid = Boolean(meta.touched && meta.error);
-  return (
-    <div>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
-        {label}
-      </label>
-      <textarea
-        id={id}
-        {...field}
-        rows={3}
-        aria-invalid={invalid || undefined}
-        aria-describedby={invalid ? `${id}-error` : hint ? `${id}-hint` : undefined}
-        className={`block w-full rounded-lg border bg-white px-3 py-2 text-base ${invalid ? 'border-alert-500' : 'border-cellar-300'}`}
-      />
-      {hint && !invalid && (
-        <p id={`${id}-hint`} className="mt-1 text-sm text-ink-faint">
-          {hint}
-        </p>
-      )}
-      {invalid && (
-        <p id={`${id}-error`} role="alert" className="mt-1 text-sm font-semibold text-alert-700">
-          {meta.error}
-        </p>
-      )}
-    </div>
-  );
-}
 
 function BasicsSection() {
   return (
@@ -228,7 +199,7 @@ function BasicsSection() {
         <TextField name="name" label="Recipe name" autoComplete="off" />
         <TextField name="style" label="Style" autoComplete="off" hint="Free text, e.g. Pale ale." />
         <div className="sm:col-span-2">
-          <TextArea name="notes" label="Notes" />
+          <TextAreaField name="notes" label="Notes" />
         </div>
       </div>
     </Section>

@@ -1,0 +1,51 @@
+import type { ReactNode } from 'react';
+
+/** Ids a field's input must carry so its label, hint and error are read with it. */
+export function fieldAria(id: string, { invalid, hint }: { invalid: boolean; hint?: ReactNode }) {
+  return {
+    id,
+    'aria-invalid': invalid || undefined,
+    'aria-describedby': invalid ? `${id}-error` : hint ? `${id}-hint` : undefined,
+  } as const;
+}
+
+export function inputClass(invalid: boolean, extra = '') {
+  return `block w-full rounded-lg border bg-white ${invalid ? 'border-alert-500' : 'border-cellar-300'} focus:border-cellar-500 disabled:bg-cellar-50 ${extra}`;
+}
+
+interface FieldShellProps {
+  id: string;
+  label: ReactNode;
+  hint?: ReactNode;
+  /** Shown, and announced, only when present. */
+  error?: string | null;
+  /** A unit shown inside the input's right edge. */
+  suffix?: ReactNode;
+  className?: string;
+  children: ReactNode;
+}
+
+/** Label above, the input (with an optional unit inside its right edge), then a hint or the error. */
+export function FieldShell({ id, label, hint, error, suffix, className = '', children }: FieldShellProps) {
+  return (
+    <div className={className}>
+      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
+        {label}
+      </label>
+      <div className="relative">
+        {children}
+        {suffix && <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm font-semibold text-ink-faint">{suffix}</span>}
+      </div>
+      {hint && !error && (
+        <p id={`${id}-hint`} className="mt-1 text-sm text-ink-faint">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} role="alert" className="mt-1 text-sm font-semibold text-alert-700">
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}
