@@ -17,6 +17,7 @@ import { instrumentsRouter } from './instruments/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { passwordResetRouter } from './password-reset/router';
 import { recipesRouter } from './recipes/router';
+import { reviewsRouter } from './reviews/router';
 
 const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
 
@@ -44,6 +45,7 @@ export function createApp(ctx: AppContext) {
   api.use('/instruments', instrumentsRouter(db));
   api.use('/equipment', equipmentRouter(db));
   api.use(fermentationRouter(ctx));
+  api.use(reviewsRouter(ctx));
   api.use('/brews', brewsRouter(ctx));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { can, canInClub, canShareWithClub, requireAccess, requireClubAccess, type Actor, type ResourceAction } from './permissions';
+import { can, canDeleteComment, canInClub, canSeeComment, canShareWithClub, requireAccess, requireClubAccess, type Actor, type ResourceAction } from './permissions';
 import { Forbidden, NotFound } from '../lib/errors';
 
 // A brew day owned by user 1 and shared with club 10.
@@ -91,5 +91,46 @@ describe('sharing with a club', () => {
   ])('%s may share into clubs 10 and 20: %s', (name, expected) => {
     const got = [10, 20].map((clubId) => (canShareWithClub(actors[name], clubId) ? 'Y' : '-')).join('');
     expect(got).toBe(expected);
+  });
+});
+
+describe('comments on a shared brew day', () => {
+  // The brew day (owner 1) is shared with clubs 10 and 30 (not 20). Mentor 4 of club 10 wrote
+  // one comment, mentor 8 of club 30 another, and the owner replied.
+  const sharedTwice = { ownerId: 1, sharedWithClubIds: [10, 30] };
+  const mentorOfSecondClub: Actor = { id: 8, siteRole: 'user', memberships: [{ clubId: 30, role: 'mentor' }] };
+  const byMentorOfClub = { authorId: 4, authorClubIds: [10] };
+  const byMentorOfSecondClub = { authorId: 8, authorClubIds: [30] };
+  const byOwner = { authorId: 1, authorClubIds: [10] };
+
+  it.each([
+    // Order: the club-10 mentor's comment, the club-30 mentor's comment, the owner's reply.
+    ['owner', 'YYY'],
+    ['otherBrewer', '---'],
+    ['clubMember', 'Y-Y'],
+    ['mentorOfClub', 'Y-Y'],
+    ['mentorOfOtherClub', '---'],
+    ['organiser', 'Y-Y'],
+    ['siteAdmin', '---'],
+    ['anonymous', '---'],
+  ])('%s sees: %s', (name, expected) => {
+    const got = [byMentorOfClub, byMentorOfSecondClub, byOwner].map((c) => (canSeeComment(actors[name], sharedTwice, c) ? 'Y' : '-')).join('');
+    expect(got).toBe(expected);
+  });
+
+  it('shows the second club’s mentor their own club’s review and the owner’s reply only', () => {
+    const got = [byMentorOfClub, byMentorOfSecondClub, byOwner].map((c) => (canSeeComment(mentorOfSecondClub, sharedTwice, c) ? 'Y' : '-')).join('');
+    expect(got).toBe('-YY');
+  });
+
+  it('hides every comment once the brew day is no longer shared with the reader’s club', () => {
+    expect(canSeeComment(actors.mentorOfClub, privateResource, byMentorOfClub)).toBe(false);
+    expect(canSeeComment(actors.owner, privateResource, byMentorOfClub)).toBe(true);
+  });
+
+  it('lets only the author delete a comment', () => {
+    const got = Object.entries(actors).filter(([, a]) => canDeleteComment(a, byMentorOfClub)).map(([name]) => name);
+    expect(got).toEqual(['mentorOfClub']);
+    expect(canDeleteComment(actors.owner, { authorId: null })).toBe(false);
   });
 });

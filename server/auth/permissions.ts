@@ -50,6 +50,22 @@ export function requireAccess(actor: Actor | null, action: ResourceAction, resou
   if (!can(actor, action, resource)) throw new Forbidden(`You may not ${action} this ${what.toLowerCase()}.`);
 }
 
+/** A comment's author, and nobody else, may delete it: the brewer cannot remove a mentor's words, nor a mentor the brewer's. */
+export function canDeleteComment(actor: Actor | null, comment: { authorId: number | null }): boolean {
+  return actor !== null && comment.authorId !== null && comment.authorId === actor.id;
+}
+
+/**
+ * Who sees a comment on a brew day they may read: its brewer sees every comment, everyone sees
+ * their own and the brewer's replies, and a mentor's comment is seen in the clubs the author and
+ * the reader share with the brew day, so a member of one club never learns of another club's review.
+ */
+export function canSeeComment(actor: Actor | null, resource: OwnedResource, comment: { authorId: number | null; authorClubIds: readonly number[] }): boolean {
+  if (!actor || !can(actor, 'read', resource)) return false;
+  if (actor.id === resource.ownerId || comment.authorId === actor.id || comment.authorId === resource.ownerId) return true;
+  return actor.memberships.some((m) => resource.sharedWithClubIds.includes(m.clubId) && comment.authorClubIds.includes(m.clubId));
+}
+
 export function clubRole(actor: Actor | null, clubId: number): ClubRole | null {
   return actor?.memberships.find((m) => m.clubId === clubId)?.role ?? null;
 }

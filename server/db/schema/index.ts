@@ -6,3 +6,4 @@ export * from './recipes';
 export * from './brews';
 export * from './instruments';
 export * from './fermentation';
+export * from './comments';

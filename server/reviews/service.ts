@@ -1,0 +1,296 @@
+/**
+ * A club mentor's review of a shared brew day: the queue of brew days no mentor of the club has
+ * commented on yet, the review (brew day, fermentation, deviations, comments) and the comments
+ * themselves. Every read goes through loadBrewForActor and every rule through
+ * server/auth/permissions.ts. A comment is written in a transaction that re-reads the brew day's
+ * shares with a lock, so a comment sent a second after the brewer stopped sharing is refused.
+ */
+import { and, asc, desc, eq, inArray, ne } from 'drizzle-orm';
+import { findFermentationDeviations } from '@shared/brew-deviations';
+import { readingKindLabels, type BrewDetail } from '@shared/schemas/brews';
+import type { BrewComment, BrewReview, CommentBody, CommentCreated, CommentTarget, ReviewDeviation, ReviewQueueItem } from '@shared/schemas/comments';
+import { can, canDeleteComment, canSeeComment, type Actor, type OwnedResource } from '../auth/permissions';
+import { getBrew, loadBrewForActor, type StoredBrew } from '../brews/service';
+import type { AppContext } from '../context';
+import type { Db, DbOrTx } from '../db/client';
+import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, users, type CommentRow } from '../db/schema';
+import { assembleLog } from '../fermentation/service';
+import { Forbidden, NotFound } from '../lib/errors';
+import { sendAfterCommit } from '../mail/mailer';
+import { mentorCommentNotice } from '../mail/templates';
+
+/** The one answer for a brew day the commenter cannot see (any more): the same whether it was unshared, never shared or never existed. */
+export const NO_LONGER_SHARED = 'This brew day is no longer shared with your club.';
+const MENTORS_ONLY = 'Only the club’s mentors comment on a shared brew day; members read along.';
+/** A mentor's queue shows at most this many brew days, newest first. */
+export const QUEUE_LIMIT = 100;
+
+const resourceOf = (stored: StoredBrew): OwnedResource => ({ ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds });
+
+/** Loads the brew day for commenting, with words a mentor understands when it is refused. */
+async function loadForComment(db: DbOrTx, actor: Actor, brewId: number): Promise<StoredBrew> {
+  try {
+    return await loadBrewForActor(db, actor, brewId, 'comment');
+  } catch (error) {
+    if (error instanceof NotFound) throw new NotFound(NO_LONGER_SHARED);
+    if (error instanceof Forbidden) throw new Forbidden(MENTORS_ONLY);
+    throw error;
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// Comments as a reader sees them
+
+interface TargetIndex {
+  reading: Map<number, { label: string; at: string }>;
+  decision: Map<number, { label: string; at: string }>;
+  fermentation_reading: Map<number, { label: string; at: string }>;
+}
+
+async function targetIndex(db: DbOrTx, brewId: number): Promise<TargetIndex> {
+  const [readings, decisions, fermentation] = await Promise.all([
+    db.select({ id: brewReadings.id, kind: brewReadings.kind, at: brewReadings.takenAt }).from(brewReadings).where(eq(brewReadings.brewId, brewId)),
+    db.select({ id: brewDecisions.id, at: brewDecisions.decidedAt }).from(brewDecisions).where(eq(brewDecisions.brewId, brewId)),
+    db
+      .select({ id: fermentationReadings.id, kind: fermentationReadings.kind, at: fermentationReadings.takenAt })
+      .from(fermentationReadings)
+      .where(eq(fermentationReadings.brewId, brewId)),
+  ]);
+  return {
+    reading: new Map(readings.map((r) => [r.id, { label: `${readingKindLabels[r.kind]} reading`, at: r.at.toISOString() }])),
+    decision: new Map(decisions.map((d) => [d.id, { label: 'Late-boil decision', at: d.at.toISOString() }])),
+    fermentation_reading: new Map(fermentation.map((f) => [f.id, { label: `Fermentation ${f.kind} reading`, at: f.at.toISOString() }])),
+  };
+}
+
+const fallbackLabel = { reading: 'A brew-day reading', decision: 'A late-boil decision', fermentation_reading: 'A fermentation reading' } as const;
+
+function targetOf(row: CommentRow, index: TargetIndex): CommentTarget {
+  if (row.targetKind === 'brew' || row.targetId === null) return { kind: 'brew', id: null, label: 'The brew day', at: null, missing: false };
+  const found = index[row.targetKind].get(row.targetId);
+  if (!found) return { kind: row.targetKind, id: row.targetId, label: `${fallbackLabel[row.targetKind]}, since deleted`, at: null, missing: true };
+  return { kind: row.targetKind, id: row.targetId, label: found.label, at: found.at, missing: false };
+}
+
+/** The comments on a brew day the actor may see, oldest first. */
+export async function commentsFor(db: DbOrTx, actor: Actor, stored: StoredBrew, only?: { id: number }): Promise<BrewComment[]> {
+  const brewId = stored.row.id;
+  const rows = await db
+    .select({ row: comments, authorName: users.displayName })
+    .from(comments)
+    .leftJoin(users, eq(users.id, comments.authorId))
+    .where(only ? and(eq(comments.brewId, brewId), eq(comments.id, only.id)) : eq(comments.brewId, brewId))
+    .orderBy(asc(comments.createdAt), asc(comments.id));
+  if (rows.length === 0) return [];
+  const authorIds = [...new Set(rows.map((r) => r.row.authorId).filter((id): id is number => id !== null))];
+  const shared = stored.sharedWithClubIds;
+  const memberships =
+    authorIds.length > 0 && shared.length > 0
+      ? await db
+          .select({ userId: clubMemberships.userId, clubId: clubMemberships.clubId })
+          .from(clubMemberships)
+          .where(and(inArray(clubMemberships.userId, authorIds), inArray(clubMemberships.clubId, shared)))
+      : [];
+  const resource = resourceOf(stored);
+  const visible = rows.filter(({ row }) =>
+    canSeeComment(actor, resource, { authorId: row.authorId, authorClubIds: memberships.filter((m) => m.userId === row.authorId).map((m) => m.clubId) }),
+  );
+  if (visible.length === 0) return [];
+  const index = await targetIndex(db, brewId);
+  return visible.map(({ row, authorName }) => ({
+    id: row.id,
+    brewId: row.brewId,
+    author: {
+      id: row.authorId,
+      name: authorName ?? 'A former member',
+      role: row.authorId === stored.row.ownerId ? 'brewer' : 'mentor',
+    },
+    target: targetOf(row, index),
+    body: row.body,
+    createdAt: row.createdAt.toISOString(),
+    editedAt: row.editedAt ? row.editedAt.toISOString() : null,
+    canDelete: canDeleteComment(actor, row),
+  }));
+}
+
+export async function listComments(db: DbOrTx, actor: Actor, brewId: number): Promise<BrewComment[]> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  return commentsFor(db, actor, stored);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Writing and deleting
+
+async function requireTargetOfBrew(tx: DbOrTx, brewId: number, target: CommentBody['target']): Promise<void> {
+  if (!target || target.kind === 'brew') return;
+  const table = { reading: brewReadings, decision: brewDecisions, fermentation_reading: fermentationReadings }[target.kind];
+  const [row] = await tx
+    .select({ id: table.id })
+    .from(table)
+    .where(and(eq(table.id, target.id), eq(table.brewId, brewId)));
+  if (!row) {
+    const what = { reading: 'That reading', decision: 'That decision', fermentation_reading: 'That fermentation reading' }[target.kind];
+    throw new NotFound(`${what} is not part of this brew day (it may have been deleted).`);
+  }
+}
+
+/**
+ * Adds a comment. The brew day's shares are read again inside the transaction with a locking read,
+ * so a comment and the brewer's "stop sharing" are serialised: if the share went first, the
+ * comment is refused (404, nothing saved); if the comment went first, it was made while shared.
+ * The brewer is mailed after the commit when someone else wrote it.
+ */
+export async function addComment(ctx: AppContext, actor: Actor, brewId: number, input: CommentBody, now = new Date()): Promise<CommentCreated> {
+  const { db } = ctx;
+  await loadForComment(db, actor, brewId);
+  const commentId = await db.transaction(async (tx) => {
+    const [brew] = await tx.select({ ownerId: brews.ownerId }).from(brews).where(eq(brews.id, brewId));
+    if (!brew) throw new NotFound(NO_LONGER_SHARED);
+    const shares = await tx.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, brewId)).for('update');
+    const memberships = await tx.select({ clubId: clubMemberships.clubId, role: clubMemberships.role }).from(clubMemberships).where(eq(clubMemberships.userId, actor.id));
+    const fresh: Actor = { id: actor.id, siteRole: actor.siteRole, memberships };
+    const resource = { ownerId: brew.ownerId, sharedWithClubIds: shares.map((s) => s.clubId) };
+    if (!can(fresh, 'read', resource)) throw new NotFound(NO_LONGER_SHARED);
+    if (!can(fresh, 'comment', resource)) throw new Forbidden(MENTORS_ONLY);
+    await requireTargetOfBrew(tx, brewId, input.target);
+    const target = input.target && input.target.kind !== 'brew' ? input.target : null;
+    const [{ id }] = await tx
+      .insert(comments)
+      .values({ brewId, authorId: actor.id, targetKind: target?.kind ?? 'brew', targetId: target?.id ?? null, body: input.body, createdAt: now })
+      .$returningId();
+    return id;
+  });
+
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  const [comment] = await commentsFor(db, actor, stored, { id: commentId });
+  if (stored.row.ownerId === actor.id) return { comment, noticeSent: null };
+  const [owner] = await db.select({ email: users.email, name: users.displayName }).from(users).where(eq(users.id, stored.row.ownerId));
+  const [author] = await db.select({ name: users.displayName }).from(users).where(eq(users.id, actor.id));
+  const mail = mentorCommentNotice({
+    brewerName: owner.name,
+    mentorName: author?.name ?? 'A mentor',
+    brewName: stored.row.name,
+    commentExcerpt: input.body,
+    url: `${ctx.env.APP_URL}/brews/${brewId}/log#comments`,
+  });
+  const noticeSent = await sendAfterCommit(ctx.mailer, { to: owner.email, ...mail });
+  return { comment, noticeSent };
+}
+
+export async function deleteComment(db: Db, actor: Actor, brewId: number, commentId: number): Promise<void> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  const [comment] = await commentsFor(db, actor, stored, { id: commentId });
+  if (!comment) throw new NotFound('That comment was not found.');
+  if (!comment.canDelete) throw new Forbidden('Only its author can delete a comment.');
+  await db.delete(comments).where(and(eq(comments.id, commentId), eq(comments.brewId, brewId)));
+}
+
+// ---------------------------------------------------------------------------------------------
+// The review and the queue
+
+/** The brew day (as its log shows it), its fermentation and every deviation of both. */
+async function reviewParts(db: DbOrTx, actor: Actor, stored: StoredBrew) {
+  const [brew, log] = await Promise.all([getBrew(db, actor, stored.row.id), assembleLog(db, actor, stored)]);
+  const deviations: ReviewDeviation[] = [
+    ...brew.deviations,
+    ...findFermentationDeviations({
+      range: log.temperature.target,
+      readings: log.readings,
+      excursions: log.temperature.excursions,
+      packaging: log.packaging,
+      pitchedAt: brew.pitchedAt,
+      brewDay: brew.deviations,
+    }),
+  ];
+  return { brew, log, deviations };
+}
+
+export async function getReview(db: DbOrTx, actor: Actor, brewId: number): Promise<BrewReview> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  const [{ brew, log, deviations }, list] = await Promise.all([reviewParts(db, actor, stored), commentsFor(db, actor, stored)]);
+  return {
+    brew,
+    fermentation: { readings: log.readings, verdict: log.verdict, temperature: log.temperature, packaging: log.packaging },
+    deviations,
+    comments: list,
+    permissions: { comment: brew.permissions.comment },
+  };
+}
+
+/**
+ * The brew days shared with clubs where the actor is a mentor that no mentor of that club has
+ * commented on yet, newest share first. Anyone who mentors no club gets an empty list (not a 403):
+ * the Reviews page is in everyone's navigation and says what it lists.
+ */
+export async function listQueue(db: DbOrTx, actor: Actor): Promise<ReviewQueueItem[]> {
+  const mentorClubIds = actor.memberships.filter((m) => m.role === 'mentor').map((m) => m.clubId);
+  if (mentorClubIds.length === 0) return [];
+  const shares = await db
+    .select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId, clubName: clubs.name, sharedAt: brewClubShares.sharedAt })
+    .from(brewClubShares)
+    .innerJoin(brews, eq(brews.id, brewClubShares.brewId))
+    .innerJoin(clubs, eq(clubs.id, brewClubShares.clubId))
+    .where(and(inArray(brewClubShares.clubId, mentorClubIds), ne(brews.ownerId, actor.id)))
+    .orderBy(desc(brewClubShares.sharedAt), desc(brews.brewedOn), desc(brews.id));
+  if (shares.length === 0) return [];
+  // A comment counts for a club when its author is a mentor of that club now (not the brewer).
+  const reviewed = await db
+    .selectDistinct({ brewId: comments.brewId, clubId: clubMemberships.clubId })
+    .from(comments)
+    .innerJoin(brews, eq(brews.id, comments.brewId))
+    .innerJoin(clubMemberships, and(eq(clubMemberships.userId, comments.authorId), eq(clubMemberships.role, 'mentor')))
+    .where(
+      and(
+        inArray(
+          comments.brewId,
+          shares.map((s) => s.brewId),
+        ),
+        inArray(clubMemberships.clubId, mentorClubIds),
+        ne(comments.authorId, brews.ownerId),
+      ),
+    );
+  const done = new Set(reviewed.map((r) => `${r.brewId}:${r.clubId}`));
+  const waiting = new Map<number, { sharedAt: Date; clubs: { id: number; name: string }[] }>();
+  for (const s of shares) {
+    if (done.has(`${s.brewId}:${s.clubId}`)) continue;
+    const entry = waiting.get(s.brewId) ?? { sharedAt: s.sharedAt, clubs: [] };
+    if (s.sharedAt > entry.sharedAt) entry.sharedAt = s.sharedAt;
+    entry.clubs.push({ id: s.clubId, name: s.clubName });
+    waiting.set(s.brewId, entry);
+  }
+  const ids = [...waiting.keys()].slice(0, QUEUE_LIMIT);
+  const items = await Promise.all(
+    ids.map(async (brewId): Promise<ReviewQueueItem | null> => {
+      let stored: StoredBrew;
+      try {
+        stored = await loadBrewForActor(db, actor, brewId, 'read');
+      } catch (error) {
+        // Unshared or deleted between the two queries: not waiting any more.
+        if (error instanceof NotFound) return null;
+        throw error;
+      }
+      const { brew, deviations } = await reviewParts(db, actor, stored);
+      const entry = waiting.get(brewId)!;
+      return toQueueItem(brew, entry, deviations.length);
+    }),
+  );
+  return items
+    .filter((i): i is ReviewQueueItem => i !== null)
+    .sort((a, b) => b.sharedAt.localeCompare(a.sharedAt) || b.brewedOn.localeCompare(a.brewedOn) || b.brewId - a.brewId);
+}
+
+function toQueueItem(brew: BrewDetail, entry: { sharedAt: Date; clubs: { id: number; name: string }[] }, deviationCount: number): ReviewQueueItem {
+  return {
+    brewId: brew.id,
+    brewName: brew.name,
+    brewerName: brew.ownerName,
+    recipeName: brew.recipeName,
+    brewedOn: brew.brewedOn,
+    status: brew.status,
+    sharedAt: entry.sharedAt.toISOString(),
+    clubs: entry.clubs.sort((a, b) => a.name.localeCompare(b.name)),
+    og: brew.og,
+    targetOg: brew.targetOg,
+    deviationCount,
+  };
+}
