@@ -25,7 +25,8 @@ import {
 } from '@shared/schemas/brews';
 import type { EquipmentProfile, InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { RecipeTargets } from '@shared/schemas/recipes';
-import { can, canShareWithClub, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
+import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
+import { checkShareTargets, diffShares } from '../lib/sharing';
 import type { DbOrTx } from '../db/client';
 import {
   brewClubShares,
@@ -364,20 +365,11 @@ export async function touchStage(tx: DbOrTx, brewId: number, stage: BrewStage, a
  */
 export async function setBrewSharing(db: DbOrTx, actor: Actor, id: number, clubIds: number[]): Promise<BrewSharing> {
   await loadBrewForActor(db, actor, id, 'share');
-  const unique = [...new Set(clubIds)].sort((a, b) => a - b);
-  const fields: Record<string, string> = {};
-  clubIds.forEach((clubId, i) => {
-    if (!canShareWithClub(actor, clubId)) fields[`clubIds.${i}`] = 'You can only share with a club you belong to.';
-  });
-  if (Object.keys(fields).length > 0) throw new BadRequest('You can only share with clubs you belong to.', fields);
+  const unique = checkShareTargets(actor, clubIds);
   await db.transaction(async (tx) => {
     const existing = await tx.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, id));
-    const keep = new Set(unique);
-    const gone = existing.map((e) => e.clubId).filter((c) => !keep.has(c));
+    const { gone, added } = diffShares(existing.map((e) => e.clubId), unique);
     if (gone.length > 0) await tx.delete(brewClubShares).where(and(eq(brewClubShares.brewId, id), inArray(brewClubShares.clubId, gone)));
-    const had = new Set(existing.map((e) => e.clubId));
-    const added = unique.filter((c) => !had.has(c));
-    // Clubs shared earlier keep their original shared_at.
     if (added.length > 0) await tx.insert(brewClubShares).values(added.map((clubId) => ({ brewId: id, clubId })));
   });
   return { brewId: id, clubIds: unique };

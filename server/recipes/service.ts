@@ -18,10 +18,11 @@ import {
 } from '@shared/schemas/recipes';
 import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
 import type { z } from 'zod';
-import { can, canShareWithClub, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
+import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
+import { checkShareTargets, diffShares } from '../lib/sharing';
 import type { DbOrTx, Tx } from '../db/client';
 import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, users, type RecipeRow } from '../db/schema';
-import { BadRequest, Conflict, NotFound } from '../lib/errors';
+import { Conflict, NotFound } from '../lib/errors';
 
 /** A recipe as stored, with its child rows and the clubs it is shared with. */
 export interface StoredRecipe {
@@ -308,20 +309,11 @@ export async function cloneRecipe(db: DbOrTx, actor: Actor, id: number): Promise
  */
 export async function setRecipeSharing(db: DbOrTx, actor: Actor, id: number, clubIds: number[]): Promise<RecipeSharing> {
   await loadRecipeForActor(db, actor, id, 'share');
-  const unique = [...new Set(clubIds)].sort((a, b) => a - b);
-  const fields: Record<string, string> = {};
-  clubIds.forEach((clubId, i) => {
-    if (!canShareWithClub(actor, clubId)) fields[`clubIds.${i}`] = 'You can only share with a club you belong to.';
-  });
-  if (Object.keys(fields).length > 0) throw new BadRequest('You can only share with clubs you belong to.', fields);
+  const unique = checkShareTargets(actor, clubIds);
   await db.transaction(async (tx) => {
     const existing = await tx.select({ clubId: recipeClubShares.clubId }).from(recipeClubShares).where(eq(recipeClubShares.recipeId, id));
-    const keep = new Set(unique);
-    const gone = existing.map((e) => e.clubId).filter((c) => !keep.has(c));
+    const { gone, added } = diffShares(existing.map((e) => e.clubId), unique);
     if (gone.length > 0) await tx.delete(recipeClubShares).where(and(eq(recipeClubShares.recipeId, id), inArray(recipeClubShares.clubId, gone)));
-    const had = new Set(existing.map((e) => e.clubId));
-    const added = unique.filter((c) => !had.has(c));
-    // Clubs shared earlier keep their original shared_at.
     if (added.length > 0) await tx.insert(recipeClubShares).values(added.map((clubId) => ({ recipeId: id, clubId })));
   });
   return { recipeId: id, clubIds: unique };

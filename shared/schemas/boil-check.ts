@@ -7,6 +7,7 @@
  * same message reaches brewers of either preference.
  */
 import { z } from 'zod';
+import { showF, showGal } from './fields';
 import { BrewMathError, BRIX_MAX, BRIX_MIN, EXTRACT_KINDS, SG_MAX, SG_MIN, WCF_MAX, WCF_MIN, type ExtractKind } from '../brewmath';
 import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../brewmath/extract';
 import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckInput } from '../boil-check';
@@ -19,8 +20,8 @@ export const BOIL_CHECK_LIMITS = {
   coolingShrinkage: 0.1,
 } as const;
 
-const gal = (litres: number) => `${Number((litres / 3.785411784).toFixed(2))} gal`;
-const f = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
+const gal = showGal;
+const f = showF;
 const sg3 = (sg: number) => sg.toFixed(3);
 
 /** A number with a brewer's message for missing, not-a-number and out-of-range input. */

@@ -4,6 +4,7 @@
  * metric and US units, because the same message reaches brewers of either preference.
  */
 import { z } from 'zod';
+import { num, ranged, showF, showGal } from './fields';
 import { boilCheckInputSchema } from './boil-check';
 import type { InstrumentKind, InstrumentSnapshot, EquipmentProfile } from './instruments';
 import type { RecipeTargets } from './recipes';
@@ -80,20 +81,10 @@ export type GravityMethod = (typeof gravityMethods)[number];
 // ---------------------------------------------------------------------------------------------
 // Field schemas with a brewer's messages
 
-const f = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
-const gal = (l: number) => `${Number((l / 3.785411784).toFixed(2))} gal`;
+const f = showF;
+const gal = showGal;
 
-function num(what: string, label: string) {
-  return z.number({
-    error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${what}.` : `${label} must be a number.`),
-  });
-}
 
-function ranged(what: string, label: string, min: number, max: number, message: string) {
-  return num(what, label)
-    .refine((v) => v >= min, { error: message, abort: true })
-    .refine((v) => v <= max, { error: message, abort: true });
-}
 
 export const READING_LIMITS = {
   mashTempC: { min: 0, max: 100 },

@@ -4,6 +4,7 @@
  * in metric and US units, because the same message reaches brewers of either preference.
  */
 import { z } from 'zod';
+import { num, ranged, showF, showGal } from './fields';
 import type { FgState } from '../brewmath';
 import type { InstrumentSnapshot } from './instruments';
 
@@ -66,21 +67,10 @@ export const FUTURE_SLACK_MS = 5 * 60_000;
 // ---------------------------------------------------------------------------------------------
 // Field schemas with a brewer's messages
 
-const f = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
-const gal = (l: number) => `${Number((l / 3.785411784).toFixed(2))} gal`;
+const f = showF;
+const gal = showGal;
 
-function num(what: string, label: string) {
-  return z.number({
-    error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${what}.` : `${label} must be a number.`),
-  });
-}
 
-function ranged(what: string, label: string, min: number, max: number, message: string) {
-  return num(what, label)
-    .refine((v) => Number.isFinite(v), { error: `${label} must be a number.`, abort: true })
-    .refine((v) => v >= min, { error: message, abort: true })
-    .refine((v) => v <= max, { error: message, abort: true });
-}
 
 const L = FERMENTATION_LIMITS;
 

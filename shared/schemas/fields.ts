@@ -1,0 +1,23 @@
+/** Building blocks for schemas whose messages a brewer reads (the form and the API share them). */
+import { z } from 'zod';
+import { cToF, LITRES_PER_US_GALLON } from '../brewmath';
+
+/** A °C limit as US brewers read it, for messages that name both units. */
+export const showF = (tempC: number) => `${Number(cToF(tempC).toFixed(1))} °F`;
+/** A litre limit as US brewers read it. */
+export const showGal = (litres: number) => `${Number((litres / LITRES_PER_US_GALLON).toFixed(2))} gal`;
+
+/** A number, with "Enter …" when it is missing and "… must be a number" when it is not one. */
+export function num(what: string, label: string) {
+  return z.number({
+    error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${what}.` : `${label} must be a number.`),
+  });
+}
+
+/** A finite number within [min, max], with one message for either side. */
+export function ranged(what: string, label: string, min: number, max: number, message: string) {
+  return num(what, label)
+    .refine((v) => Number.isFinite(v), { error: `${label} must be a number.`, abort: true })
+    .refine((v) => v >= min, { error: message, abort: true })
+    .refine((v) => v <= max, { error: message, abort: true });
+}
