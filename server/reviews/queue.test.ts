@@ -1,0 +1,144 @@
+import request from 'supertest';
+import { and, eq } from 'drizzle-orm';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { recipeInputSchema } from '@shared/schemas/recipes';
+import { loadSessionUser } from '../auth/session';
+import { addMember, makeUser } from '../db/factories';
+import { brewClubShares } from '../db/schema';
+import { createRecipe } from '../recipes/service';
+import { createHarness, type TestHarness } from '../../tests/support/api';
+import { testRecipe } from '../brews/test-scene';
+import { makeFermentationScene } from '../fermentation/test-scene';
+import { makeReviewScene, sharedBrewWithDecision } from './test-scene';
+
+let h: TestHarness;
+beforeAll(async () => {
+  h = await createHarness();
+});
+
+const HOUR_MS = 3_600_000;
+
+/** Moves a share's time, so the queue's order does not hang on the clock's second. */
+async function sharedHoursAgo(brewId: number, clubId: number, hours: number) {
+  await h.ctx.db
+    .update(brewClubShares)
+    .set({ sharedAt: new Date(Math.floor((Date.now() - hours * HOUR_MS) / 1000) * 1000) })
+    .where(and(eq(brewClubShares.brewId, brewId), eq(brewClubShares.clubId, clubId)));
+}
+
+describe('GET /api/reviews/queue', () => {
+  it('lists the club’s shared brew days that no mentor of the club has commented on yet, newest share first', async () => {
+    const s = await makeReviewScene(h);
+    const secondMentorUser = await makeUser(h.ctx.db, { displayName: 'Second Mentor' });
+    await addMember(h.ctx.db, s.club.id, secondMentorUser.id, 'mentor');
+    const secondMentor = await h.signIn(secondMentorUser.email);
+
+    const oldest = await sharedBrewWithDecision(s);
+    const newest = await sharedBrewWithDecision(s);
+    const reviewed = await sharedBrewWithDecision(s);
+    const repliedByBrewer = await sharedBrewWithDecision(s);
+    const unshared = await sharedBrewWithDecision(s, { share: false });
+    await sharedHoursAgo(oldest.brewId, s.club.id, 3);
+    await sharedHoursAgo(newest.brewId, s.club.id, 1);
+    await sharedHoursAgo(reviewed.brewId, s.club.id, 2);
+    await sharedHoursAgo(repliedByBrewer.brewId, s.club.id, 2.5);
+    // A comment by the other mentor of the club takes a brew day off both mentors' queues;
+    // the brewer's own words do not count as a review.
+    await secondMentor.post(`/api/brews/${reviewed.brewId}/comments`).send({ body: 'Reviewed.' }).expect(201);
+    await s.owner.agent.post(`/api/brews/${repliedByBrewer.brewId}/comments`).send({ body: 'Any thoughts?' }).expect(201);
+    // The mentor's own brew day, shared with the same club, is not theirs to review.
+    const mentorActor = (await loadSessionUser(h.ctx.db, s.mentor.user.id))!;
+    const mentorRecipe = await createRecipe(h.ctx.db, mentorActor, recipeInputSchema.parse(testRecipe));
+    const own = await s.mentor.agent.post('/api/brews').send({ recipeId: mentorRecipe }).expect(201);
+    await s.mentor.agent.put(`/api/brews/${own.body.id}/sharing`).send({ clubIds: [s.club.id] }).expect(200);
+
+    const expected = [newest.brewId, repliedByBrewer.brewId, oldest.brewId];
+    for (const mentor of [s.mentor.agent, secondMentor]) {
+      const queue = await mentor.get('/api/reviews/queue').expect(200);
+      const ids = queue.body.map((q: { brewId: number }) => q.brewId);
+      expect(ids.filter((id: number) => [...expected, reviewed.brewId, unshared.brewId, own.body.id].includes(id))).toEqual(
+        // The second mentor reviews the first mentor's brew day, shared just now.
+        mentor === secondMentor ? [own.body.id, ...expected] : expected,
+      );
+    }
+
+    const queue = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body;
+    const item = queue.find((q: { brewId: number }) => q.brewId === newest.brewId);
+    expect(item).toMatchObject({
+      brewName: 'Scene Pale',
+      brewerName: 'Test Brewer',
+      recipeName: 'Scene Pale',
+      status: 'brewing',
+      clubs: [{ id: s.club.id, name: 'Scene club' }],
+      og: null,
+      targetOg: 1.05,
+    });
+    // The same count as the review page: the decision left 1.0470 against 1.050 (worked example in
+    // server/brews/decisions.test.ts: 1059.84 points·L over 22.56 L = 46.98 points, 3 short) and
+    // the late-boil reading was taken with the common-practice hydrometer, not one of the brewer's own.
+    const review = (await s.mentor.agent.get(`/api/brews/${newest.brewId}/review`).expect(200)).body;
+    expect(review.deviations.map((d: { code: string }) => d.code)).toEqual(['instrument-uncalibrated', 'accepted-off-target']);
+    expect(review.deviations[1].actual).toBeCloseTo(1 + 1059.84 / 22.56 / 1000, 9);
+    expect(item.deviationCount).toBe(2);
+
+    // Commenting takes it off the queue.
+    await s.mentor.agent.post(`/api/brews/${newest.brewId}/comments`).send({ body: 'On target apart from the late boil.' }).expect(201);
+    const after = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.map((q: { brewId: number }) => q.brewId);
+    expect(after).not.toContain(newest.brewId);
+    expect(after).toContain(oldest.brewId);
+  });
+
+  it('is empty for people who mentor no club it is shared with; anonymous visitors get 401', async () => {
+    const s = await makeReviewScene(h);
+    await sharedBrewWithDecision(s);
+    for (const agent of [s.member.agent, s.otherMentor.agent, s.other.agent, s.owner.agent]) {
+      expect((await agent.get('/api/reviews/queue').expect(200)).body).toEqual([]);
+    }
+    await request(h.app).get('/api/reviews/queue').expect(401);
+  });
+});
+
+describe('GET /api/brews/:brewId/review', () => {
+  it('adds fermentation to the brew day’s deviations: a warm spell and packaging before the gravity was stable', async () => {
+    const s = await makeFermentationScene(h, { shared: true });
+    const add = (body: Record<string, unknown>) => s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send(body).expect(201);
+    // The recipe ferments at 18–20 °C (server/brews/test-scene.ts): two readings above it make one spell.
+    await add({ method: 'thermometer', tempC: 19.5, takenAt: s.day(1) });
+    await add({ method: 'thermometer', tempC: 21.5, takenAt: s.day(2) });
+    await add({ method: 'thermometer', tempC: 22.0, takenAt: s.day(2.5) });
+    await add({ method: 'thermometer', tempC: 19.0, takenAt: s.day(3) });
+    await add({ method: 'hydrometer', sg: 1.014, sampleTempC: 20, takenAt: s.day(12) });
+    await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/packaging`)
+      .send({ container: 'keg', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'none', override: true, overrideReason: 'Moving house tomorrow.' })
+      .expect(201);
+
+    const review = (await s.mentor.agent.get(`/api/brews/${s.brewId}/review`).expect(200)).body;
+    const fermentation = review.deviations.filter((d: { stage: string }) => d.stage === 'fermentation');
+    expect(fermentation.map((d: { code: string }) => d.code)).toEqual(['ferment-temp-high', 'packaged-before-stable']);
+    expect(fermentation[0]).toMatchObject({ expected: 20, actual: 22, span: { count: 2, from: s.day(2), to: s.day(2.5) } });
+    expect(fermentation[0].fermentationReadingId).toBe(review.fermentation.readings.find((r: { corrected: number }) => r.corrected === 22).id);
+    expect(fermentation[1].message).toMatch(/^Packaged day \d+\.\d while the final gravity was too early to tell.* Reason given: Moving house tomorrow\.$/);
+    // The brew day's own deviations come first, exactly as the brewer's log shows them.
+    expect(review.deviations.slice(0, review.brew.deviations.length)).toEqual(review.brew.deviations);
+    expect(review.fermentation.readings).toHaveLength(5);
+    expect(review.fermentation.packaging).toMatchObject({ override: true, overrideReason: 'Moving house tomorrow.' });
+    expect(review.brew.log.map((n: { body: string }) => n.body).join('\n')).toMatch(/Packaged before the final gravity was proven stable/);
+
+    // A mentor may comment on one fermentation reading.
+    const onReading = await s.mentor.agent
+      .post(`/api/brews/${s.brewId}/comments`)
+      .send({ body: 'What happened on day 2?', target: { kind: 'fermentation_reading', id: fermentation[0].fermentationReadingId } });
+    expect(onReading.status).toBe(201);
+    expect(onReading.body.comment.target).toMatchObject({ kind: 'fermentation_reading', label: 'Fermentation temperature reading', at: s.day(2.5), missing: false });
+  });
+
+  it('is a 404 for people outside the club and 401 for anonymous visitors', async () => {
+    const s = await makeReviewScene(h);
+    const { brewId } = await sharedBrewWithDecision(s);
+    await s.member.agent.get(`/api/brews/${brewId}/review`).expect(200);
+    await s.otherMentor.agent.get(`/api/brews/${brewId}/review`).expect(404);
+    await s.other.agent.get(`/api/brews/${brewId}/review`).expect(404);
+    await request(h.app).get(`/api/brews/${brewId}/review`).expect(401);
+  });
+});
