@@ -3,7 +3,7 @@
  * after a reading that was still moving. They are rows in fermentation_reminders, not timers in
  * memory, so with several API instances each is sent once: a worker claims due rows with a single
  * UPDATE … LIMIT (row locks make two claims of one row impossible), sends, and stamps sent_at
- * where it still holds the claim. docs/decisions/0007-fermentation-reminders.md explains why.
+ * where it still holds the claim. docs/decisions/0009-fermentation-verdict-reminders-and-csv.md explains why.
  */
 import { randomUUID } from 'node:crypto';
 import { hostname } from 'node:os';
