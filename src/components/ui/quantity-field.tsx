@@ -21,9 +21,10 @@ interface QuantityFieldProps {
 function shownText(kind: QuantityKind, units: Units, si: unknown): string {
   if (typeof si !== 'number' || !Number.isFinite(si)) return '';
   try {
-    // Trim float noise (0.1 + 0.2) without hiding the precision a brewer typed.
+    // One digit beyond what the unit is read to: 26 L shows as 6.869 gal, not 6.868548. The
+    // stored value is untouched until the brewer types.
     const shown = units.toDisplay(kind, si);
-    return String(Number(shown.toFixed(displayDecimals(kind, units) + 2)));
+    return String(Number(shown.toFixed(displayDecimals(kind, units) + 1)));
   } catch {
     return '';
   }

@@ -127,8 +127,8 @@ describe('LateBoilCheck', { timeout: 30_000 }, () => {
     // The worked example, prefilled in SI as a brew day would; the brewer types only the reading.
     const initialValues: LateBoilInitialValues = { volumeL: 26, boilOffLPerHour: 4, targetSg: 1.05, targetVolumeL: 23 };
     renderCheck({ units: us, initialValues });
-    // 26 L / 3.785411784 L per US gallon = 6.8685 gal.
-    expect(screen.getByLabelText('Wort in the kettle (hot)')).toHaveValue('6.8685');
+    // 26 L / 3.785411784 L per US gallon = 6.86842 gal, shown to one digit beyond the 0.01 gal it is read to.
+    expect(screen.getByLabelText('Wort in the kettle (hot)')).toHaveValue('6.868');
     await typeInto('Brix', '11.4');
     // 348.8 g / 28.3495 g per ounce = 12.3 oz; 24.32 L = 6.42 gal; 25.33 L = 6.69 gal.
     expect(optionHeadings()[0]).toBe('Add 12.3 oz dry malt extract');
