@@ -1,5 +1,6 @@
+import net from 'node:net';
 import request from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { createApp } from './app';
 import { createDb } from './db/client';
 import { loadEnv } from './env';
@@ -52,6 +53,58 @@ describe('GET /api/health', () => {
     expect(res.body).toEqual({ status: 'degraded', db: 'down' });
     expect((await request(app).get('/api/health')).status).toBe(503);
     await pool.end();
+  });
+});
+
+/**
+ * A TCP relay in front of MariaDB that can be cut and restored, so the test can take the
+ * database away from a running app and give it back.
+ */
+async function startRelay(target: { host: string; port: number }, port = 0) {
+  const sockets = new Set<net.Socket>();
+  const server = net.createServer((client) => {
+    const upstream = net.connect(target);
+    sockets.add(client).add(upstream);
+    client.pipe(upstream).pipe(client);
+    const drop = () => {
+      client.destroy();
+      upstream.destroy();
+    };
+    client.on('error', drop).on('close', drop);
+    upstream.on('error', drop).on('close', drop);
+  });
+  await new Promise<void>((resolve) => server.listen(port, '127.0.0.1', resolve));
+  return {
+    port: (server.address() as net.AddressInfo).port,
+    cut: () =>
+      new Promise<void>((resolve) => {
+        for (const s of sockets) s.destroy();
+        server.close(() => resolve());
+      }),
+  };
+}
+
+describe('GET /api/health when MariaDB goes away and comes back', () => {
+  it('turns 503 while the database is unreachable and ok again once it is back, without a restart', async () => {
+    const real = new URL(inject('databaseUrl'));
+    let relay = await startRelay({ host: real.hostname, port: Number(real.port) });
+    const url = new URL(real);
+    url.port = String(relay.port);
+    const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: url.toString() });
+    const { db, pool } = createDb(env.DATABASE_URL);
+    const app = createApp({ env, db, pool, mailer: h.ctx.mailer });
+
+    expect((await request(app).get('/api/health')).body).toEqual({ status: 'ok', db: 'up' });
+    const port = relay.port;
+    await relay.cut();
+    const down = await request(app).get('/api/health');
+    expect(down.status).toBe(503);
+    expect(down.body.db).toBe('down');
+
+    relay = await startRelay({ host: real.hostname, port: Number(real.port) }, port);
+    expect((await request(app).get('/api/health')).body).toEqual({ status: 'ok', db: 'up' });
+    await pool.end();
+    await relay.cut();
   });
 });
 
