@@ -3,4 +3,5 @@ import './recipes/demo-seed';
 import './instruments/demo-seed';
 import './brews/demo-seed';
 import './fermentation/demo-seed';
+import './reviews/demo-seed';
 export {};

@@ -135,15 +135,13 @@ async function requireTargetOfBrew(tx: DbOrTx, brewId: number, target: CommentBo
 }
 
 /**
- * Adds a comment. The brew day's shares are read again inside the transaction with a locking read,
- * so a comment and the brewer's "stop sharing" are serialised: if the share went first, the
- * comment is refused (404, nothing saved); if the comment went first, it was made while shared.
- * The brewer is mailed after the commit when someone else wrote it.
+ * Writes a comment. The brew day's shares are read again inside the transaction with a locking
+ * read, so a comment and the brewer's "stop sharing" are serialised: if the unsharing went first,
+ * the comment is refused (404, nothing saved); if the comment went first, it was made while shared.
+ * Returns the new comment's id; the demo seed calls this too, without the e-mail.
  */
-export async function addComment(ctx: AppContext, actor: Actor, brewId: number, input: CommentBody, now = new Date()): Promise<CommentCreated> {
-  const { db } = ctx;
-  await loadForComment(db, actor, brewId);
-  const commentId = await db.transaction(async (tx) => {
+export async function insertComment(db: DbOrTx, actor: Actor, brewId: number, input: CommentBody, now = new Date()): Promise<number> {
+  return db.transaction(async (tx) => {
     const [brew] = await tx.select({ ownerId: brews.ownerId }).from(brews).where(eq(brews.id, brewId));
     if (!brew) throw new NotFound(NO_LONGER_SHARED);
     const shares = await tx.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, brewId)).for('update');
@@ -160,6 +158,13 @@ export async function addComment(ctx: AppContext, actor: Actor, brewId: number, 
       .$returningId();
     return id;
   });
+}
+
+/** Adds a comment (see insertComment) and, when someone else wrote it, mails the brewer after the commit. */
+export async function addComment(ctx: AppContext, actor: Actor, brewId: number, input: CommentBody, now = new Date()): Promise<CommentCreated> {
+  const { db } = ctx;
+  await loadForComment(db, actor, brewId);
+  const commentId = await insertComment(db, actor, brewId, input, now);
 
   const stored = await loadBrewForActor(db, actor, brewId, 'read');
   const [comment] = await commentsFor(db, actor, stored, { id: commentId });
