@@ -1,4 +1,4 @@
-import { BookOpen, Flame, FlaskConical, Gauge, House, ShieldCheck, Users, type LucideIcon } from 'lucide-react';
+import { BookOpen, Flame, FlaskConical, Gauge, House, MessageSquareText, ShieldCheck, Users, type LucideIcon } from 'lucide-react';
 
 export interface NavItem {
   to: string;
@@ -17,6 +17,7 @@ export const navItems: NavItem[] = [
   { to: '/brews', label: 'Brew days', icon: Flame },
   { to: '/instruments', label: 'Instruments', icon: Gauge },
   { to: '/clubs', label: 'Clubs', icon: Users },
+  { to: '/reviews', label: 'Reviews', icon: MessageSquareText },
   { to: '/late-boil-check', label: 'Late-boil check', icon: FlaskConical, public: true },
   { to: '/admin', label: 'Admin', icon: ShieldCheck, admin: true },
 ];

@@ -43,6 +43,8 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: 'instruments', lazy: withClient(() => import('./routes/instruments')) },
             { path: 'clubs', lazy: withClient(() => import('./routes/clubs')) },
             { path: 'clubs/:id', lazy: withClient(() => import('./routes/clubs-detail')) },
+            { path: 'reviews', lazy: withClient(() => import('./routes/reviews')) },
+            { path: 'reviews/:brewId', lazy: withClient(() => import('./routes/review-brew')) },
             { path: 'admin', element: <Navigate to="/admin/users" replace /> },
             { path: 'admin/users', lazy: withClient(() => import('./routes/admin-users')) },
             { path: 'admin/mail', lazy: withClient(() => import('./routes/admin-mail')) },

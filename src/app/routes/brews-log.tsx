@@ -4,6 +4,7 @@ import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
 import { BrewLog } from '@/features/brews/components/brew-log';
 import { BrewMissing } from '@/features/brews/components/brew-missing';
+import { BrewComments } from '@/features/reviews/components/brew-comments';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { Loading, PageHeader } from '@/components/ui/page';
 
@@ -42,6 +43,9 @@ export function Component() {
         }
       />
       <BrewLog brew={brew} />
+      <div className="mt-8">
+        <BrewComments brewId={brew.id} canComment={brew.permissions.comment} />
+      </div>
     </>
   );
 }

@@ -1,0 +1,52 @@
+import { ChevronRight } from 'lucide-react';
+import { Link } from 'react-router';
+import { brewStatusLabels } from '@shared/schemas/brews';
+import type { ReviewQueueItem } from '@shared/schemas/comments';
+import { useUnits } from '@/lib/units';
+
+function sharedAgo(iso: string): string {
+  const days = Math.floor((Date.now() - Date.parse(iso)) / 86_400_000);
+  if (days <= 0) return 'shared today';
+  if (days === 1) return 'shared yesterday';
+  return `shared ${days} days ago`;
+}
+
+/** Brew days waiting for a mentor's first comment, newest share first: each a big link to its review. */
+export function ReviewQueue({ items }: { items: readonly ReviewQueueItem[] }) {
+  const units = useUnits();
+  return (
+    <ul className="space-y-2" aria-label="Waiting for a review">
+      {items.map((q) => (
+        <li key={q.brewId}>
+          <Link
+            to={`/reviews/${q.brewId}`}
+            className="flex min-h-touch items-center gap-3 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100 hover:ring-cellar-300"
+            data-testid="queue-item"
+          >
+            <span className="min-w-0 flex-1">
+              <span className="flex flex-wrap items-baseline justify-between gap-x-3">
+                <span className="text-lg font-bold text-cellar-900">{q.brewName}</span>
+                <span className="text-sm text-ink-faint">
+                  {q.brewedOn} · {sharedAgo(q.sharedAt)}
+                </span>
+              </span>
+              <span className="mt-1 block text-sm text-ink-soft">
+                {q.brewerName} · {q.recipeName} · {q.clubs.map((c) => c.name).join(', ')}
+              </span>
+              <span className="mt-2 flex flex-wrap gap-2 text-sm">
+                <span className="rounded-md bg-paper px-2 py-0.5 tabular-nums ring-1 ring-cellar-100">
+                  OG {units.format('gravity', q.og)} · target {units.format('gravity', q.targetOg)}
+                </span>
+                <span className={`rounded-md px-2 py-0.5 font-semibold ${q.deviationCount > 0 ? 'bg-malt-50 text-malt-700' : 'bg-ok-50 text-ok-700'}`}>
+                  {q.deviationCount === 0 ? 'On target' : q.deviationCount === 1 ? '1 thing to look at' : `${q.deviationCount} things to look at`}
+                </span>
+                <span className="rounded-md bg-paper px-2 py-0.5 ring-1 ring-cellar-100">{brewStatusLabels[q.status]}</span>
+              </span>
+            </span>
+            <ChevronRight aria-hidden className="size-5 shrink-0 text-ink-faint" />
+          </Link>
+        </li>
+      ))}
+    </ul>
+  );
+}
