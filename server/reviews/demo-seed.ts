@@ -13,7 +13,7 @@ import { addReading } from '../brews/readings';
 import { addNote, setBrewSharing, setStage, startBrew } from '../brews/service';
 import type { Db } from '../db/client';
 import { registerDemoSeed } from '../db/seed';
-import { brewDecisions, brews, instruments, recipes } from '../db/schema';
+import { brewClubShares, brewDecisions, brews, instruments, recipes } from '../db/schema';
 import { insertComment } from './service';
 
 /** Jonah's brew day waiting for a review: keep its name (the demo-seed test looks for it). */
@@ -77,4 +77,9 @@ registerDemoSeed(async (db, people, club) => {
   await setStage(db, jonah, id, 'og', 'complete', new Date(at('17:35')));
   await addNote(db, jonah, id, { body: 'Came in low and warm. What should I change next time?', stage: null }, new Date(at('17:40')));
   await setBrewSharing(db, jonah, id, [club.id]);
+  // Shared that evening, not when the seed ran.
+  await db
+    .update(brewClubShares)
+    .set({ sharedAt: new Date(at('19:05')) })
+    .where(and(eq(brewClubShares.brewId, id), eq(brewClubShares.clubId, club.id)));
 });
