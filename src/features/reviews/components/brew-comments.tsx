@@ -73,7 +73,11 @@ export function BrewComments({ brewId, canComment }: { brewId: number; canCommen
                 {g.at && <span className="font-normal text-ink-faint"> · {commentTime(g.at)}</span>}
               </p>
               <CommentThread brewId={brewId} comments={g.comments} />
-              {canComment && <ReplyBox brewId={brewId} group={g} />}
+              {canComment && (
+                <div className="no-print">
+                  <ReplyBox brewId={brewId} group={g} />
+                </div>
+              )}
             </li>
           ))}
         </ul>
