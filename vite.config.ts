@@ -32,6 +32,7 @@ export default defineConfig({
           name: 'unit',
           environment: 'node',
           include: ['shared/**/*.test.ts'],
+          setupFiles: ['tests/setup/fail-on-console-error.ts'],
         },
       },
       {
