@@ -89,6 +89,8 @@ describe('club invitations, on a phone-sized window', () => {
     const { page, context, errors } = await newPage(b.browser);
     await page.goto('/sign-in');
     await page.getByRole('link', { name: 'Forgot your password?' }).click();
+    // The sign-in page has an E-mail field too: wait for the next page before typing.
+    await page.getByRole('heading', { name: 'Forgot your password?' }).waitFor();
     await page.getByLabel('E-mail').fill(email);
     await page.getByRole('button', { name: 'Send me a link' }).click();
     await page.getByText('Check your e-mail').waitFor();
