@@ -31,19 +31,23 @@ function log(message: string) {
   console.log(`[mariadb] ${message}`);
 }
 
-function hasCommand(name: string): boolean {
+/** The command's path: on PATH, or in the sbin folders a non-login shell may leave off PATH. */
+export function findCommand(name: string): string | null {
   try {
-    execFileSync('sh', ['-c', `command -v ${name}`], { stdio: 'ignore' });
-    return true;
+    return execFileSync('sh', ['-c', `command -v ${name}`], { encoding: 'utf8' }).trim() || null;
   } catch {
-    return false;
+    for (const dir of ['/usr/sbin', '/usr/bin', '/sbin', '/usr/local/sbin']) {
+      if (existsSync(path.join(dir, name))) return path.join(dir, name);
+    }
+    return null;
   }
 }
 
 let aptUpdated = false;
 /** Installs Debian packages when a command is missing (we run as root on dev and CI machines). */
-export function ensureDebianPackage(command: string, pkg: string) {
-  if (hasCommand(command)) return;
+export function ensureDebianPackage(command: string, pkg: string): string {
+  const found = findCommand(command);
+  if (found) return found;
   log(`${command} not found: installing Debian package ${pkg}`);
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   if (!aptUpdated) {
@@ -51,6 +55,9 @@ export function ensureDebianPackage(command: string, pkg: string) {
     aptUpdated = true;
   }
   execFileSync('apt-get', ['install', '-y', pkg], { stdio: 'inherit', env });
+  const installed = findCommand(command);
+  if (!installed) throw new Error(`Installed ${pkg} but cannot find ${command}`);
+  return installed;
 }
 
 function portAnswers(port: number): Promise<boolean> {
@@ -97,12 +104,13 @@ export async function ensureMariadb(options: MariadbOptions = defaultMariadb): P
     await ensureAppUser(options.port);
     return { port: options.port, child: null, stop: async () => {} };
   }
-  ensureDebianPackage('mariadbd', 'mariadb-server');
+  const mariadbd = ensureDebianPackage('mariadbd', 'mariadb-server');
+  const installDb = findCommand('mariadb-install-db') ?? 'mariadb-install-db';
   mkdirSync(dataRoot, { recursive: true });
   if (!existsSync(path.join(options.dataDir, 'mysql'))) {
     log(`creating a private data directory at ${path.relative(projectRoot, options.dataDir)}`);
     execFileSync(
-      'mariadb-install-db',
+      installDb,
       [
         '--no-defaults',
         `--datadir=${options.dataDir}`,
@@ -115,7 +123,7 @@ export async function ensureMariadb(options: MariadbOptions = defaultMariadb): P
   }
   const logFd = openSync(path.join(dataRoot, 'mariadb.log'), 'a');
   const child = spawn(
-    'mariadbd',
+    mariadbd,
     [
       '--no-defaults',
       '--user=root',
