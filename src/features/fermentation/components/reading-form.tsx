@@ -1,6 +1,6 @@
 import { Form, Formik, useFormikContext } from 'formik';
 import { Droplets, Microscope, Thermometer } from 'lucide-react';
-import { useState } from 'react';
+import { useState, useEffect, useRef } from 'react';
 import { DEFAULT_WCF, sgToBrix } from '@shared/brewmath';
 import { fermentationReadingInputSchema, type FermentationMethod, type FermentationReadingInput } from '@shared/schemas/fermentation';
 import { Button } from '@/components/ui/button';
@@ -156,10 +156,18 @@ function MethodPicker() {
 }
 
 function InstrumentPicker() {
-  const { values, handleChange, errors } = useFormikContext<Values>();
+  const { values, handleChange, errors, setFieldValue } = useFormikContext<Values>();
   const { data: instruments, isError } = useMyInstruments();
   const mine = (instruments ?? []).filter((i) => i.kind === values.method && !i.archived);
   const error = errors.instrumentId;
+  // Start from the brewer's own instrument of this kind; "no profile" stays one tap away.
+  const chosenFor = useRef<string | null>(null);
+  const firstId = mine[0] ? String(mine[0].id) : '';
+  useEffect(() => {
+    if (chosenFor.current === values.method || !firstId) return;
+    chosenFor.current = values.method;
+    if (values.instrumentId === '') void setFieldValue('instrumentId', firstId, false);
+  }, [values.method, values.instrumentId, firstId, setFieldValue]);
   return (
     <div>
       <label htmlFor="reading-instrument" className="mb-1 block text-sm font-semibold text-ink-soft">
