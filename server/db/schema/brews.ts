@@ -17,17 +17,8 @@ import { brewStages, brewStatuses, photoMimeTypes, readingKinds } from '../../..
 import { clubs } from './clubs';
 import { recipes } from './recipes';
 import { users } from './users';
+import { jsonDoc } from './columns';
 
-/**
- * A JSON document. MariaDB's JSON is LONGTEXT with a validity check, and the driver hands it back
- * as a string, so this column parses on the way out.
- */
-const jsonDoc = <T>(name: string) =>
-  customType<{ data: T; driverData: string }>({
-    dataType: () => 'json',
-    toDriver: (value) => JSON.stringify(value),
-    fromDriver: (value) => (typeof value === 'string' ? JSON.parse(value) : value) as T,
-  })(name);
 
 /** Up to 16 MiB of bytes; photos are capped far below that at upload. */
 const mediumBlob = customType<{ data: Buffer; driverData: Buffer }>({ dataType: () => 'mediumblob' });

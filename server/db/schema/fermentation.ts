@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { boolean, char, customType, double, index, int, mysqlEnum, mysqlTable, text, timestamp, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, char, double, index, int, mysqlEnum, mysqlTable, text, timestamp, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
 import {
   fermentationMethods,
   fermentationReadingKinds,
@@ -10,14 +10,8 @@ import {
 } from '../../../shared/schemas/fermentation';
 import { brews } from './brews';
 import { users } from './users';
+import { jsonDoc } from './columns';
 
-/** MariaDB's JSON is LONGTEXT underneath and mysql2 hands it back as a string: parse it here. */
-const jsonDoc = <T>(name: string) =>
-  customType<{ data: T; driverData: string }>({
-    dataType: () => 'json',
-    toDriver: (value) => JSON.stringify(value),
-    fromDriver: (value) => (typeof value === 'string' ? JSON.parse(value) : value) as T,
-  })(name);
 
 const stamp = (name: string) => timestamp(name, { mode: 'date', fsp: 3 });
 const created = (name: string) => stamp(name).notNull().default(sql`CURRENT_TIMESTAMP(3)`);

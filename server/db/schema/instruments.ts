@@ -1,18 +1,9 @@
 import { sql } from 'drizzle-orm';
-import { boolean, customType, date, double, index, int, mysqlEnum, mysqlTable, text, timestamp, varchar } from 'drizzle-orm/mysql-core';
+import { boolean, date, double, index, int, mysqlEnum, mysqlTable, text, timestamp, varchar } from 'drizzle-orm/mysql-core';
 import { calibrationMethods, instrumentKinds, wcfSources, type InstrumentSnapshot } from '../../../shared/schemas/instruments';
 import { users } from './users';
+import { jsonDoc } from './columns';
 
-/**
- * MariaDB's JSON is LONGTEXT underneath and mysql2 hands it back as a string, so parse it here
- * rather than in every query.
- */
-const jsonColumn = <T>(name: string) =>
-  customType<{ data: T; driverData: string }>({
-    dataType: () => 'json',
-    toDriver: (value) => JSON.stringify(value),
-    fromDriver: (value) => (typeof value === 'string' ? JSON.parse(value) : value) as T,
-  })(name);
 
 /** A brewer's own instruments; several of each kind. Calibration fields apply to one kind each. */
 export const instruments = mysqlTable(
@@ -56,10 +47,10 @@ export const instrumentCalibrations = mysqlTable(
       .notNull()
       .references(() => instruments.id, { onDelete: 'cascade' }),
     method: mysqlEnum('method', calibrationMethods).notNull(),
-    inputs: jsonColumn<Record<string, unknown>>('inputs').notNull(),
-    result: jsonColumn<Record<string, unknown> | null>('result'),
-    before: jsonColumn<InstrumentSnapshot | null>('before_snapshot'),
-    after: jsonColumn<InstrumentSnapshot>('after_snapshot').notNull(),
+    inputs: jsonDoc<Record<string, unknown>>('inputs').notNull(),
+    result: jsonDoc<Record<string, unknown> | null>('result'),
+    before: jsonDoc<InstrumentSnapshot | null>('before_snapshot'),
+    after: jsonDoc<InstrumentSnapshot>('after_snapshot').notNull(),
     createdAt: timestamp('created_at', { mode: 'date', fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`),
   },
   (t) => [index('instrument_calibrations_instrument_idx').on(t.instrumentId, t.createdAt)],
@@ -84,7 +75,7 @@ export const equipmentProfiles = mysqlTable(
     elevationM: double('elevation_m'),
     kettleCapacityL: double('kettle_capacity_l'),
     /** The last boil-off measurement behind boilOffLPerHour, if it was measured. */
-    boilOffMeasurement: jsonColumn<{ startL: number; endL: number; minutes: number; measuredAt: string } | null>('boil_off_measurement'),
+    boilOffMeasurement: jsonDoc<{ startL: number; endL: number; minutes: number; measuredAt: string } | null>('boil_off_measurement'),
     createdAt: timestamp('created_at', { mode: 'date' }).notNull().default(sql`CURRENT_TIMESTAMP`),
     updatedAt: timestamp('updated_at', { mode: 'date' }).notNull().default(sql`CURRENT_TIMESTAMP`).onUpdateNow(),
   },
