@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { newPage, useBrowser } from '../support/browser';
+import { goToSection, newPage, useBrowser } from '../support/browser';
 
 const b = useBrowser();
 
@@ -33,6 +33,12 @@ describe('an account, on a phone-sized window', () => {
     await page.getByLabel('Password').fill('a-long-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'Welcome back, Wren Halloway' }).waitFor();
+
+    // On a phone the sections sit behind one Menu button; following a link folds it again.
+    await goToSection(page, 'Recipes');
+    await page.getByRole('heading', { name: 'Recipes', level: 1 }).waitFor();
+    expect(await page.getByRole('button', { name: 'Menu' }).getAttribute('aria-expanded')).toBe('false');
+    expect(await page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
 
     const loginErrors = errors.filter((e) => !/Failed to load resource/.test(e));
     expect(loginErrors).toEqual([]);

@@ -59,7 +59,7 @@ describe('a brew day on a phone-sized window', () => {
 
     // Start a brew day from the demo recipe.
     await page.goto('/brews');
-    await page.getByRole('link', { name: 'Brew days' }).waitFor();
+    await page.getByRole('heading', { name: 'Brew days', level: 1 }).waitFor();
     const start = page.getByRole('form', { name: 'Start a brew day' });
     await start.getByLabel('Recipe').selectOption({ label: 'Hollow Oak Harvest Pale' });
     await start.getByLabel('Name (optional)').fill('Harvest Pale, browser test');

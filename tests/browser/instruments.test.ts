@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { newPage, useBrowser } from '../support/browser';
+import { newPage, useBrowser, goToSection } from '../support/browser';
 
 const b = useBrowser();
 
@@ -24,7 +24,7 @@ describe('instruments, on a phone-sized window', () => {
     expect(signup.status()).toBe(201);
 
     await page.goto('/');
-    await page.getByRole('link', { name: 'Instruments' }).click();
+    await goToSection(page, 'Instruments');
     await page.getByRole('heading', { name: 'Instruments', level: 1 }).waitFor();
 
     // Add a refractometer: it starts on the common-practice factor.

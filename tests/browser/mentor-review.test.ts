@@ -1,7 +1,7 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { demoPassword, demoPeople } from '../../server/db/seed';
-import { mailTo, newPage, signInViaApi, useBrowser } from '../support/browser';
+import { mailTo, newPage, signInViaApi, useBrowser, goToSection } from '../support/browser';
 
 const b = useBrowser();
 
@@ -65,7 +65,7 @@ describe('a mentor’s review, on a phone-sized window', () => {
     await signInViaApi(mentor.context, demoPeople.mentor.email, demoPassword);
     const { page } = mentor;
     await page.goto('/');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reviews' }).click();
+    await goToSection(page, 'Reviews');
     await page.getByRole('heading', { name: 'Reviews' }).waitFor();
     await page.getByText('Brew days shared with clubs where you are a mentor').waitFor();
     const item = page.getByTestId('queue-item').filter({ hasText: brewName });

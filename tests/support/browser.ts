@@ -41,3 +41,12 @@ export async function mailTo(address: string) {
   const res = await fetch(`${inject('fakeSmtpApiUrl')}/messages?to=${encodeURIComponent(address)}`);
   return (await res.json()) as { subject: string; text: string; html: string | null }[];
 }
+
+/** Follows a main-navigation link, opening the phone's folded menu first when it is folded. */
+export async function goToSection(page: Page, label: string) {
+  const nav = page.getByRole('navigation', { name: 'Main', includeHidden: true });
+  await nav.waitFor({ state: 'attached' });
+  const menu = page.getByRole('button', { name: 'Menu' });
+  if (await menu.isVisible()) await menu.click();
+  await nav.getByRole('link', { name: label, exact: true }).click();
+}

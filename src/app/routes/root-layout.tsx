@@ -1,5 +1,6 @@
-import { Suspense } from 'react';
-import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router';
+import { Menu, X } from 'lucide-react';
+import { Suspense, useState } from 'react';
+import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
 import { useMe } from '@/lib/auth';
 import { PreferencesMenu } from '@/features/auth/components/preferences-menu';
 import { buttonClass } from '@/components/ui/button';
@@ -11,6 +12,11 @@ export function RootLayout() {
   const navigate = useNavigate();
   const navigation = useNavigation();
   const items = navItems.filter((i) => (me || i.public) && (!i.admin || me?.siteRole === 'admin'));
+  // On a phone the sections fold behind one button, so every page keeps its height for the work.
+  // It is open for the page it was opened on, so following a link closes it.
+  const location = useLocation();
+  const [openOn, setOpenOn] = useState<string | null>(null);
+  const menuOpen = openOn === location.pathname;
   return (
     <div className="flex min-h-screen flex-col">
       <header className="no-print bg-cellar-700 text-white">
@@ -20,6 +26,18 @@ export function RootLayout() {
             Wortwise
           </Link>
           <div className="ml-auto flex items-center gap-1">
+            {items.length > 1 && (
+              <button
+                type="button"
+                aria-expanded={menuOpen}
+                aria-controls="main-nav"
+                onClick={() => setOpenOn(menuOpen ? null : location.pathname)}
+                className="flex min-h-touch min-w-touch items-center justify-center gap-1 rounded-lg px-2 hover:bg-cellar-900 sm:hidden"
+              >
+                {menuOpen ? <X aria-hidden className="size-6" /> : <Menu aria-hidden className="size-6" />}
+                <span className="text-sm font-semibold">Menu</span>
+              </button>
+            )}
             {me ? (
               <PreferencesMenu me={me} onSignedOut={() => navigate('/sign-in')} />
             ) : (
@@ -35,15 +53,15 @@ export function RootLayout() {
           </div>
         </div>
         {items.length > 0 && (
-          <nav aria-label="Main" className="mx-auto max-w-5xl overflow-x-auto px-1 sm:px-4">
-            <ul className="flex gap-1">
+          <nav id="main-nav" aria-label="Main" className={`mx-auto max-w-5xl px-2 pb-2 sm:block sm:px-4 sm:pb-0 ${menuOpen || items.length === 1 ? 'block' : 'hidden'}`}>
+            <ul className="grid grid-cols-2 gap-1 sm:flex sm:flex-wrap">
               {items.map(({ to, label, icon: Icon }) => (
                 <li key={to}>
                   <NavLink
                     to={to}
                     end={to === '/'}
                     className={({ isActive }) =>
-                      `flex min-h-touch items-center gap-1.5 whitespace-nowrap rounded-t-lg px-3 text-sm font-semibold ${isActive ? 'bg-paper text-cellar-900' : 'text-cellar-100 hover:bg-cellar-900'}`
+                      `flex min-h-touch items-center gap-1.5 whitespace-nowrap rounded-lg px-3 text-sm font-semibold sm:rounded-b-none sm:rounded-t-lg ${isActive ? 'bg-paper text-cellar-900' : 'text-cellar-100 hover:bg-cellar-900'}`
                     }
                   >
                     <Icon aria-hidden className="size-4" />
