@@ -38,7 +38,7 @@ export function ReviewDeviations({ deviations, units, pitchedAt }: { deviations:
             {anchor && (
               <>
                 {' '}
-                <a href={`#${anchor}`} className="whitespace-nowrap font-semibold underline underline-offset-2">
+                <a href={`#${anchor}`} className="-my-2 inline-flex min-h-touch items-center whitespace-nowrap px-1 font-semibold underline underline-offset-2">
                   See it
                 </a>
               </>
