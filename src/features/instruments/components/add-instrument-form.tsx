@@ -8,9 +8,9 @@ import {
   type Instrument,
   type InstrumentKind,
 } from '@shared/schemas/instruments';
-import { Button } from '@/components/ui/button';
+import { SaveFooter } from '@/components/ui/save-footer';
+import { CalibrationTempChoice } from './calibration-temp-choice';
 import { Notice } from '@/components/ui/notice';
-import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import type { Units } from '@/lib/units';
@@ -88,22 +88,7 @@ export function AddInstrumentForm({ units, onAdded, onCancel }: { units: Units; 
           <TextField name="name" label="Name" placeholder={namePlaceholders[values.kind]} />
 
           {values.kind === 'hydrometer' && (
-            <fieldset>
-              <legend className="mb-1 text-sm font-semibold text-ink-soft">Reads true at (printed on its scale)</legend>
-              <div className="flex flex-wrap gap-2">
-                {[
-                  ['20', units.format('temperature', 20)],
-                  ['15.56', units.unitSystem === 'us' ? units.format('temperature', 15.56) : `${units.format('temperature', 15.56)} (60 °F)`],
-                  ['other', 'Other'],
-                ].map(([value, label]) => (
-                  <label key={value} className="flex min-h-touch items-center gap-2 rounded-lg bg-white px-3 ring-1 ring-cellar-300">
-                    <Field type="radio" name="preset" value={value} className="size-5 accent-cellar-500" />
-                    {label}
-                  </label>
-                ))}
-              </div>
-              {values.preset === 'other' && <QuantityField name="calibrationTempC" kind="temperature" label="Calibration temperature" units={units} className="mt-2 max-w-60" />}
-            </fieldset>
+            <CalibrationTempChoice preset={values.preset} units={units} />
           )}
           {values.kind === 'refractometer' && (
             <NumberField
@@ -136,19 +121,7 @@ export function AddInstrumentForm({ units, onAdded, onCancel }: { units: Units; 
             <Notice tone="caution">Mash pH needs 0.01 or finer: paper strips and pool meters are not good enough.</Notice>
           )}
 
-          {status && (
-            <Notice tone="error" title="Not saved">
-              {status} What you entered is still here: try again.
-            </Notice>
-          )}
-          <div className="flex flex-wrap gap-2">
-            <Button type="submit" busy={isSubmitting}>
-              Add instrument
-            </Button>
-            <Button variant="quiet" onClick={onCancel}>
-              Cancel
-            </Button>
-          </div>
+          <SaveFooter status={status} submitLabel="Add instrument" busy={isSubmitting} onCancel={onCancel} />
         </Form>
       )}
     </Formik>

@@ -1,7 +1,7 @@
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import { calibrateInstrumentSchema, DEFAULT_PH_BUFFERS, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
-import { Button } from '@/components/ui/button';
+import { SaveFooter } from '@/components/ui/save-footer';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -71,19 +71,7 @@ export function PhCalibration({ instrument, onDone }: { instrument: Instrument; 
             <NumberField name="bufferLowPh" label="First buffer" unit="pH" />
             <NumberField name="bufferHighPh" label="Second buffer" unit="pH" />
           </div>
-          {status && (
-            <Notice tone="error" title="Not saved">
-              {status} What you entered is still here: try again.
-            </Notice>
-          )}
-          <div className="flex flex-wrap gap-2">
-            <Button type="submit" busy={isSubmitting}>
-              Record calibration
-            </Button>
-            <Button variant="quiet" onClick={onDone}>
-              Cancel
-            </Button>
-          </div>
+          <SaveFooter status={status} submitLabel="Record calibration" busy={isSubmitting} onCancel={onDone} />
         </Form>
       )}
     </Formik>

@@ -1,7 +1,8 @@
 import { Field, Form, Formik } from 'formik';
 import { useState } from 'react';
 import { calibrateInstrumentSchema, DEFAULT_HYDROMETER_CALIBRATION_C, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
-import { Button } from '@/components/ui/button';
+import { SaveFooter } from '@/components/ui/save-footer';
+import { CalibrationTempChoice } from './calibration-temp-choice';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -87,22 +88,7 @@ export function SettingsForm({ instrument, units, onDone }: { instrument: Instru
       {({ values, isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
           {instrument.kind === 'hydrometer' && (
-            <fieldset>
-              <legend className="mb-1 text-sm font-semibold text-ink-soft">Reads true at (printed on its scale)</legend>
-              <div className="flex flex-wrap gap-2">
-                {[
-                  ['20', units.format('temperature', 20)],
-                  ['15.56', `${units.format('temperature', 15.56)}${units.unitSystem === 'us' ? '' : ' (60 °F)'}`],
-                  ['other', 'Other'],
-                ].map(([value, label]) => (
-                  <label key={value} className="flex min-h-touch items-center gap-2 rounded-lg bg-white px-3 ring-1 ring-cellar-300">
-                    <Field type="radio" name="preset" value={value} className="size-5 accent-cellar-500" />
-                    {label}
-                  </label>
-                ))}
-              </div>
-              {values.preset === 'other' && <QuantityField name="calibrationTempC" kind="temperature" label="Calibration temperature" units={units} className="mt-2 max-w-60" />}
-            </fieldset>
+            <CalibrationTempChoice preset={values.preset} units={units} />
           )}
           {instrument.kind === 'refractometer' && (
             <NumberField name="wcf" label="Wort correction factor" hint="Between 0.9 and 1.2; most refractometers need about 1.00 to 1.10." className="max-w-60" />
@@ -134,19 +120,7 @@ export function SettingsForm({ instrument, units, onDone }: { instrument: Instru
             <span className="mb-1 block text-sm font-semibold text-ink-soft">Note for the log (optional)</span>
             <Field name="note" maxLength={200} className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3" />
           </label>
-          {status && (
-            <Notice tone="error" title="Not saved">
-              {status} What you entered is still here: try again.
-            </Notice>
-          )}
-          <div className="flex flex-wrap gap-2">
-            <Button type="submit" busy={isSubmitting}>
-              {titles[instrument.kind]}
-            </Button>
-            <Button variant="quiet" onClick={onDone}>
-              Cancel
-            </Button>
-          </div>
+          <SaveFooter status={status} submitLabel={titles[instrument.kind]} busy={isSubmitting} onCancel={onDone} />
         </Form>
       )}
     </Formik>

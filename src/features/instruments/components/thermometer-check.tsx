@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { BrewMathError } from '@shared/brewmath';
 import { thermometerCheck, type ThermometerCheckResult } from '@shared/instruments';
 import { calibrateInstrumentSchema, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
-import { Button } from '@/components/ui/button';
+import { SaveFooter } from '@/components/ui/save-footer';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -127,19 +127,7 @@ function CheckForm({ units, onCancel }: { units: Units; onCancel: () => void }) 
           ))}
         </div>
       )}
-      {status && (
-        <Notice tone="error" title="Not saved">
-          {status} Your readings are still here: try again.
-        </Notice>
-      )}
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={isSubmitting} disabled={!result || !('ok' in result)}>
-          {result && 'ok' in result ? `Save offset ${signedDelta(units, result.ok.offsetC)}` : 'Enter a reading to see the offset'}
-        </Button>
-        <Button variant="quiet" onClick={onCancel}>
-          Cancel
-        </Button>
-      </div>
+      <SaveFooter status={status} keptNote="Your readings are still here: try again." submitLabel={result && 'ok' in result ? `Save offset ${signedDelta(units, result.ok.offsetC)}` : 'Enter a reading to see the offset'} busy={isSubmitting} disabled={!result || !('ok' in result)} onCancel={onCancel} />
     </Form>
   );
 }

@@ -5,6 +5,7 @@ import { BrewMathError } from '@shared/brewmath';
 import { wcfCalibration, type WcfCalibrationResult } from '@shared/instruments';
 import { calibrateInstrumentSchema, DEFAULT_HYDROMETER_CALIBRATION_C, MAX_WCF_PAIRS, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
 import { Button } from '@/components/ui/button';
+import { SaveFooter } from '@/components/ui/save-footer';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -185,19 +186,7 @@ function WcfForm({ hydrometers, units, onCancel }: { hydrometers: Instrument[]; 
         </div>
       )}
 
-      {status && (
-        <Notice tone="error" title="Not saved">
-          {status} Your readings are still here: try again.
-        </Notice>
-      )}
-      <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={isSubmitting} disabled={!result || !('ok' in result)}>
-          {result && 'ok' in result ? `Use factor ${result.ok.wcf.toFixed(3)}` : 'Enter the pairs to see the factor'}
-        </Button>
-        <Button variant="quiet" onClick={onCancel}>
-          Cancel
-        </Button>
-      </div>
+      <SaveFooter status={status} keptNote="Your readings are still here: try again." submitLabel={result && 'ok' in result ? `Use factor ${result.ok.wcf.toFixed(3)}` : 'Enter the pairs to see the factor'} busy={isSubmitting} disabled={!result || !('ok' in result)} onCancel={onCancel} />
     </Form>
   );
 }
