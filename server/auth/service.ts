@@ -3,6 +3,7 @@ import { eq } from 'drizzle-orm';
 import type { LoginInput, SignupInput } from '@shared/schemas/auth';
 import type { Db } from '../db/client';
 import { users } from '../db/schema';
+import { isDuplicateKey } from '../lib/db-errors';
 import { Conflict, Unauthorized } from '../lib/errors';
 
 // OWASP's argon2id guidance: 19 MiB memory, 2 iterations, 1 lane.
@@ -31,7 +32,7 @@ export async function createUser(db: Db, input: SignupInput & { siteRole?: 'user
     return result.id;
   } catch (error) {
     // Two sign-ups racing for the same address: the unique index decides.
-    if ((error as { cause?: { code?: string } }).cause?.code === 'ER_DUP_ENTRY' || (error as { code?: string }).code === 'ER_DUP_ENTRY') {
+    if (isDuplicateKey(error)) {
       throw new Conflict('An account with that e-mail already exists. Sign in instead?', { email: 'An account with that e-mail already exists.' });
     }
     throw error;

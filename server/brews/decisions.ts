@@ -5,25 +5,22 @@
  * client is never read (the schema drops it).
  */
 import { eq } from 'drizzle-orm';
-import { BrewMathError } from '@shared/brewmath';
 import { EXTRACT_NAMES, runBoilCheck } from '@shared/boil-check';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import type { BrewDecision, DecisionChoice } from '@shared/schemas/brews';
 import type { Actor } from '../auth/permissions';
 import type { Db } from '../db/client';
+import { lockBrewRow } from '../db/locks';
 import { brewDecisions } from '../db/schema';
+import { mathFields } from '../lib/brewmath-fields';
 import { BadRequest } from '../lib/errors';
 import { loadBrewForActor, toDecision, touchStage } from './service';
 
 const capitalise = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
 function recompute(input: BoilCheckParsed) {
-  try {
-    return runBoilCheck(input);
-  } catch (error) {
-    if (error instanceof BrewMathError) throw new BadRequest(error.message, { [`input.${error.field ?? '_'}`]: error.message });
-    throw error;
-  }
+  // The check's inputs sit under "input." in a decision.
+  return mathFields(() => runBoilCheck(input), { prefix: 'input.' });
 }
 
 /** The option the brewer chose, from the recomputed result; a 400 saying why when it cannot be done. */
@@ -52,6 +49,7 @@ export async function addDecision(
   const outcome = recompute(body.input);
   const chosen = chosenOption(outcome, body.input, body.choice);
   const id = await db.transaction(async (tx) => {
+    await lockBrewRow(tx, brewId);
     const [{ id }] = await tx
       .insert(brewDecisions)
       .values({ brewId, input: body.input, result: { ...outcome, chosen }, choice: body.choice, note: body.note, decidedAt: now })

@@ -5,29 +5,23 @@
  * name and Content-Type the client sends are not trusted.
  */
 import { createHash } from 'node:crypto';
-import type { NextFunction, Request, RequestHandler, Response } from 'express';
-import multer from 'multer';
+import type { Request, Response } from 'express';
 import { and, count, eq } from 'drizzle-orm';
 import { PHOTO_MAX_BYTES, type PhotoMime, type ReadingPhoto } from '@shared/schemas/brews';
 import type { Actor } from '../auth/permissions';
 import type { Db } from '../db/client';
+import { lockBrewRow } from '../db/locks';
 import { readingPhotos } from '../db/schema';
 import { BadRequest, HttpError, NotFound } from '../lib/errors';
+import { singleUpload } from '../lib/upload';
 import { loadReading } from './readings';
 import { loadBrewForActor, photoUrl } from './service';
 
 export const PHOTOS_PER_READING = 6;
-const maxMb = PHOTO_MAX_BYTES / (1024 * 1024);
 
 class UnsupportedMediaType extends HttpError {
   constructor(message: string) {
     super(415, 'unsupported_media_type', message, { photo: message });
-  }
-}
-
-class PayloadTooLarge extends HttpError {
-  constructor(message: string) {
-    super(413, 'too_large', message, { photo: message });
   }
 }
 
@@ -40,20 +34,12 @@ export function sniffImageType(bytes: Buffer): PhotoMime | null {
   return null;
 }
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 } }).single('photo');
-
-/** multer with our own words for its errors. */
-export const receivePhoto: RequestHandler = (req: Request, res: Response, next: NextFunction) => {
-  upload(req, res, (error: unknown) => {
-    if (!error) return next();
-    if (error instanceof multer.MulterError) {
-      if (error.code === 'LIMIT_FILE_SIZE') return next(new PayloadTooLarge(`The photo is larger than ${maxMb} MB. Take it at a lower resolution or crop it, then try again.`));
-      const message = 'Send one photo, in the form field named "photo".';
-      return next(new BadRequest(message, { photo: message }));
-    }
-    next(error);
-  });
-};
+export const receivePhoto = singleUpload({
+  field: 'photo',
+  what: 'photo',
+  maxBytes: PHOTO_MAX_BYTES,
+  tooLargeTip: 'Take it at a lower resolution or crop it, then try again.',
+});
 
 function toPhoto(brewId: number, row: { id: number; readingId: number; mime: PhotoMime; sizeBytes: number; sha256: string; createdAt: Date }): ReadingPhoto {
   return { ...row, createdAt: row.createdAt.toISOString(), url: photoUrl(brewId, row.readingId, row.id) };
@@ -68,14 +54,19 @@ export async function addPhoto(db: Db, actor: Actor, brewId: number, readingId: 
   }
   const mime = sniffImageType(file.buffer);
   if (!mime) throw new UnsupportedMediaType('That file is not a JPEG, PNG or WebP image. Choose a photo taken with your camera.');
-  const [{ n }] = await db.select({ n: count() }).from(readingPhotos).where(eq(readingPhotos.readingId, readingId));
-  if (Number(n) >= PHOTOS_PER_READING) {
-    const message = `A reading keeps at most ${PHOTOS_PER_READING} photos. Delete one first.`;
-    throw new BadRequest(message, { photo: message });
-  }
   const sha256 = createHash('sha256').update(file.buffer).digest('hex');
   const values = { readingId, brewId, mime, sizeBytes: file.size, sha256, data: file.buffer };
-  const [{ id }] = await db.insert(readingPhotos).values(values).$returningId();
+  const id = await db.transaction(async (tx) => {
+    // Counted under the brew row lock, so twelve uploads at once still keep at most six.
+    await lockBrewRow(tx, brewId);
+    const [{ n }] = await tx.select({ n: count() }).from(readingPhotos).where(eq(readingPhotos.readingId, readingId));
+    if (Number(n) >= PHOTOS_PER_READING) {
+      const message = `A reading keeps at most ${PHOTOS_PER_READING} photos. Delete one first.`;
+      throw new BadRequest(message, { photo: message });
+    }
+    const [{ id }] = await tx.insert(readingPhotos).values(values).$returningId();
+    return id;
+  });
   const [row] = await db
     .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
     .from(readingPhotos)

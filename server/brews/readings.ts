@@ -4,13 +4,13 @@
  * shows live. A later calibration never rewrites a stored reading; recompute re-applies the
  * instrument's current calibration only when the brewer asks, and logs the old and new values.
  */
-import { and, eq } from 'drizzle-orm';
-import { BrewMathError } from '@shared/brewmath';
+import { and, eq, isNull } from 'drizzle-orm';
 import { correctReading, defaultSnapshot, type RawByKind } from '@shared/instruments';
 import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
 import type { InstrumentKind, InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { Actor } from '../auth/permissions';
 import type { Db } from '../db/client';
+import { lockBrewRow } from '../db/locks';
 import { brewNotes, brewReadings, brews } from '../db/schema';
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, NotFound } from '../lib/errors';
@@ -58,13 +58,9 @@ function instrumentRaw(kind: InstrumentKind, raw: ReadingRaw): RawByKind[Instrum
   }
 }
 
+/** An impossible reading is a BrewMathError: the error middleware answers 400 under its field. */
 function correct(snapshot: InstrumentSnapshot, raw: ReadingRaw, at: Date) {
-  try {
-    return correctReading(snapshot, instrumentRaw(snapshot.kind, raw), at);
-  } catch (error) {
-    if (error instanceof BrewMathError) throw new BadRequest(error.message, { [error.field ?? '_']: error.message });
-    throw error;
-  }
+  return correctReading(snapshot, instrumentRaw(snapshot.kind, raw), at);
 }
 
 async function snapshotFor(db: Db, actor: Actor, kind: InstrumentKind, instrumentId: number | null, allowArchived = false): Promise<InstrumentSnapshot> {
@@ -88,6 +84,9 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
   const stage = readingStage[body.kind];
 
   const id = await db.transaction(async (tx) => {
+    // The brew row first: the stage and updatedAt written below would otherwise deadlock with a
+    // reading posted at the same moment (see server/db/locks.ts).
+    await lockBrewRow(tx, brewId);
     const [{ id }] = await tx
       .insert(brewReadings)
       .values({
@@ -108,7 +107,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
     await touchStage(tx, brewId, stage, takenAt);
     // The yeast went in: fermentation counts its days from here (the first pitch wins).
     if (body.kind === 'pitch_temp' && body.pitched && !stored.row.pitchedAt) {
-      await tx.update(brews).set({ pitchedAt: takenAt }).where(eq(brews.id, brewId));
+      await tx.update(brews).set({ pitchedAt: takenAt }).where(and(eq(brews.id, brewId), isNull(brews.pitchedAt)));
     }
     return id;
   });
@@ -158,6 +157,7 @@ export async function recomputeReading(db: Db, actor: Actor, brewId: number, rea
   const { corrected, correction, warnings } = correct(snapshot, row.raw, row.takenAt);
   const now = new Date();
   await db.transaction(async (tx) => {
+    await lockBrewRow(tx, brewId);
     await tx
       .update(brewReadings)
       .set({

@@ -26,7 +26,7 @@ import {
 import type { EquipmentProfile, InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
-import { checkShareTargets, diffShares } from '../lib/sharing';
+import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
 import type { DbOrTx } from '../db/client';
 import {
   brewClubShares,
@@ -42,6 +42,7 @@ import {
   type BrewReadingRow,
   type BrewRow,
 } from '../db/schema';
+import { lockBrewRow } from '../db/locks';
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
 import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
@@ -319,6 +320,7 @@ export async function deleteBrew(db: DbOrTx, actor: Actor, id: number): Promise<
 export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: BrewStage, action: BrewStageAction, now = new Date()): Promise<void> {
   const stored = await loadBrewForActor(db, actor, id, 'update');
   await db.transaction(async (tx) => {
+    await lockBrewRow(tx, id);
     const rows = await tx.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)).for('update');
     const current = rows.find((r) => r.stage === stage);
     const next: Partial<typeof brewStagesTable.$inferInsert> =
@@ -348,7 +350,7 @@ export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: Brew
   });
 }
 
-/** A reading or decision in a stage starts that stage, if it was not started yet. */
+/** A reading or decision in a stage starts that stage, if it was not started yet. The caller holds the brew row lock (lockBrewRow). */
 export async function touchStage(tx: DbOrTx, brewId: number, stage: BrewStage, at: Date) {
   const [row] = await tx
     .select()
@@ -367,6 +369,7 @@ export async function setBrewSharing(db: DbOrTx, actor: Actor, id: number, clubI
   await loadBrewForActor(db, actor, id, 'share');
   const unique = checkShareTargets(actor, clubIds);
   await db.transaction(async (tx) => {
+    await lockShareTargets(tx, actor.id, unique);
     const existing = await tx.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, id));
     const { gone, added } = diffShares(existing.map((e) => e.clubId), unique);
     if (gone.length > 0) await tx.delete(brewClubShares).where(and(eq(brewClubShares.brewId, id), inArray(brewClubShares.clubId, gone)));

@@ -1,22 +1,9 @@
 import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import { BrewMathError, boilCorrection } from '@shared/brewmath';
+import { boilCorrection } from '@shared/brewmath';
 import { boilCorrectionRequestSchema } from '@shared/schemas/boil-check';
 import type { Env } from '../env';
-import { BadRequest } from '../lib/errors';
 import { handle } from '../lib/handle';
-
-/** A BrewMathError names the input it refuses; it becomes the same per-field 400 as a zod error. */
-function brewMath<T>(compute: () => T): T {
-  try {
-    return compute();
-  } catch (error) {
-    if (error instanceof BrewMathError) {
-      throw new BadRequest('Some fields need attention.', { [error.field ?? '_']: error.message });
-    }
-    throw error;
-  }
-}
 
 /**
  * Public calculators: no account needed, so a brewer can try Wortwise before signing up. Nothing
@@ -37,7 +24,7 @@ export function calcRouter(env: Env) {
 
   router.post(
     '/boil-correction',
-    handle({ body: boilCorrectionRequestSchema }, ({ body }) => brewMath(() => boilCorrection(body))),
+    handle({ body: boilCorrectionRequestSchema }, ({ body }) => boilCorrection(body)),
   );
 
   return router;

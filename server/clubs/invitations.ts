@@ -11,6 +11,7 @@ import type { SessionUser } from '../auth/session';
 import type { AppContext } from '../context';
 import type { Db, DbOrTx } from '../db/client';
 import { clubInvitations, clubMemberships, clubs, users, type ClubInvitation } from '../db/schema';
+import { isDuplicateKey } from '../lib/db-errors';
 import { BadRequest, Conflict, Forbidden, Gone, NotFound } from '../lib/errors';
 import { hashLinkToken, newLinkToken } from '../lib/tokens';
 import { sendAfterCommit } from '../mail/mailer';
@@ -29,11 +30,6 @@ function toPending(row: ClubInvitation, inviterName: string | null): PendingInvi
     expiresAt: row.expiresAt.toISOString(),
     expired: row.expiresAt.getTime() <= Date.now(),
   };
-}
-
-function isDuplicateEntry(error: unknown) {
-  const e = error as { code?: string; cause?: { code?: string } };
-  return e?.code === 'ER_DUP_ENTRY' || e?.cause?.code === 'ER_DUP_ENTRY';
 }
 
 export async function inviteToClub(ctx: AppContext, actor: SessionUser, clubId: number, input: { email: string; role: ClubRole }): Promise<InvitationSent> {
@@ -198,7 +194,7 @@ export async function acceptInvitation(
           .$returningId();
         userId = created.id;
       } catch (error) {
-        if (isDuplicateEntry(error)) throw new Conflict(`An account for ${row.email} already exists: sign in to accept the invitation.`);
+        if (isDuplicateKey(error)) throw new Conflict(`An account for ${row.email} already exists: sign in to accept the invitation.`);
         throw error;
       }
     }

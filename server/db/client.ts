@@ -1,6 +1,7 @@
 import { drizzle } from 'drizzle-orm/mysql2';
 import mysql from 'mysql2/promise';
 import * as schema from './schema';
+import { retryTransactions } from './transaction';
 
 export function createDb(url: string) {
   const pool = mysql.createPool({
@@ -11,7 +12,8 @@ export function createDb(url: string) {
     timezone: 'Z',
     enableKeepAlive: true,
   });
-  const db = drizzle(pool, { schema, mode: 'default' });
+  // Every db.transaction retries a deadlock or lock-wait timeout: see transaction.ts.
+  const db = retryTransactions(drizzle(pool, { schema, mode: 'default' }));
   return { db, pool };
 }
 

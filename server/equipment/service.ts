@@ -7,9 +7,10 @@ import { and, asc, desc, eq, ne } from 'drizzle-orm';
 import { boilOffRateLPerHour } from '@shared/brewmath';
 import { DEFAULT_EQUIPMENT, type EquipmentProfile, type EquipmentProfileInput, type EquipmentProfileUpdate } from '@shared/schemas/instruments';
 import { requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
-import type { DbOrTx } from '../db/client';
+import type { DbOrTx, Tx } from '../db/client';
+import { lockUserRow } from '../db/locks';
 import { equipmentProfiles, type EquipmentProfileRow } from '../db/schema';
-import { asBadRequest } from '../instruments/brewmath-errors';
+import { mathFields } from '../lib/brewmath-fields';
 import { BadRequest } from '../lib/errors';
 
 type Values = Partial<Omit<EquipmentProfileRow, 'id' | 'ownerId' | 'createdAt' | 'updatedAt'>>;
@@ -88,11 +89,11 @@ function toValues(input: EquipmentProfileUpdate): Values {
   if (input.kettleCapacityL !== undefined) values.kettleCapacityL = input.kettleCapacityL ?? null;
   if (input.boilOffMeasurement) {
     const m = input.boilOffMeasurement;
-    const rate = asBadRequest(() => boilOffRateLPerHour(m), {
+    const rate = mathFields(() => boilOffRateLPerHour(m), { map: {
       startL: 'boilOffMeasurement.startL',
       endL: 'boilOffMeasurement.endL',
       minutes: 'boilOffMeasurement.minutes',
-    });
+    } });
     if (rate > 30) {
       const message = `That is ${rate.toFixed(1)} L/h, beyond a home kettle (30 L/h at most). Check the volumes and the minutes.`;
       throw new BadRequest(message, { 'boilOffMeasurement.minutes': message });
@@ -115,6 +116,9 @@ async function clearOtherDefaults(tx: DbOrTx, ownerId: number, keepId: number) {
 
 export async function createEquipment(db: DbOrTx, actor: Actor, input: EquipmentProfileInput): Promise<EquipmentProfile> {
   return db.transaction(async (tx) => {
+    // The owner's row first: two first profiles saved at once would otherwise both become the
+    // default and deadlock clearing each other (see server/db/locks.ts).
+    await lockUserRow(tx, actor.id);
     const existing = await defaultRow(tx, actor.id);
     const isDefault = input.isDefault ?? !existing;
     const values = toValues(input);
@@ -138,6 +142,7 @@ export async function createEquipment(db: DbOrTx, actor: Actor, input: Equipment
 
 export async function updateEquipment(db: DbOrTx, actor: Actor, id: number, patch: EquipmentProfileUpdate): Promise<EquipmentProfile> {
   return db.transaction(async (tx) => {
+    await lockUserRow(tx, actor.id);
     const row = await findProfile(tx, actor, id, 'update', true);
     const values = toValues(patch);
     // The default can be moved to another profile, not switched off: there is always one.
@@ -150,6 +155,7 @@ export async function updateEquipment(db: DbOrTx, actor: Actor, id: number, patc
 
 export async function deleteEquipment(db: DbOrTx, actor: Actor, id: number): Promise<void> {
   await db.transaction(async (tx) => {
+    await lockUserRow(tx, actor.id);
     const row = await findProfile(tx, actor, id, 'delete', true);
     await tx.delete(equipmentProfiles).where(eq(equipmentProfiles.id, id));
     if (row.isDefault) {
@@ -163,7 +169,8 @@ export async function deleteEquipment(db: DbOrTx, actor: Actor, id: number): Pro
  * Keeps the elevation from a thermometer's boiling check on the default kettle profile, creating
  * one from common-practice values if the brewer has none. Called inside the calibration's transaction.
  */
-export async function rememberElevation(tx: DbOrTx, userId: number, elevationM: number): Promise<void> {
+export async function rememberElevation(tx: Tx, userId: number, elevationM: number): Promise<void> {
+  await lockUserRow(tx, userId);
   const row = await defaultRow(tx, userId);
   if (row) {
     await tx.update(equipmentProfiles).set({ elevationM }).where(eq(equipmentProfiles.id, row.id));

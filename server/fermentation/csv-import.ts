@@ -5,7 +5,7 @@
  * before anything is written; one bad row and nothing is imported; rows already in the log (or
  * twice in the file) are skipped, so importing the same file again adds nothing.
  */
-import { sgToBrix } from '@shared/brewmath';
+import { BrewMathError, sgToBrix } from '@shared/brewmath';
 import {
   CsvParseError,
   CsvTooManyRowsError,
@@ -34,12 +34,14 @@ import type { InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { Actor } from '../auth/permissions';
 import { loadBrewForActor, type StoredBrew } from '../brews/service';
 import type { Db } from '../db/client';
+import { lockBrewRow } from '../db/locks';
+import { isDuplicateKey } from '../lib/db-errors';
 import { fermentationReadings } from '../db/schema';
 import { listInstruments } from '../instruments/service';
 import { fieldErrors } from '../lib/handle';
 import { BadRequest, Conflict, HttpError } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
-import { assembleLog, correctRaw, dedupeKey, existingKeys, isDuplicateKeyError, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
+import { assembleLog, correctRaw, dedupeKey, existingKeys, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
 
 export class UnsupportedFile extends HttpError {
   constructor(message: string) {
@@ -171,7 +173,8 @@ async function prepareRows(db: Db, actor: Actor, stored: StoredBrew, records: Cs
     try {
       corrected = correctRaw(snapshot, raw);
     } catch (error) {
-      if (error instanceof HttpError) {
+      // A row's impossible value is that row's error, not the request's.
+      if (error instanceof HttpError || error instanceof BrewMathError) {
         fail('value', error.message.charAt(0).toLowerCase() + error.message.slice(1));
         continue;
       }
@@ -298,6 +301,8 @@ export async function importReadings(db: Db, actor: Actor, brewId: number, buffe
   let added = 0;
   try {
     await db.transaction(async (tx) => {
+      // Two imports into one brew at once queue on the brew row instead of deadlocking.
+      await lockBrewRow(tx, brewId);
       const existing = await existingKeys(
         tx,
         brewId,
@@ -334,7 +339,7 @@ export async function importReadings(db: Db, actor: Actor, brewId: number, buffe
     });
   } catch (error) {
     // Another import of the same rows committed first: ours rolled back whole.
-    if (isDuplicateKeyError(error)) throw new Conflict('Some of these readings were saved by another import just now. Nothing was imported; try again and the rest will be added.');
+    if (isDuplicateKey(error)) throw new Conflict('Some of these readings were saved by another import just now. Nothing was imported; try again and the rest will be added.');
     throw error;
   }
   if (added > 0) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), stored.row.pitchedAt, now), now);

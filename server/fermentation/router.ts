@@ -1,11 +1,11 @@
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
+import { Router } from 'express';
 import { z } from 'zod';
 import { CSV_MAX_BYTES, fermentationReadingInputSchema, fermentationSettingsSchema, packagingInputSchema } from '@shared/schemas/fermentation';
 import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
 import { BadRequest } from '../lib/errors';
 import { handle } from '../lib/handle';
+import { singleUpload } from '../lib/upload';
 import { exportCsv } from './csv-export';
 import { importReadings, parseMapping, previewImport } from './csv-import';
 import { addReading, deletePackaging, deleteReading, getLog, recordPackaging, remindersEnabledFor, setRemindersEnabled } from './service';
@@ -16,7 +16,13 @@ const readingParams = z.object({ brewId: idNum, readingId: idNum });
 const uploadBody = z.object({ mapping: z.string().max(20_000).optional() });
 
 /** One file in memory, at most 5 MB: CSV is read straight from the buffer and never stored. */
-const upload: RequestHandler = multer({ storage: multer.memoryStorage(), limits: { fileSize: CSV_MAX_BYTES, files: 1, fields: 5, fieldSize: 20_000 } }).single('file');
+const upload = singleUpload({
+  field: 'file',
+  what: 'CSV file',
+  maxBytes: CSV_MAX_BYTES,
+  tooLargeTip: 'Split it into smaller files and import them one after the other.',
+  fieldSize: 20_000,
+});
 
 function fileOf(req: { file?: Express.Multer.File }) {
   if (!req.file) throw new BadRequest('Choose a CSV file to upload.', { file: 'Choose a CSV file to upload.' });

@@ -6,7 +6,7 @@
  */
 import { createHash } from 'node:crypto';
 import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
-import { BrewMathError, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
+import { residualCo2Volumes, primingSugarG } from '@shared/brewmath';
 import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
 import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
 import {
@@ -38,6 +38,8 @@ import {
   type FermentationReadingRow,
   type PackagingRecordRow,
 } from '../db/schema';
+import { lockBrewRow } from '../db/locks';
+import { isDuplicateKey } from '../lib/db-errors';
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
@@ -50,11 +52,6 @@ export function dedupeKey(brewId: number, takenAt: Date, method: FermentationMet
   return createHash('sha256').update(dedupeMaterial(brewId, takenAt, method, value), 'utf8').digest('hex');
 }
 
-export function isDuplicateKeyError(error: unknown) {
-  const e = error as { code?: string; cause?: { code?: string } };
-  return e?.code === 'ER_DUP_ENTRY' || e?.cause?.code === 'ER_DUP_ENTRY';
-}
-
 // ---------------------------------------------------------------------------------------------
 // Reading rows
 
@@ -64,27 +61,22 @@ export function primaryOf(raw: FermentationRaw): number {
 
 /** One reading through its instrument's calibration; impossible input is a 400 under the field typed. */
 export function correctRaw(snapshot: InstrumentSnapshot, raw: FermentationRaw): CorrectedReading {
-  try {
-    switch (raw.method) {
-      case 'hydrometer': {
-        if (snapshot.kind !== 'hydrometer') break;
-        // Without a sample temperature (a CSV row) the reading is taken as read at calibration temperature.
-        const result = correctReading(snapshot, { sg: raw.sg, sampleTempC: raw.sampleTempC ?? snapshot.calibrationTempC });
-        if (raw.sampleTempC === null) {
-          result.warnings.push(`No sample temperature was given, so this reading is taken as read at ${snapshot.calibrationTempC} °C, uncorrected.`);
-        }
-        return result;
+  switch (raw.method) {
+    case 'hydrometer': {
+      if (snapshot.kind !== 'hydrometer') break;
+      // Without a sample temperature (a CSV row) the reading is taken as read at calibration temperature.
+      const result = correctReading(snapshot, { sg: raw.sg, sampleTempC: raw.sampleTempC ?? snapshot.calibrationTempC });
+      if (raw.sampleTempC === null) {
+        result.warnings.push(`No sample temperature was given, so this reading is taken as read at ${snapshot.calibrationTempC} °C, uncorrected.`);
       }
-      case 'refractometer':
-        if (snapshot.kind !== 'refractometer') break;
-        return correctReading(snapshot, { brix: raw.brix, originalBrix: raw.originalBrix, fermentationStarted: true });
-      case 'thermometer':
-        if (snapshot.kind !== 'thermometer') break;
-        return correctReading(snapshot, { tempC: raw.tempC });
+      return result;
     }
-  } catch (error) {
-    if (error instanceof BrewMathError) throw new BadRequest(error.message, { [error.field ?? '_']: error.message });
-    throw error;
+    case 'refractometer':
+      if (snapshot.kind !== 'refractometer') break;
+      return correctReading(snapshot, { brix: raw.brix, originalBrix: raw.originalBrix, fermentationStarted: true });
+    case 'thermometer':
+      if (snapshot.kind !== 'thermometer') break;
+      return correctReading(snapshot, { tempC: raw.tempC });
   }
   throw new BadRequest(`That instrument is a ${snapshot.kind}, not a ${raw.method}.`, { instrumentId: `Choose a ${raw.method}.` });
 }
@@ -318,7 +310,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
       })
       .$returningId();
   } catch (error) {
-    if (!isDuplicateKeyError(error)) throw error;
+    if (!isDuplicateKey(error)) throw error;
     duplicate = true;
     const [existing] = await db
       .select({ id: fermentationReadings.id })
@@ -346,18 +338,6 @@ export async function deleteReading(db: Db, actor: Actor, brewId: number, readin
 // ---------------------------------------------------------------------------------------------
 // Packaging
 
-function brewMath<T>(fn: () => T, fieldMap: Record<string, string>): T {
-  try {
-    return fn();
-  } catch (error) {
-    if (error instanceof BrewMathError) {
-      const field = error.field ? (fieldMap[error.field] ?? error.field) : '_';
-      throw new BadRequest(error.message, { [field]: error.message });
-    }
-    throw error;
-  }
-}
-
 /**
  * Records how the beer was packaged. Before the verdict is "stable" the brewer must say so
  * explicitly (`override` and a reason); the override is kept with the record and written to the
@@ -375,15 +355,16 @@ export async function recordPackaging(db: Db, actor: Actor, brewId: number, body
       override: `Not stable yet: ${verdict.reason} To package anyway, tick the override and say why.`,
     });
   }
-  const fields = { volumeL: 'volumeL', warmestTempC: 'warmestTempC', targetCo2Volumes: 'targetCo2Volumes', sugar: 'sugar' };
-  const residual = brewMath(() => residualCo2Volumes(body.warmestTempC), fields);
+  // The math's parameter names are the form's field names: a BrewMathError is a 400 under them as is.
+  const residual = residualCo2Volumes(body.warmestTempC);
   const grams =
     body.sugar === 'none'
       ? null
-      : brewMath(() => primingSugarG({ volumeL: body.volumeL, warmestTempC: body.warmestTempC, targetCo2Volumes: body.targetCo2Volumes, sugar: body.sugar as 'sucrose' }), fields);
+      : primingSugarG({ volumeL: body.volumeL, warmestTempC: body.warmestTempC, targetCo2Volumes: body.targetCo2Volumes, sugar: body.sugar as 'sucrose' });
   const override = verdict.state !== 'stable' && body.override;
   try {
     await db.transaction(async (tx) => {
+      await lockBrewRow(tx, brewId);
       await tx.insert(packagingRecords).values({
         brewId,
         container: body.container,
@@ -414,7 +395,7 @@ export async function recordPackaging(db: Db, actor: Actor, brewId: number, body
       }
     });
   } catch (error) {
-    if (isDuplicateKeyError(error)) throw new Conflict('This brew is already packaged. Undo that record first to change it.');
+    if (isDuplicateKey(error)) throw new Conflict('This brew is already packaged. Undo that record first to change it.');
     throw error;
   }
   return assembleLog(db, actor, { ...stored, row: { ...stored.row, status: 'packaged' } }, now);
@@ -423,6 +404,7 @@ export async function recordPackaging(db: Db, actor: Actor, brewId: number, body
 export async function deletePackaging(db: Db, actor: Actor, brewId: number) {
   const stored = await loadBrewForActor(db, actor, brewId, 'update');
   await db.transaction(async (tx) => {
+    await lockBrewRow(tx, brewId);
     const deleted = await tx.delete(packagingRecords).where(eq(packagingRecords.brewId, brewId));
     if ((deleted[0] as { affectedRows?: number }).affectedRows === 0) throw new NotFound('This brew has no packaging record.');
     await tx.update(brews).set({ status: 'fermenting', updatedAt: new Date() }).where(eq(brews.id, brewId));

@@ -23,11 +23,10 @@ import {
   type UpdateInstrumentInput,
 } from '@shared/schemas/instruments';
 import { requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
-import type { DbOrTx } from '../db/client';
+import type { DbOrTx, Tx } from '../db/client';
 import { instrumentCalibrations, instruments, type InstrumentCalibrationRow, type InstrumentRow } from '../db/schema';
 import { rememberElevation } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
-import { asBadRequest } from './brewmath-errors';
 
 type InstrumentValues = Partial<Omit<InstrumentRow, 'id' | 'ownerId' | 'kind' | 'createdAt' | 'updatedAt'>>;
 
@@ -208,7 +207,7 @@ interface Worked {
   inputs: Record<string, unknown>;
   result: Record<string, unknown> | null;
   /** Written in the same transaction (the thermometer check remembers the elevation). */
-  also?: (tx: DbOrTx) => Promise<void>;
+  also?: (tx: Tx) => Promise<void>;
 }
 
 const kindArticle = (kind: InstrumentKind) => (kind === 'hydrometer' ? 'a hydrometer' : `a ${instrumentKindLabels[kind].toLowerCase()}`);
@@ -228,7 +227,7 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
         }
         calibrationTempC = hydrometer.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C;
       }
-      const result = asBadRequest(() => wcfCalibration({ pairs: body.pairs, hydrometerCalibrationTempC: calibrationTempC }));
+      const result = wcfCalibration({ pairs: body.pairs, hydrometerCalibrationTempC: calibrationTempC });
       return {
         values: { wcf: result.wcf, wcfSource: 'measured' },
         inputs: { pairs: body.pairs, hydrometerId: body.hydrometerId ?? null, hydrometerCalibrationTempC: calibrationTempC },
@@ -236,7 +235,7 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
       };
     }
     case 'thermometer-check': {
-      const result = asBadRequest(() => thermometerCheck(body));
+      const result = thermometerCheck(body);
       const elevationM = body.elevationM ?? null;
       return {
         values: { offsetC: result.offsetC, offsetCheckedOn: todayIso() },

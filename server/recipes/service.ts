@@ -19,7 +19,7 @@ import {
 import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
 import type { z } from 'zod';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
-import { checkShareTargets, diffShares } from '../lib/sharing';
+import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
 import type { DbOrTx, Tx } from '../db/client';
 import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, users, type RecipeRow } from '../db/schema';
 import { Conflict, NotFound } from '../lib/errors';
@@ -311,6 +311,7 @@ export async function setRecipeSharing(db: DbOrTx, actor: Actor, id: number, clu
   await loadRecipeForActor(db, actor, id, 'share');
   const unique = checkShareTargets(actor, clubIds);
   await db.transaction(async (tx) => {
+    await lockShareTargets(tx, actor.id, unique);
     const existing = await tx.select({ clubId: recipeClubShares.clubId }).from(recipeClubShares).where(eq(recipeClubShares.recipeId, id));
     const { gone, added } = diffShares(existing.map((e) => e.clubId), unique);
     if (gone.length > 0) await tx.delete(recipeClubShares).where(and(eq(recipeClubShares.recipeId, id), inArray(recipeClubShares.clubId, gone)));
