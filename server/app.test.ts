@@ -1,10 +1,11 @@
 import net from 'node:net';
 import request from 'supertest';
-import { beforeAll, describe, expect, inject, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it, vi } from 'vitest';
 import { createApp } from './app';
 import { createDb } from './db/client';
 import { loadEnv } from './env';
 import { createHarness, type TestHarness } from '../tests/support/api';
+import { makeScene } from './brews/test-scene';
 
 let h: TestHarness;
 beforeAll(async () => {
@@ -103,6 +104,55 @@ describe('GET /api/health when MariaDB goes away and comes back', () => {
 
     relay = await startRelay({ host: real.hostname, port: Number(real.port) }, port);
     expect((await request(app).get('/api/health')).body).toEqual({ status: 'ok', db: 'up' });
+    await pool.end();
+    await relay.cut();
+  });
+});
+
+describe('the API while MariaDB is away', () => {
+  it('answers 503 unavailable with Retry-After (one log line each), loses nothing acknowledged, and recovers', async () => {
+    const real = new URL(inject('databaseUrl'));
+    let relay = await startRelay({ host: real.hostname, port: Number(real.port) });
+    const url = new URL(real);
+    url.port = String(relay.port);
+    const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: url.toString(), AUTH_RATE_LIMIT_MAX: '10000' });
+    const { db, pool } = createDb(env.DATABASE_URL);
+    const app = createApp({ env, db, pool, mailer: h.ctx.mailer });
+    const scene = await makeScene(h);
+    const agent = request.agent(app);
+    await agent.post('/api/auth/login').send({ email: scene.owner.user.email, password: scene.owner.user.password }).expect(200);
+    const start = await agent.post('/api/brews').send({ recipeId: scene.recipeId }).expect(201);
+    const brewId = start.body.id as number;
+    const warn = vi.spyOn(console, 'warn').mockImplementation(() => {});
+
+    // Readings under load; the database goes away in the middle of them.
+    const port = relay.port;
+    const load = Array.from({ length: 30 }, (_, i) =>
+      new Promise((r) => setTimeout(r, i * 5)).then(() => agent.post(`/api/brews/${brewId}/readings`).send({ kind: 'mash_temp', tempC: 60 + (i % 10) })),
+    );
+    await new Promise((r) => setTimeout(r, 40));
+    await relay.cut();
+    const during = await Promise.all(load);
+    for (const r of during) expect([201, 503]).toContain(r.status);
+
+    const down = await Promise.all([agent.get(`/api/brews/${brewId}`), agent.post(`/api/brews/${brewId}/notes`).send({ body: 'Lid on.' }), agent.get('/api/recipes')]);
+    for (const r of down) {
+      expect(r.status).toBe(503);
+      expect(r.headers['retry-after']).toMatch(/^\d+$/);
+      expect(r.body).toMatchObject({ error: 'unavailable' });
+    }
+    const lines = warn.mock.calls.map((c) => String(c[0]));
+    expect(lines.length).toBeGreaterThanOrEqual(3);
+    for (const line of lines) expect(line).toMatch(/^503 \w+ \/api\/.*database unavailable \(.+\)$/);
+    warn.mockRestore();
+
+    relay = await startRelay({ host: real.hostname, port: Number(real.port) }, port);
+    const back = await agent.get(`/api/brews/${brewId}`);
+    expect(back.status).toBe(200);
+    // Every reading that was acknowledged is stored.
+    const acknowledged = during.filter((r) => r.status === 201).map((r) => r.body.id as number);
+    const stored = new Set(back.body.readings.map((r: { id: number }) => r.id));
+    expect(acknowledged.filter((id) => !stored.has(id))).toEqual([]);
     await pool.end();
     await relay.cut();
   });
