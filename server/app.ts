@@ -15,6 +15,7 @@ import { fermentationRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
+import { idempotency } from './lib/idempotency';
 import { passwordResetRouter } from './password-reset/router';
 import { recipesRouter } from './recipes/router';
 import { reviewsRouter } from './reviews/router';
@@ -36,6 +37,7 @@ export function createApp(ctx: AppContext) {
   api.use('/health', healthRouter(pool));
   api.use('/calc', calcRouter(env));
   api.use(loadUser(db, env));
+  api.use(idempotency(db));
   api.use('/auth/password-reset', passwordResetRouter(ctx));
   api.use('/auth', authRouter(db, env));
   api.use('/clubs', clubsRouter(ctx));

@@ -14,10 +14,15 @@ export class ApiError extends Error {
   }
 }
 
-/** The request never reached the server or no answer came back: nothing was saved. */
+export const OFFLINE_MESSAGE = 'Can’t reach the server, what you typed is kept. Try again in a moment.';
+
+/**
+ * The request never reached the server, no answer came back, or the server said it cannot reach
+ * its database (503): nothing was saved, and trying again is safe.
+ */
 export class NetworkError extends Error {
-  constructor() {
-    super('No connection to Wortwise: nothing was saved. Check the connection and try again.');
+  constructor(readonly retryAfterSeconds: number | null = null) {
+    super(OFFLINE_MESSAGE);
     this.name = 'NetworkError';
   }
 }
@@ -44,6 +49,10 @@ async function request<T>(method: Method, url: string, body?: unknown, init: Req
   } catch (error) {
     if ((error as Error).name === 'AbortError') throw error;
     throw new NetworkError();
+  }
+  if (res.status === 503) {
+    const retryAfter = Number(res.headers.get('Retry-After'));
+    throw new NetworkError(Number.isFinite(retryAfter) && retryAfter > 0 ? retryAfter : null);
   }
   if (res.status === 204) return undefined as T;
   const text = await res.text();

@@ -1,6 +1,7 @@
 import type { FormikErrors, FormikHelpers } from 'formik';
 import type { z } from 'zod';
 import { ApiError } from './api-client';
+import { toSaveFailure } from './save-failure';
 
 /**
  * Formik validation from a shared zod schema: the same messages the API would send back.
@@ -30,14 +31,12 @@ function setIn(target: Record<string, unknown>, path: string[], message: string)
   node[path[path.length - 1]] ??= message;
 }
 
-/** Puts an API error's per-field messages on the form, and its message in `status`. */
+/** Puts an API error's per-field messages on the form, and the failure (a SaveFailure) in `status`. */
 export function applyApiError<V>(error: unknown, helpers: Pick<FormikHelpers<V>, 'setErrors' | 'setStatus'>) {
   if (error instanceof ApiError) {
     const errors: Record<string, unknown> = {};
     for (const [key, message] of Object.entries(error.fields)) setIn(errors, key.split('.'), message);
     helpers.setErrors(errors as FormikErrors<V>);
-    helpers.setStatus(error.message);
-  } else {
-    helpers.setStatus((error as Error).message);
   }
+  helpers.setStatus(toSaveFailure(error));
 }

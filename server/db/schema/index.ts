@@ -7,3 +7,5 @@ export * from './brews';
 export * from './instruments';
 export * from './fermentation';
 export * from './comments';
+export * from './idempotency';
+export * from './sessions';

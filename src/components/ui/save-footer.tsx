@@ -1,10 +1,10 @@
 import type { ReactNode } from 'react';
 import { Button } from './button';
-import { Notice } from './notice';
+import { SaveNotice } from './save-notice';
 
 interface SaveFooterProps {
-  /** The error from the last save, if it failed; what was typed stays in the form. */
-  status?: string | null;
+  /** The last save's SaveFailure (the Formik status), if it failed; what was typed stays in the form. */
+  status?: unknown;
   /** Tells the brewer nothing typed was lost. */
   keptNote?: string;
   submitLabel: ReactNode;
@@ -14,14 +14,10 @@ interface SaveFooterProps {
 }
 
 /** A form's last lines: why the save failed (nothing typed is lost), then save and cancel. */
-export function SaveFooter({ status, keptNote = 'What you entered is still here: try again.', submitLabel, busy, disabled, onCancel }: SaveFooterProps) {
+export function SaveFooter({ status, keptNote, submitLabel, busy, disabled, onCancel }: SaveFooterProps) {
   return (
     <>
-      {status && (
-        <Notice tone="error" title="Not saved">
-          {status} {keptNote}
-        </Notice>
-      )}
+      <SaveNotice failure={status} keptNote={keptNote} />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" busy={busy} disabled={disabled}>
           {submitLabel}

@@ -6,6 +6,7 @@ import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useRequestPasswordReset } from '../api/request-password-reset';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export function ForgotPasswordForm() {
   const request = useRequestPasswordReset();
@@ -25,7 +26,7 @@ export function ForgotPasswordForm() {
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} keptNote="" />
           {done && (
             <Notice tone="success" title="Check your e-mail">
               {done}

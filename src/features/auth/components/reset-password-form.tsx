@@ -1,10 +1,10 @@
 import { Form, Formik } from 'formik';
 import { passwordResetFormSchema, type PasswordResetFormInput } from '@shared/schemas/password-reset';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useResetPassword } from '../api/reset-password';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
   const reset = useResetPassword(token);
@@ -24,7 +24,7 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} keptNote="" />
           <TextField name="password" type="password" label="New password" autoComplete="new-password" hint="At least 10 characters." />
           <TextField name="confirm" type="password" label="New password again" autoComplete="new-password" />
           <p className="text-sm text-ink-faint">Saving signs you out on every other device.</p>

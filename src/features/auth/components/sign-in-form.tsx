@@ -2,10 +2,10 @@ import { Form, Formik } from 'formik';
 import { Link } from 'react-router';
 import { loginSchema, type LoginInput } from '@shared/schemas/auth';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useLogin } from '../api/login';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export function SignInForm({ onSignedIn, initialEmail = '' }: { onSignedIn: () => void; initialEmail?: string }) {
   const login = useLogin();
@@ -25,7 +25,7 @@ export function SignInForm({ onSignedIn, initialEmail = '' }: { onSignedIn: () =
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} keptNote="" />
           <TextField name="email" type="email" label="E-mail" autoComplete="email" inputMode="email" />
           <TextField name="password" type="password" label="Password" autoComplete="current-password" />
           <Button type="submit" busy={isSubmitting} className="w-full">

@@ -1,10 +1,10 @@
 import { Form, Formik } from 'formik';
 import { signupSchema, type SignupInput } from '@shared/schemas/auth';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useSignup } from '../api/signup';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
   const signup = useSignup();
@@ -24,7 +24,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: () => void }) {
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} keptNote="" />
           <TextField name="displayName" label="Your name" autoComplete="name" hint="Shown to your club's mentors." />
           <TextField name="email" type="email" label="E-mail" autoComplete="email" inputMode="email" />
           <TextField name="password" type="password" label="Password" autoComplete="new-password" hint="At least 10 characters." />

@@ -1,20 +1,10 @@
-import { RotateCcw } from 'lucide-react';
-import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
+import { SaveNotice } from '@/components/ui/save-notice';
+import { OFFLINE_MESSAGE } from '@/lib/api-client';
 
 /**
- * Shown when a save never reached the server: what the brewer typed stays in the form, and one
- * big button sends it again.
+ * Shown when a save never reached the server: what the brewer typed stays in the form, and the
+ * shared save notice offers to send it again.
  */
 export function NotSaved({ onRetry, busy }: { onRetry: () => void; busy?: boolean }) {
-  return (
-    <div className="space-y-2">
-      <Notice tone="error" title="Not saved — no connection">
-        Everything you typed is still here. Check the connection, then try again.
-      </Notice>
-      <Button variant="primary" className="w-full" busy={busy} icon={<RotateCcw aria-hidden className="size-5" />} onClick={onRetry}>
-        Retry
-      </Button>
-    </div>
-  );
+  return <SaveNotice failure={{ kind: 'offline', message: OFFLINE_MESSAGE }} busy={busy} onRetry={onRetry} />;
 }

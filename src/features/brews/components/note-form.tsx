@@ -7,6 +7,7 @@ import { NetworkError } from '@/lib/api-client';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useAddNote } from '../api/add-note';
 import { NotSaved } from './not-saved';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 /** A free note in the log, tied to the stage it was written in. */
 export function NoteForm({ brewId, stage }: { brewId: number; stage: BrewStage | null }) {
@@ -49,7 +50,7 @@ export function NoteForm({ brewId, stage }: { brewId: number; stage: BrewStage |
               {errors.body}
             </p>
           )}
-          {typeof status === 'string' && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           {offline ? (
             <NotSaved busy={isSubmitting} onRetry={() => void submitForm()} />
           ) : (

@@ -21,6 +21,7 @@ import { useUnits, type Units } from '@/lib/units';
 import { useAddReading } from '../api/add-reading';
 import { NotSaved } from './not-saved';
 import { NumberField } from '@/components/ui/number-field';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 type NumberValue = number | '' | null;
 
@@ -147,7 +148,7 @@ export function ReadingForm({ brewId, kinds, instruments, onSaved }: ReadingForm
       {({ isSubmitting, status, submitForm }) => (
         <Form noValidate aria-label="New reading" className="space-y-4">
           <Fields kinds={kinds} instruments={instruments} />
-          {typeof status === 'string' && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           {offline ? (
             <NotSaved busy={isSubmitting} onRetry={() => void submitForm()} />
           ) : (

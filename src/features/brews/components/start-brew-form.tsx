@@ -1,12 +1,10 @@
 import { Field, Form, Formik } from 'formik';
 import { startBrewSchema, type BrewDetail } from '@shared/schemas/brews';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
-import { NetworkError } from '@/lib/api-client';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useStartBrew } from '../api/start-brew';
-import { NotSaved } from './not-saved';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export interface RecipeChoice {
   id: number;
@@ -47,8 +45,7 @@ export function StartBrewForm({ recipes, onStarted }: { recipes: readonly Recipe
         try {
           onStarted(await start.mutateAsync(startBrewSchema.parse(toInput(values))));
         } catch (error) {
-          if (error instanceof NetworkError) helpers.setStatus({ offline: true });
-          else applyApiError(error, helpers);
+          applyApiError(error, helpers);
         }
       }}
     >
@@ -73,14 +70,10 @@ export function StartBrewForm({ recipes, onStarted }: { recipes: readonly Recipe
             <TextField name="name" label="Name (optional)" hint="The recipe’s name if left empty." />
             <TextField name="brewedOn" type="date" label="Brew date" />
           </div>
-          {typeof status === 'string' && <Notice tone="error">{status}</Notice>}
-          {status?.offline ? (
-            <NotSaved busy={isSubmitting} onRetry={() => void submitForm()} />
-          ) : (
-            <Button type="submit" busy={isSubmitting} className="w-full sm:w-auto">
-              Start the brew day
-            </Button>
-          )}
+          <SaveNotice failure={status} busy={isSubmitting} onRetry={() => void submitForm()} />
+          <Button type="submit" busy={isSubmitting} className="w-full sm:w-auto">
+            Start the brew day
+          </Button>
         </Form>
       )}
     </Formik>

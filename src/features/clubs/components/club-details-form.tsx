@@ -1,11 +1,11 @@
 import { Form, Formik } from 'formik';
 import { updateClubSchema, type ClubDetail } from '@shared/schemas/clubs';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useUpdateClub } from '../api/update-club';
 import { TextAreaField } from '@/components/ui/text-area-field';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 /** Organisers rename the club and change its description. */
 export function ClubDetailsForm({ club, onDone }: { club: ClubDetail; onDone: () => void }) {
@@ -26,7 +26,7 @@ export function ClubDetailsForm({ club, onDone }: { club: ClubDetail; onDone: ()
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           <TextField name="name" label="Club name" autoComplete="off" />
           <TextAreaField name="description" label="About the club" />
           <div className="flex flex-wrap gap-2">

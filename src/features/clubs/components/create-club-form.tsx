@@ -1,11 +1,11 @@
 import { Form, Formik } from 'formik';
 import { createClubSchema, type ClubDetail, type CreateClubInput } from '@shared/schemas/clubs';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useCreateClub } from '../api/create-club';
 import { TextAreaField } from '@/components/ui/text-area-field';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export function CreateClubForm({ onCreated }: { onCreated: (club: ClubDetail) => void }) {
   const create = useCreateClub();
@@ -25,7 +25,7 @@ export function CreateClubForm({ onCreated }: { onCreated: (club: ClubDetail) =>
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           <TextField name="name" label="Club name" autoComplete="off" />
           <TextAreaField name="description" label="About the club (optional)" hint="Where and when you meet, what you brew." />
           <Button type="submit" busy={isSubmitting}>

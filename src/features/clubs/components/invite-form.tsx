@@ -8,6 +8,7 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import { useInviteMember } from '../api/invite-member';
 import { RoleField } from './role-select';
 import { roleHints, formatDay } from './role-words';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export function InviteForm({ clubId }: { clubId: number }) {
   const invite = useInviteMember(clubId);
@@ -29,7 +30,7 @@ export function InviteForm({ clubId }: { clubId: number }) {
     >
       {({ isSubmitting, status, values }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           {sent &&
             (sent.mailSent ? (
               <Notice tone="success">

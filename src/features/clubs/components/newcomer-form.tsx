@@ -1,9 +1,9 @@
 import { Form, Formik } from 'formik';
 import { newcomerSchema, type NewcomerInput } from '@shared/schemas/clubs';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 /**
  * Creates the account for the invited address and joins the club, in one step. The page owns the
@@ -25,7 +25,7 @@ export function NewcomerForm({ email, clubName, onSubmit }: { email: string; clu
     >
       {({ isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
-          {status && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           <div>
             <p className="mb-1 text-sm font-semibold text-ink-soft">E-mail</p>
             <p className="break-all text-ink">{email}</p>

@@ -14,11 +14,11 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
-import { NetworkError } from '@/lib/api-client';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useUnits } from '@/lib/units';
 import { useRecordPackaging } from '../api/packaging';
 import { fromLocalInput, toLocalInput, verdictTitles } from './words';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 interface Values {
   container: PackagingContainer;
@@ -77,7 +77,6 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
           await record.mutateAsync(toInput(values));
         } catch (error) {
           applyApiError(error, helpers);
-          if (error instanceof NetworkError) helpers.setStatus({ retry: true, message: error.message });
         }
       }}
     >
@@ -116,16 +115,7 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
               {values.override && <TextField name="overrideReason" label="Why? (your club mentor will see this)" maxLength={500} />}
             </div>
           )}
-          {status && (
-            <Notice tone="error" title="Not saved">
-              <p>{typeof status === 'string' ? status : status.message}</p>
-              {typeof status === 'object' && status.retry && (
-                <Button variant="secondary" className="mt-2" onClick={() => void submitForm()}>
-                  Try again
-                </Button>
-              )}
-            </Notice>
-          )}
+          <SaveNotice failure={status} busy={isSubmitting} onRetry={() => void submitForm()} />
           <Button type="submit" busy={isSubmitting} variant={stable ? 'primary' : 'danger'} className="w-full sm:w-auto">
             {stable ? 'Record packaging' : 'Record packaging anyway'}
           </Button>

@@ -7,12 +7,12 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
-import { NetworkError } from '@/lib/api-client';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useUnits } from '@/lib/units';
 import { useAddFermentationReading } from '../api/add-reading';
 import { useMyInstruments } from '../api/list-instruments';
 import { dayLabel, fromLocalInput, methodLabels, toLocalInput } from './words';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 interface Values {
   method: FermentationMethod;
@@ -87,7 +87,6 @@ export function ReadingForm({ brewId, og, pitchedAt }: { brewId: number; og: num
           });
         } catch (error) {
           applyApiError(error, helpers);
-          if (error instanceof NetworkError) helpers.setStatus({ retry: true, message: error.message });
         }
       }}
     >
@@ -98,16 +97,7 @@ export function ReadingForm({ brewId, og, pitchedAt }: { brewId: number; og: num
           <MethodFields og={og} />
           <TextField name="takenAt" type="datetime-local" label="Taken at" />
           <TextField name="note" label="Note (optional)" maxLength={500} />
-          {status && (
-            <Notice tone="error" title="Not saved">
-              <p>{typeof status === 'string' ? status : status.message}</p>
-              {typeof status === 'object' && status.retry && (
-                <Button variant="secondary" className="mt-2" onClick={() => void submitForm()}>
-                  Try again
-                </Button>
-              )}
-            </Notice>
-          )}
+          <SaveNotice failure={status} busy={isSubmitting} onRetry={() => void submitForm()} />
           {saved && <Notice tone="success">{saved}</Notice>}
           <Button type="submit" busy={isSubmitting} className="w-full sm:w-auto">
             Save reading

@@ -5,6 +5,7 @@ import { boilOffRateLPerHour, BrewMathError } from '@shared/brewmath';
 import { equipmentProfileInputSchema, type EquipmentProfile, type EquipmentProfileInput } from '@shared/schemas/instruments';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { SaveNotice } from '@/components/ui/save-notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -144,7 +145,6 @@ function KettleForm({ units, saveLabel, justSaved }: { units: Units; saveLabel: 
   }, [measured, values.boilOffLPerHour, setFieldValue]);
 
   const saved = justSaved && !dirty;
-  const errorStatus = typeof status === 'string' ? status : null;
   return (
     <Form noValidate className="space-y-4">
       <TextField name="name" label="Name" />
@@ -194,11 +194,7 @@ function KettleForm({ units, saveLabel, justSaved }: { units: Units; saveLabel: 
         <NumberField name="coolingShrinkage" label="Cooling shrinkage" unit="%" scale={100} hint="About 4 % is usual." />
         <NumberField name="elevationM" label="Elevation" unit={us ? 'ft' : 'm'} scale={us ? 1 / M_PER_FT : 1} />
       </div>
-      {errorStatus && (
-        <Notice tone="error" title="Not saved">
-          {errorStatus} What you entered is still here: try again.
-        </Notice>
-      )}
+      <SaveNotice failure={status} />
       {saved && <Notice tone="success">Saved. New brew days start from it.</Notice>}
       <Button type="submit" busy={isSubmitting}>
         {saveLabel}

@@ -16,6 +16,7 @@ import { PhCalibration } from './ph-calibration';
 import { SettingsForm } from './settings-form';
 import { ThermometerCheck } from './thermometer-check';
 import { WcfCalibration } from './wcf-calibration';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 export const kindIcons: Record<InstrumentKind, LucideIcon> = {
   hydrometer: TestTube,
@@ -195,11 +196,7 @@ function EditForm({ instrument, onDone }: { instrument: Instrument; onDone: () =
         <Form noValidate className="space-y-3">
           <TextField name="name" label="Name" />
           <TextField name="notes" label="Notes (optional)" />
-          {status && (
-            <Notice tone="error" title="Not saved">
-              {status}
-            </Notice>
-          )}
+          <SaveNotice failure={status} />
           <div className="flex flex-wrap gap-2">
             <Button type="submit" busy={isSubmitting}>
               Save

@@ -130,14 +130,14 @@ describe('RecipeForm validation', { timeout: 30_000 }, () => {
     await fill('Name', 'Pilsner malt', fermentable);
     await fill('Amount', '4.5', fermentable);
     await userEvent.click(screen.getByRole('button', { name: 'Create recipe' }));
-    await screen.findByText(/No connection to Wortwise: nothing was saved/);
+    await screen.findByText(/Can’t reach the server, what you typed is kept/);
     expect(screen.getByLabelText('Recipe name')).toHaveValue('Kettle-side Saison');
     expect(within(fermentable).getByLabelText('Amount')).toHaveValue('4.5');
     expect(fetchSpy).toHaveBeenCalledTimes(1);
     const sent = JSON.parse(fetchSpy.mock.calls[0][1].body);
     expect(sent).toMatchObject({ name: 'Kettle-side Saison', batchVolumeL: 20, efficiency: 0.72, fermentables: [{ name: 'Pilsner malt', kind: 'grain', amountKg: 4.5, potentialPointsLPerKg: 300 }] });
 
-    await userEvent.click(screen.getByRole('button', { name: 'Try again' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Retry' }));
     await waitFor(() => expect(fetchSpy).toHaveBeenCalledTimes(2));
     expect(onSaved).not.toHaveBeenCalled();
   });

@@ -22,7 +22,8 @@ import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
-import { ApiError, NetworkError } from '@/lib/api-client';
+import { SaveNotice } from '@/components/ui/save-notice';
+import { toSaveFailure } from '@/lib/save-failure';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useUnits, type Units } from '@/lib/units';
 import { useCreateRecipe } from '../api/create-recipe';
@@ -35,11 +36,6 @@ import { emptyFermentable, emptyHop, emptyMashStep, newRecipeValues, toFormValue
 /** 1 point per pound per US gallon in points·L/kg: from the exact gallon and pound. */
 const PPG = LITRES_PER_US_GALLON / KG_PER_LB;
 
-type Status =
-  | { kind: 'conflict'; message: string }
-  | { kind: 'offline'; message: string }
-  | { kind: 'error'; message: string }
-  | undefined;
 
 interface RecipeFormProps {
   /** The recipe being edited; absent for a new one. */
@@ -75,19 +71,12 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
         try {
           onSaved(await save(values));
         } catch (error) {
-          if (error instanceof ApiError && error.status === 409) {
-            helpers.setStatus({ kind: 'conflict', message: error.message } satisfies Status);
-          } else if (error instanceof NetworkError) {
-            helpers.setStatus({ kind: 'offline', message: error.message } satisfies Status);
-          } else {
-            applyApiError(error, helpers);
-            helpers.setStatus({ kind: 'error', message: (error as Error).message } satisfies Status);
-          }
+          // Field messages under the inputs, and one SaveFailure (offline, conflict or error) in the status.
+          applyApiError(error, helpers);
         }
       }}
     >
       {({ isSubmitting, status, submitForm, resetForm, values, setStatus }) => {
-        const s = status as Status;
         async function loadLatest() {
           const latest = await queryClient.fetchQuery({ ...recipeQueryOptions(recipe!.id), staleTime: 0 });
           setVersion(latest.version);
@@ -98,7 +87,7 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
           try {
             onSaved(await save(values, true));
           } catch (error) {
-            setStatus({ kind: error instanceof NetworkError ? 'offline' : 'error', message: (error as Error).message } satisfies Status);
+            setStatus(toSaveFailure(error));
           }
         }
         return (
@@ -111,32 +100,23 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
             <MashAndFermentationSection />
 
             <div className="no-print sticky bottom-0 z-10 -mx-3 border-t border-cellar-100 bg-paper/95 px-3 py-3 backdrop-blur sm:-mx-6 sm:px-6">
-              {s?.kind === 'conflict' && (
-                <Notice tone="caution" title="Not saved: this recipe changed elsewhere" className="mb-3">
-                  <p>{s.message}</p>
-                  <div className="mt-2 flex flex-wrap gap-2">
+              <SaveNotice
+                className="mb-3"
+                failure={status}
+                busy={isSubmitting}
+                onRetry={() => void submitForm()}
+                conflictTitle="Not saved: this recipe changed elsewhere"
+                conflictActions={
+                  <>
                     <Button variant="secondary" icon={<RefreshCw aria-hidden className="size-5" />} onClick={() => void loadLatest()}>
                       Load the latest version
                     </Button>
                     <Button variant="secondary" icon={<Plus aria-hidden className="size-5" />} onClick={() => void saveAsNew()}>
                       Save mine as a new recipe
                     </Button>
-                  </div>
-                </Notice>
-              )}
-              {s?.kind === 'offline' && (
-                <Notice tone="error" title="Not saved" className="mb-3">
-                  <p>{s.message} Everything you typed is still here.</p>
-                  <Button variant="secondary" className="mt-2" icon={<RefreshCw aria-hidden className="size-5" />} onClick={() => void submitForm()}>
-                    Try again
-                  </Button>
-                </Notice>
-              )}
-              {s?.kind === 'error' && (
-                <Notice tone="error" className="mb-3">
-                  {s.message}
-                </Notice>
-              )}
+                  </>
+                }
+              />
               <FormErrorSummary />
               <Button type="submit" busy={isSubmitting} className="w-full sm:w-auto" icon={<Save aria-hidden className="size-5" />}>
                 {recipe ? 'Save recipe' : 'Create recipe'}

@@ -8,6 +8,7 @@ import { Notice } from '@/components/ui/notice';
 import { NetworkError } from '@/lib/api-client';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useAddComment } from '../api/add-comment';
+import { SaveNotice } from '@/components/ui/save-notice';
 
 const formSchema = z.object({ body: commentBodySchema });
 
@@ -81,7 +82,7 @@ export function CommentForm({
               {errors.body}
             </p>
           )}
-          {typeof status === 'string' && <Notice tone="error">{status}</Notice>}
+          <SaveNotice failure={status} />
           {offline && (
             <Notice tone="error" title="Not posted — no connection">
               Your comment is still here. Check the connection, then try again.
