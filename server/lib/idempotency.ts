@@ -47,7 +47,6 @@ export function idempotency(db: Db): RequestHandler {
     const request = `${req.method} ${req.originalUrl.split('?')[0]}`.slice(0, 300);
     const now = new Date();
 
-    let claimed = false;
     for (const deadline = Date.now() + WAIT_FOR_FIRST_MS; ; ) {
       const row = await findKey(db, userId, key);
       if (row && row.expiresAt.getTime() <= now.getTime()) {
@@ -68,14 +67,12 @@ export function idempotency(db: Db): RequestHandler {
       }
       try {
         await db.insert(idempotencyKeys).values({ userId, key, request, expiresAt: new Date(now.getTime() + IDEMPOTENCY_TTL_MS) });
-        claimed = true;
         break;
       } catch (error) {
         if (!isDuplicateKey(error)) throw error;
         // Another request with the key claimed it a moment ago: wait for its answer.
       }
     }
-    if (!claimed) return next();
     // Now and then, drop expired keys (any instance may do it).
     if (Math.random() < 0.01) void db.delete(idempotencyKeys).where(lt(idempotencyKeys.expiresAt, now)).catch(() => {});
 
