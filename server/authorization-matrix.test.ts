@@ -239,7 +239,7 @@ interface Case {
   freshAgent?: boolean;
   /** Runs before each person's call; its result is handed to `call`. */
   prepare?: () => Promise<number>;
-  call: (a: Agent, id: number) => request.Test;
+  call: (a: Agent, id: number) => request.Test | Promise<request.Response>;
   expected: Expected;
 }
 
@@ -269,6 +269,17 @@ const cases: Case[] = [
     expected: all(200),
   },
   { route: 'POST /api/auth/logout', isPublic: true, freshAgent: true, call: (a) => a.post('/api/auth/logout'), expected: all(204) },
+  {
+    route: 'POST /api/auth/logout-everywhere',
+    freshAgent: true,
+    call: async (a) => {
+      const res = await a.post('/api/auth/logout-everywhere');
+      // That signed this person out on every agent: sign the shared ones in again.
+      for (const who of people) if (who !== 'anonymous') scene.agents[who] = await h.signIn(scene.users[who].email);
+      return res;
+    },
+    expected: signedIn(204),
+  },
   { route: 'GET /api/auth/me', call: (a) => a.get('/api/auth/me'), expected: signedIn(200) },
   { route: 'PATCH /api/auth/me', call: (a) => a.patch('/api/auth/me').send({}), expected: signedIn(200) },
   {

@@ -7,7 +7,7 @@ import { users } from '../db/schema';
 import type { Env } from '../env';
 import { handle } from '../lib/handle';
 import { createUser, verifyLogin } from './service';
-import { clearSession, currentUser, issueSession, loadSessionUser, requireUser, toMe } from './session';
+import { clearSession, currentUser, issueSession, loadSessionUser, requireUser, revokeAllSessions, revokeSession, toMe } from './session';
 
 export function authRouter(db: Db, env: Env) {
   const router = Router();
@@ -42,7 +42,15 @@ export function authRouter(db: Db, env: Env) {
     }),
   );
 
-  router.post('/logout', (_req, res) => {
+  // Signing out revokes the session on the server too: a copy of the cookie stops working.
+  router.post('/logout', async (req, res) => {
+    await revokeSession(db, req);
+    clearSession(res, env);
+    res.status(204).end();
+  });
+
+  router.post('/logout-everywhere', requireUser, async (req, res) => {
+    await revokeAllSessions(db, currentUser(req).id);
     clearSession(res, env);
     res.status(204).end();
   });

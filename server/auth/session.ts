@@ -1,8 +1,9 @@
 import type { CookieOptions, NextFunction, Request, RequestHandler, Response } from 'express';
 import jwt from 'jsonwebtoken';
-import { eq } from 'drizzle-orm';
+import { createSecretKey, randomBytes, type KeyObject } from 'node:crypto';
+import { asc, eq, lt, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { clubMemberships, clubs, users, type User } from '../db/schema';
+import { clubMemberships, clubs, revokedSessions, users, type User } from '../db/schema';
 import type { Env } from '../env';
 import { Unauthorized } from '../lib/errors';
 import type { Actor } from './permissions';
@@ -26,8 +27,18 @@ declare module 'express-serve-static-core' {
 }
 
 interface TokenPayload {
-  sub: string;
-  tv: number;
+  sub?: unknown;
+  tv?: unknown;
+  /** This device's session id: signing out here revokes only it. */
+  sid?: unknown;
+  exp?: number;
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    /** The signed-in session (id and expiry), for signing out this device. */
+    session?: { id: string | null; expiresAt: Date };
+  }
 }
 
 function cookieOptions(env: Env): CookieOptions {
@@ -40,8 +51,19 @@ function cookieOptions(env: Env): CookieOptions {
   };
 }
 
+// One KeyObject per secret, made once: jsonwebtoken given a string tries it as a PEM key first on every call.
+const keys = new Map<string, KeyObject>();
+function sessionKey(env: Env): KeyObject {
+  let key = keys.get(env.JWT_SECRET);
+  if (!key) {
+    key = createSecretKey(Buffer.from(env.JWT_SECRET, 'utf8'));
+    keys.set(env.JWT_SECRET, key);
+  }
+  return key;
+}
+
 export function issueSession(res: Response, env: Env, user: Pick<User, 'id' | 'tokenVersion'>) {
-  const token = jwt.sign({ tv: user.tokenVersion } satisfies Omit<TokenPayload, 'sub'>, env.JWT_SECRET, {
+  const token = jwt.sign({ tv: user.tokenVersion, sid: randomBytes(16).toString('base64url') }, sessionKey(env), {
     subject: String(user.id),
     expiresIn: `${SESSION_DAYS}d`,
     algorithm: 'HS256',
@@ -54,15 +76,37 @@ export function clearSession(res: Response, env: Env) {
   res.clearCookie(SESSION_COOKIE, options);
 }
 
-export async function loadSessionUser(db: Db, userId: number): Promise<SessionUser | null> {
-  const [user] = await db.select().from(users).where(eq(users.id, userId));
+/**
+ * The user, their clubs and (given a session id) whether that session was signed out, in one
+ * query, without the password hash.
+ */
+async function loadSessionRows(db: Db, userId: number, sessionId: string | null) {
+  return db
+    .select({
+      id: users.id,
+      email: users.email,
+      displayName: users.displayName,
+      unitSystem: users.unitSystem,
+      gravityUnit: users.gravityUnit,
+      siteRole: users.siteRole,
+      tokenVersion: users.tokenVersion,
+      clubId: clubs.id,
+      clubName: clubs.name,
+      role: clubMemberships.role,
+      revoked: sessionId === null ? sql<number>`0` : sql<number>`exists(select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${sessionId})`,
+    })
+    .from(users)
+    .leftJoin(clubMemberships, eq(clubMemberships.userId, users.id))
+    .leftJoin(clubs, eq(clubs.id, clubMemberships.clubId))
+    .where(eq(users.id, userId))
+    .orderBy(asc(clubs.name));
+}
+
+function toSessionUser(rows: Awaited<ReturnType<typeof loadSessionRows>>): SessionUser | null {
+  const [user] = rows;
   if (!user) return null;
-  const rows = await db
-    .select({ id: clubs.id, name: clubs.name, role: clubMemberships.role })
-    .from(clubMemberships)
-    .innerJoin(clubs, eq(clubs.id, clubMemberships.clubId))
-    .where(eq(clubMemberships.userId, userId))
-    .orderBy(clubs.name);
+  const memberRows = rows.filter((r) => r.clubId !== null && r.role !== null);
+  const clubList = memberRows.map((r) => ({ id: r.clubId!, name: r.clubName!, role: r.role! }));
   return {
     id: user.id,
     email: user.email,
@@ -70,14 +114,22 @@ export async function loadSessionUser(db: Db, userId: number): Promise<SessionUs
     unitSystem: user.unitSystem,
     gravityUnit: user.gravityUnit,
     siteRole: user.siteRole,
-    clubs: rows,
-    memberships: rows.map((r) => ({ clubId: r.id, role: r.role })),
+    clubs: clubList,
+    memberships: clubList.map((c) => ({ clubId: c.id, role: c.role })),
   };
 }
 
+export async function loadSessionUser(db: Db, userId: number): Promise<SessionUser | null> {
+  return toSessionUser(await loadSessionRows(db, userId, null));
+}
+
+const SESSION_ID = /^[A-Za-z0-9_-]{22}$/;
+
 /**
- * Reads the signed cookie and loads the user. The token carries only the id and a version, so
- * the API keeps no session state: any instance can serve any request.
+ * Reads the signed cookie and loads the user. The token carries the id, a version (bumped to
+ * sign out everywhere) and a session id (listed when this device signs out), so any instance can
+ * serve any request. A token that does not say who it is for is no session at all (401 where
+ * one is needed), never a 500.
  */
 export function loadUser(db: Db, env: Env): RequestHandler {
   return async (req: Request, res: Response, next: NextFunction) => {
@@ -86,19 +138,44 @@ export function loadUser(db: Db, env: Env): RequestHandler {
     if (typeof token !== 'string') return next();
     let payload: TokenPayload;
     try {
-      payload = jwt.verify(token, env.JWT_SECRET, { algorithms: ['HS256'] }) as TokenPayload;
+      payload = jwt.verify(token, sessionKey(env), { algorithms: ['HS256'] }) as TokenPayload;
     } catch {
       clearSession(res, env);
       return next();
     }
-    const [row] = await db.select({ tv: users.tokenVersion }).from(users).where(eq(users.id, Number(payload.sub)));
-    if (!row || row.tv !== payload.tv) {
+    const userId = typeof payload.sub === 'string' && /^[1-9]\d{0,9}$/.test(payload.sub) ? Number(payload.sub) : NaN;
+    const sessionId = typeof payload.sid === 'string' && SESSION_ID.test(payload.sid) ? payload.sid : null;
+    if (!Number.isSafeInteger(userId) || userId > 2_147_483_647 || typeof payload.tv !== 'number' || (payload.sid !== undefined && sessionId === null)) {
       clearSession(res, env);
       return next();
     }
-    req.user = await loadSessionUser(db, Number(payload.sub));
+    const rows = await loadSessionRows(db, userId, sessionId);
+    if (rows.length === 0 || rows[0].tokenVersion !== payload.tv || Number(rows[0].revoked) === 1) {
+      clearSession(res, env);
+      return next();
+    }
+    req.user = toSessionUser(rows);
+    req.session = { id: sessionId, expiresAt: new Date((payload.exp ?? Date.now() / 1000 + SESSION_DAYS * 86_400) * 1000) };
     next();
   };
+}
+
+/** Signs out this device: its session id is listed as revoked until the token would have expired. */
+export async function revokeSession(db: Db, req: Request) {
+  if (!req.user || !req.session) return;
+  if (req.session.id) {
+    await db.insert(revokedSessions).values({ sessionId: req.session.id, expiresAt: req.session.expiresAt }).onDuplicateKeyUpdate({ set: { expiresAt: req.session.expiresAt } });
+  } else {
+    // A token from before session ids: only a version bump can revoke it.
+    await revokeAllSessions(db, req.user.id);
+  }
+  // Now and then, forget revocations of tokens that have expired anyway.
+  if (Math.random() < 0.02) await db.delete(revokedSessions).where(lt(revokedSessions.expiresAt, new Date()));
+}
+
+/** Signs out every device: tokens carry the version they were issued with. */
+export async function revokeAllSessions(db: Db, userId: number) {
+  await db.update(users).set({ tokenVersion: sql`${users.tokenVersion} + 1` }).where(eq(users.id, userId));
 }
 
 export const requireUser: RequestHandler = (req, _res, next) => {
