@@ -22,7 +22,7 @@ describe('an account, on a phone-sized window', () => {
     expect(overflow).toBeLessThanOrEqual(0);
 
     await page.getByRole('button', { name: 'Account and units' }).click();
-    await page.getByRole('menuitem', { name: 'Sign out' }).click();
+    await page.getByRole('menuitem', { name: 'Sign out', exact: true }).click();
     await page.waitForURL(/\/sign-in/);
 
     await page.getByLabel('E-mail').fill(email);

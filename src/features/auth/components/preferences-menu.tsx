@@ -19,6 +19,7 @@ export function PreferencesMenu({ me, onSignedOut }: { me: Me; onSignedOut: () =
   const ref = useRef<HTMLDivElement>(null);
   const update = useUpdatePreferences();
   const logout = useLogout();
+  const logoutEverywhere = useLogout({ everywhere: true });
 
   useEffect(() => {
     if (!open) return;
@@ -75,6 +76,14 @@ export function PreferencesMenu({ me, onSignedOut }: { me: Me; onSignedOut: () =
             onClick={() => logout.mutate(undefined, { onSuccess: onSignedOut })}
           >
             <LogOut aria-hidden className="size-5" /> Sign out
+          </button>
+          <button
+            type="button"
+            role="menuitem"
+            className="flex min-h-touch w-full items-center gap-2 rounded-lg px-3 text-left hover:bg-cellar-50"
+            onClick={() => logoutEverywhere.mutate(undefined, { onSuccess: onSignedOut })}
+          >
+            <LogOut aria-hidden className="size-5" /> Sign out on every device
           </button>
         </div>
       )}
