@@ -8,6 +8,7 @@
  * the fermenter within 5 %, mash pH inside MASH_PH_BAND, pitch no warmer than the recipe's
  * fermentation range.
  */
+import type { FgState } from './brewmath/fermentation';
 import { sgToPlato } from './brewmath/gravity';
 import { MASH_PH_BAND } from './brewmath/mash';
 import { formatGravity, formatTemperature, formatVolume, type GravityUnit, type UnitSystem } from './brewmath/format';
@@ -305,14 +306,16 @@ export interface FermentationDeviationExcursion {
 
 export interface FermentationDeviationPackaging {
   packagedAt: string;
-  verdictState: 'too-early' | 'moving' | 'stable';
+  verdictState: FgState;
   verdictReason: string;
   overrideReason: string;
 }
 
 const verdictWords: Record<FermentationDeviationPackaging['verdictState'], string> = {
+  'no-reading': 'not yet read',
   'too-early': 'too early to tell',
   moving: 'still moving',
+  stuck: 'steady but well above the recipe FG (stuck)',
   stable: 'stable',
 };
 

@@ -44,11 +44,11 @@ describe('the fermentation log', () => {
   });
 
   // Common practice, no source: two hydrometer readings two days apart after day 12 that agree.
-  it('changes its verdict from too early to still moving to stable as readings come in', async () => {
+  it('changes its verdict from no reading to still moving to stable as readings come in', async () => {
     const s = await makeFermentationScene(h);
     const add = (day: number, sg: number) =>
       s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg, sampleTempC: 20, takenAt: s.day(day) });
-    expect((await add(3, 1.02)).body.log.verdict.state).toBe('too-early');
+    expect((await add(3, 1.02)).body.log.verdict.state).toBe('no-reading');
     expect((await add(12, 1.016)).body.log.verdict.state).toBe('too-early');
     const moving = await add(14, 1.012);
     expect(moving.body.log.verdict.state).toBe('moving');
@@ -66,7 +66,7 @@ describe('the fermentation log', () => {
       await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'refractometer', brix: 6, originalBrix: 12.4, takenAt: s.day(day) }).expect(201);
     }
     const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
-    expect(log.body.verdict).toMatchObject({ state: 'too-early', needsHydrometer: true });
+    expect(log.body.verdict).toMatchObject({ state: 'no-reading', needsHydrometer: true });
     expect(log.body.verdict.reason).toMatch(/hydrometer/);
   });
 
@@ -159,6 +159,72 @@ describe('who may see and write the log', () => {
       .send({ method: 'hydrometer', instrumentId: foreign.body.id, sg: 1.012, sampleTempC: 20 });
     expect(res.status).toBe(400);
     expect(res.body.fields.instrumentId).toMatch(/not found/);
+  });
+});
+
+// One API check per verdict state. The rule is common practice, no source: from day 12, the last
+// two hydrometer readings at least two days apart must be the same at the hydrometer's scale step,
+// with no steady fall over three readings, and not well above the recipe's FG (1.011 in this scene).
+describe('the final-gravity verdict, state by state', () => {
+  const hydrometerAt = (s: Awaited<ReturnType<typeof makeFermentationScene>>, day: number, sg: number, instrumentId?: number) =>
+    s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', instrumentId, sg, sampleTempC: 20, takenAt: s.day(day) });
+
+  it('too-early: day 5, before any check is worth taking', async () => {
+    const s = await makeFermentationScene(h, { pitchedDaysAgo: 5 });
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.verdict.state).toBe('too-early');
+    expect(log.body.verdict.reason).toMatch(/around day 12/);
+  });
+
+  it('no-reading: past day 12 with no hydrometer reading says so', async () => {
+    const s = await makeFermentationScene(h, { pitchedDaysAgo: 20 });
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.verdict.state).toBe('no-reading');
+    expect(log.body.verdict.reason).toMatch(/^No hydrometer reading since day 12 yet/);
+  });
+
+  it('moving: 1.012 then 1.011 three days apart is not the same figure', async () => {
+    const s = await makeFermentationScene(h);
+    await hydrometerAt(s, 14, 1.012).expect(201);
+    const res = await hydrometerAt(s, 17, 1.011).expect(201);
+    expect(res.body.log.verdict.state).toBe('moving');
+    expect(res.body.log.verdict.reason).toMatch(/^1\.012 on day 14 and 1\.011 on day 17, 3 days apart: the gravity fell by 0\.001/);
+  });
+
+  it('moving: a steady fall of 0.45 points a day on a 0.002 hydrometer (1.0128, 1.0119, 1.0110 on days 12, 14, 16)', async () => {
+    const s = await makeFermentationScene(h);
+    const coarse = await makeInstrument(s, { kind: 'hydrometer', name: 'Coarse hydrometer', calibrationTempC: 20, resolutionSg: 0.002 });
+    for (const [day, sg] of [
+      [12, 1.0128],
+      [14, 1.0119],
+    ]) {
+      await hydrometerAt(s, day, sg, coarse).expect(201);
+    }
+    const res = await hydrometerAt(s, 16, 1.011, coarse).expect(201);
+    expect(res.body.reading.instrument).toMatchObject({ resolutionSg: 0.002 });
+    expect(res.body.log.verdict.state).toBe('moving');
+    expect(res.body.log.verdict.reason).toMatch(/fell steadily/);
+  });
+
+  it('stuck: steady at 1.030 when the recipe expects 1.011, and packaging needs the override', async () => {
+    const s = await makeFermentationScene(h);
+    await hydrometerAt(s, 14, 1.03).expect(201);
+    const res = await hydrometerAt(s, 17, 1.03).expect(201);
+    expect(res.body.log.verdict.state).toBe('stuck');
+    expect(res.body.log.verdict.reason).toMatch(/steady, but 0\.019 above the 1\.011 this recipe should finish at/);
+    const refused = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/packaging`)
+      .send({ container: 'bottles', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'sucrose' });
+    expect(refused.status).toBe(409);
+    expect(refused.body.fields.override).toMatch(/^Stuck, not finished/);
+  });
+
+  it('stable: 1.012 on day 14 and 1.012 on day 17, and the message says what was compared', async () => {
+    const s = await makeFermentationScene(h);
+    await hydrometerAt(s, 14, 1.012).expect(201);
+    const res = await hydrometerAt(s, 17, 1.012).expect(201);
+    expect(res.body.log.verdict.state).toBe('stable');
+    expect(res.body.log.verdict.reason).toBe('1.012 on day 14 and 1.012 on day 17, 3 days apart: the same reading. Final gravity is stable.');
   });
 });
 

@@ -7,6 +7,7 @@ import { and, desc, eq, inArray, max } from 'drizzle-orm';
 import { thermometerCheck, wcfCalibration } from '@shared/instruments';
 import {
   DEFAULT_HYDROMETER_CALIBRATION_C,
+  DEFAULT_HYDROMETER_RESOLUTION_SG,
   DEFAULT_PH_REMINDER_DAYS,
   DEFAULT_PH_RESOLUTION,
   DEFAULT_WCF,
@@ -39,7 +40,12 @@ export function toSnapshot(row: InstrumentRow, calibrationId: number | null): In
   const base = { instrumentId: row.id, name: row.name, calibrationId };
   switch (row.kind) {
     case 'hydrometer':
-      return { ...base, kind: 'hydrometer', calibrationTempC: row.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C };
+      return {
+        ...base,
+        kind: 'hydrometer',
+        calibrationTempC: row.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C,
+        resolutionSg: row.resolutionSg ?? DEFAULT_HYDROMETER_RESOLUTION_SG,
+      };
     case 'refractometer':
       return { ...base, kind: 'refractometer', wcf: row.wcf ?? DEFAULT_WCF, wcfSource: row.wcfSource ?? 'default' };
     case 'thermometer':
@@ -65,6 +71,7 @@ export function toInstrument(row: InstrumentRow, calibrationId: number | null): 
     notes: row.notes ?? null,
     archived: row.archived,
     calibrationTempC: row.calibrationTempC ?? null,
+    resolutionSg: row.kind === 'hydrometer' ? (row.resolutionSg ?? DEFAULT_HYDROMETER_RESOLUTION_SG) : null,
     wcf: row.wcf ?? null,
     wcfSource: row.wcfSource ?? null,
     offsetC: row.offsetC ?? null,
@@ -147,7 +154,10 @@ export async function getInstrument(db: DbOrTx, actor: Actor, id: number): Promi
 function initialValues(input: CreateInstrumentInput): InstrumentValues {
   switch (input.kind) {
     case 'hydrometer':
-      return { calibrationTempC: input.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C };
+      return {
+        calibrationTempC: input.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C,
+        resolutionSg: input.resolutionSg ?? DEFAULT_HYDROMETER_RESOLUTION_SG,
+      };
     case 'refractometer':
       return input.wcf === undefined ? { wcf: DEFAULT_WCF, wcfSource: 'default' } : { wcf: input.wcf, wcfSource: 'entered' };
     case 'thermometer':
@@ -253,7 +263,7 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
       };
     case 'set': {
       const allowed = settableByKind[row.kind];
-      const given = (['calibrationTempC', 'wcf', 'offsetC', 'resolutionPh', 'reminderDays'] as const).filter((k) => body[k] !== undefined);
+      const given = (['calibrationTempC', 'resolutionSg', 'wcf', 'offsetC', 'resolutionPh', 'reminderDays'] as const).filter((k) => body[k] !== undefined);
       const fields: Record<string, string> = {};
       for (const key of given) if (!allowed.includes(key)) fields[key] = `${instrumentKindLabels[row.kind]}s have no such setting.`;
       if (given.length === 0) fields[allowed[0]] = 'Enter the new value.';

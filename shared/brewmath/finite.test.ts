@@ -54,7 +54,7 @@ const calls: Record<string, (n: number[]) => unknown> = {
         { at: new Date(c * 86_400_000), sg: d },
       ],
       new Date(0),
-      { toleranceSg: Math.abs(d - b) },
+      { resolutionSg: Math.abs(d - b), expectedFgSg: b },
     ),
   boilingPointC: ([a]) => math.boilingPointC(a),
   waterBoilingPointAtPressureC: ([a]) => math.waterBoilingPointAtPressureC(a * 1000),

@@ -7,6 +7,7 @@
 import { BrewMathError, brixToSg, correctHydrometer, hydrometerTempWarning, refractometerWithAlcoholSg } from '../brewmath';
 import {
   DEFAULT_HYDROMETER_CALIBRATION_C,
+  DEFAULT_HYDROMETER_RESOLUTION_SG,
   DEFAULT_PH_REMINDER_DAYS,
   DEFAULT_PH_RESOLUTION,
   DEFAULT_WCF,
@@ -218,7 +219,13 @@ export function defaultSnapshot(kind: InstrumentKind): InstrumentSnapshot {
   const base = { instrumentId: null, calibrationId: null } as const;
   switch (kind) {
     case 'hydrometer':
-      return { ...base, kind, name: 'Hydrometer (20 °C, assumed)', calibrationTempC: DEFAULT_HYDROMETER_CALIBRATION_C };
+      return {
+        ...base,
+        kind,
+        name: 'Hydrometer (20 °C, assumed)',
+        calibrationTempC: DEFAULT_HYDROMETER_CALIBRATION_C,
+        resolutionSg: DEFAULT_HYDROMETER_RESOLUTION_SG,
+      };
     case 'refractometer':
       return { ...base, kind, name: `Refractometer (factor ${DEFAULT_WCF}, assumed)`, wcf: DEFAULT_WCF, wcfSource: 'default' };
     case 'thermometer':

@@ -18,6 +18,8 @@ export const instruments = mysqlTable(
     notes: text('notes'),
     /** Hydrometer: the temperature at which it reads true, °C. */
     calibrationTempC: double('calibration_temp_c'),
+    /** Hydrometer: its smallest scale step in SG (0.001 on most brewing hydrometers); null reads as 0.001. */
+    resolutionSg: double('resolution_sg'),
     /** Refractometer: wort correction factor, and whether it is the default, typed in, or measured from pairs. */
     wcf: double('wcf'),
     wcfSource: mysqlEnum('wcf_source', wcfSources),

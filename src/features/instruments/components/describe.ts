@@ -48,7 +48,7 @@ export function headline(instrument: Instrument, units: Units): { value: string;
 export function snapshotSummary(s: InstrumentSnapshot, units: Units): string {
   switch (s.kind) {
     case 'hydrometer':
-      return `calibrated at ${units.format('temperature', s.calibrationTempC)}`;
+      return `calibrated at ${units.format('temperature', s.calibrationTempC)}, scale step ${s.resolutionSg ?? 0.001}`;
     case 'refractometer':
       return `factor ${s.wcf.toFixed(3)}${s.wcfSource === 'default' ? ' (default)' : ''}`;
     case 'thermometer':

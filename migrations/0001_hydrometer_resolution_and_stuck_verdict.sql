@@ -1,0 +1,2 @@
+ALTER TABLE `packaging_records` MODIFY COLUMN `verdict_state` enum('no-reading','too-early','moving','stuck','stable') NOT NULL;--> statement-breakpoint
+ALTER TABLE `instruments` ADD `resolution_sg` double;
