@@ -100,6 +100,8 @@ describe('the fermentation log', () => {
     ['a gravity of 1.5', () => ({ method: 'hydrometer', sg: 1.5, sampleTempC: 20 }), 'sg', /0.980 and 1.200/],
     ['a hot sample', () => ({ method: 'hydrometer', sg: 1.02, sampleTempC: 80 }), 'sampleTempC', /between 0 and 60 °C/],
     ['a Brix above the original', () => ({ method: 'refractometer', brix: 14, originalBrix: 12 }), 'brix', /only lowers it/],
+    // Terrill's cubic at 20 and 17 wort-corrected °Bx gives 1.1057, above the 1.0829 wort (worked by hand).
+    ['too small a Brix drop for the alcohol correction', () => ({ method: 'refractometer', brix: 17.68, originalBrix: 20.8 }), 'brix', /too early in fermentation.*1\.036–1\.106/],
     ['a fermenter at 90 °C', () => ({ method: 'thermometer', tempC: 90 }), 'tempC', /Check the thermometer/],
   ])('refuses a reading %s with a message under the field, and saves nothing', async (_what, body, field, message) => {
     const s = await makeFermentationScene(h);

@@ -56,6 +56,7 @@ const calls: Record<string, (n: number[]) => unknown> = {
       new Date(0),
       { resolutionSg: Math.abs(d - b), expectedFgSg: b },
     ),
+  fermentingRefractometerSg: ([a, b, c]) => math.fermentingRefractometerSg(a, b, c),
   boilingPointC: ([a]) => math.boilingPointC(a),
   waterBoilingPointAtPressureC: ([a]) => math.waterBoilingPointAtPressureC(a * 1000),
   thermometerBoilOffsetC: ([a, b]) => math.thermometerBoilOffsetC(a, b),

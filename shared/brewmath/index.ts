@@ -26,6 +26,10 @@ export {
   DEFAULT_WCF,
   wcfFromPairs,
   refractometerWithAlcoholSg,
+  fermentingRefractometerSg,
+  TERRILL_FIT_RANGE,
+  NO_DROP_BRIX,
+  type FermentingRefractometerEstimate,
   type BrixSgPair,
   type WcfEstimate,
 } from './refractometer';

@@ -4,7 +4,7 @@
  * and a corrected number stored can never disagree. The snapshot is the calibration at the
  * moment of the reading; see docs/decisions/0005-readings-keep-their-calibration.md.
  */
-import { BrewMathError, brixToSg, correctHydrometer, hydrometerTempWarning, refractometerWithAlcoholSg } from '../brewmath';
+import { BrewMathError, brixToSg, correctHydrometer, fermentingRefractometerSg, hydrometerTempWarning } from '../brewmath';
 import {
   DEFAULT_HYDROMETER_CALIBRATION_C,
   DEFAULT_HYDROMETER_RESOLUTION_SG,
@@ -49,7 +49,15 @@ export type Correction =
   | { kind: 'temperature'; calibrationTempC: number; sampleTempC: number }
   | { kind: 'wcf'; wcf: number }
   /** Alcohol-corrected estimate: S. Terrill (2011) cubic, with the original Brix. */
-  | { kind: 'wcf-alcohol'; wcf: number; originalBrix: number; formula: 'terrill-2011-cubic' }
+  | {
+      kind: 'wcf-alcohol';
+      wcf: number;
+      originalBrix: number;
+      /** 'unfermented': no drop from the original reading yet, so the plain conversion. */
+      formula: 'terrill-2011-cubic' | 'unfermented';
+      /** Outside the range the correction was fitted to (absent on readings stored before it was flagged). */
+      rough?: boolean;
+    }
   | { kind: 'offset'; offsetC: number }
   /** A pH meter corrects itself through its two-point calibration; we only record its state. */
   | { kind: 'ph-calibration'; calibratedOn: string | null; daysSinceCalibration: number | null; reminderDays: number };
@@ -128,13 +136,28 @@ function correctRefractometerReading(snapshot: RefractometerSnapshot, raw: Refra
       );
     }
     const originalBrix = requireNumber(raw.originalBrix, 'originalBrix', 'Original Brix reading');
-    const corrected = refractometerWithAlcoholSg(originalBrix, brix, wcf);
-    warnings.push(
-      'Alcohol skews a refractometer once fermentation starts: this is an alcohol-corrected estimate from the original Brix. Confirm the final gravity with a hydrometer before packaging.',
-    );
-    return { corrected, correction: { kind: 'wcf-alcohol', wcf, originalBrix, formula: 'terrill-2011-cubic' }, warnings };
+    const estimate = withField(() => fermentingRefractometerSg(originalBrix, brix, wcf), { currentBrix: 'brix' });
+    if (estimate.method === 'unfermented') {
+      warnings.push('No drop from the original reading yet, so nothing has fermented: this is the plain Brix-to-gravity conversion.');
+    } else {
+      warnings.push(
+        'Alcohol skews a refractometer once fermentation starts: this is an alcohol-corrected estimate from the original Brix. Confirm the final gravity with a hydrometer before packaging.',
+      );
+      if (estimate.roughReason) warnings.push(estimate.roughReason);
+    }
+    return { corrected: estimate.sg, correction: { kind: 'wcf-alcohol', wcf, originalBrix, formula: estimate.method, rough: estimate.rough }, warnings };
   }
   return { corrected: brixToSg(brix, wcf), correction: { kind: 'wcf', wcf }, warnings };
+}
+
+/** The math names its own parameters; a form names its fields. */
+function withField<T>(fn: () => T, fields: Record<string, string>): T {
+  try {
+    return fn();
+  } catch (error) {
+    if (error instanceof BrewMathError && error.field && fields[error.field]) throw new BrewMathError(error.message, error.code, fields[error.field]);
+    throw error;
+  }
 }
 
 function correctThermometerReading(snapshot: ThermometerSnapshot, raw: ThermometerRaw): CorrectedReading {

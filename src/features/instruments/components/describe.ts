@@ -68,7 +68,9 @@ export function correctionInWords(c: Correction, units: Units): string {
     case 'wcf':
       return `Brix ÷ ${c.wcf.toFixed(3)} (the wort correction factor), then the extract table.`;
     case 'wcf-alcohol':
-      return `Alcohol-corrected estimate (Terrill 2011) from ${c.originalBrix} °Bx before fermentation, factor ${c.wcf.toFixed(3)}.`;
+      return c.formula === 'unfermented'
+        ? `No drop from ${c.originalBrix} °Bx before fermentation yet: Brix ÷ ${c.wcf.toFixed(3)}, then the extract table.`
+        : `Alcohol-corrected estimate (Terrill 2011) from ${c.originalBrix} °Bx before fermentation, factor ${c.wcf.toFixed(3)}${c.rough ? ': rough, outside the range the correction was fitted to' : ''}.`;
     case 'offset':
       return c.offsetC === 0 ? 'No offset to take off.' : `${signedDelta(units, c.offsetC)} taken off: this thermometer reads ${c.offsetC > 0 ? 'high' : 'low'}.`;
     case 'ph-calibration':
