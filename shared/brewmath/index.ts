@@ -61,6 +61,7 @@ export {
   DEFAULT_COOLING_SHRINKAGE,
   DEFAULT_TOLERANCE_SG,
   MAX_EXTRA_BOIL_MINUTES,
+  KETTLE_HEADROOM_FRACTION,
   projectBoil,
   boilCorrection,
   boilOffRateLPerHour,

@@ -64,7 +64,7 @@ export function snapshotSummary(s: InstrumentSnapshot, units: Units): string {
 export function correctionInWords(c: Correction, units: Units): string {
   switch (c.kind) {
     case 'temperature':
-      return `Corrected from a sample at ${units.format('temperature', c.sampleTempC)} to the ${units.format('temperature', c.calibrationTempC)} calibration.`;
+      return `Corrected from a sample at ${units.format('temperature', c.sampleTempC)} to the ${units.format('temperature', c.calibrationTempC)} calibration, for wort, assuming it expands like water.`;
     case 'wcf':
       return `Brix ÷ ${c.wcf.toFixed(3)} (the wort correction factor), then the extract table.`;
     case 'wcf-alcohol':
