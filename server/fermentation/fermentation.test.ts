@@ -270,10 +270,11 @@ describe('packaging', () => {
     expect(res.status).toBe(201);
     // Residual CO2 at 20 °C (68 °F) from the quadratic in shared/brewmath/priming.ts (recalled from
     // memory): 3.0378 − 0.050062·68 + 0.00026555·68² = 0.8615 volumes. Sucrose: 342.30 g gives
-    // 4 × 44.01 g CO2 (stoichiometry), and one volume is 1.9635 g/L, so 3.818 g/L per volume:
-    // (2.5 − 0.8615) × 3.818 × 20 L = 125.1 g.
+    // 4 × 44.01 g CO2 (stoichiometry); CO2 is 1.977 g/L (CRC Handbook, recalled from memory) and
+    // yeast yields about 96 % of theory, so 1.977 × 342.30 / 176.04 / 0.96 = 4.004 g/L per volume:
+    // (2.5 − 0.8615) × 4.004 × 20 L = 131.2 g (worked by hand).
     expect(res.body.packaging.residualCo2Volumes).toBeCloseTo(0.8615, 3);
-    expect(res.body.packaging.primingSugarG).toBeCloseTo(125.1, 0);
+    expect(res.body.packaging.primingSugarG).toBeCloseTo(131.2, 0);
     expect(res.body.packaging).toMatchObject({ override: false, verdictState: 'stable' });
     await s.owner.agent.delete(`/api/brews/${s.brewId}/fermentation/packaging`).expect(200);
     const back = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);

@@ -110,7 +110,7 @@ export {
   type PrimingSugar,
   type PrimingInput,
 } from './priming';
-export { MASH_PH_TARGET, MASH_PH_BAND, mashPhStatus, type MashPhStatus } from './mash';
+export { MASH_PH_TARGET, MASH_PH_BAND, MASH_PH_TOLERANCE, mashPhStatus, mashPhVerdict, type MashPhStatus, type MashPhVerdict } from './mash';
 export {
   LITRES_PER_US_GALLON,
   KG_PER_LB,
