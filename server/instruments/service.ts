@@ -49,7 +49,13 @@ export function toSnapshot(row: InstrumentRow, calibrationId: number | null): In
     case 'refractometer':
       return { ...base, kind: 'refractometer', wcf: row.wcf ?? DEFAULT_WCF, wcfSource: row.wcfSource ?? 'default' };
     case 'thermometer':
-      return { ...base, kind: 'thermometer', offsetC: row.offsetC ?? 0, checkedOn: row.offsetCheckedOn ?? null };
+      return {
+        ...base,
+        kind: 'thermometer',
+        offsetC: row.offsetC ?? 0,
+        ...(row.offsetScale !== null && row.offsetScale !== 1 ? { scale: row.offsetScale } : {}),
+        checkedOn: row.offsetCheckedOn ?? null,
+      };
     case 'ph_meter':
       return {
         ...base,
@@ -249,7 +255,7 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
       const result = asBadRequest(() => thermometerCheck(body));
       const elevationM = body.elevationM ?? null;
       return {
-        values: { offsetC: result.offsetC, offsetCheckedOn: todayIso() },
+        values: { offsetC: result.offsetC, offsetScale: result.scale === 1 ? null : result.scale, offsetCheckedOn: todayIso() },
         inputs: { iceReadingC: body.iceReadingC ?? null, boilingReadingC: body.boilingReadingC ?? null, elevationM },
         result: { ...result },
         also: elevationM === null ? undefined : (tx) => rememberElevation(tx, actor.id, elevationM),
@@ -275,7 +281,11 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
         inputs[key] = body[key];
       }
       if (values.wcf !== undefined) values.wcfSource = 'entered';
-      if (values.offsetC !== undefined) values.offsetCheckedOn = todayIso();
+      if (values.offsetC !== undefined) {
+        values.offsetCheckedOn = todayIso();
+        // A typed-in offset is a one-point correction.
+        values.offsetScale = null;
+      }
       return { values, inputs, result: null };
     }
   }

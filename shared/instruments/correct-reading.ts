@@ -58,7 +58,8 @@ export type Correction =
       /** Outside the range the correction was fitted to (absent on readings stored before it was flagged). */
       rough?: boolean;
     }
-  | { kind: 'offset'; offsetC: number }
+  /** true = (reading − offsetC) × scale; scale is absent (1) for a one-point check. */
+  | { kind: 'offset'; offsetC: number; scale?: number }
   /** A pH meter corrects itself through its two-point calibration; we only record its state. */
   | { kind: 'ph-calibration'; calibratedOn: string | null; daysSinceCalibration: number | null; reminderDays: number };
 
@@ -175,7 +176,8 @@ function correctThermometerReading(snapshot: ThermometerSnapshot, raw: Thermomet
   if (snapshot.checkedOn === null && offsetC === 0) {
     warnings.push('This thermometer has not been checked yet. Built-in gauges and stick-on strips can be several degrees off: check it in an ice bath.');
   }
-  return { corrected: tempC - offsetC, correction: { kind: 'offset', offsetC }, warnings };
+  const scale = snapshot.scale ?? 1;
+  return { corrected: (tempC - offsetC) * scale, correction: scale === 1 ? { kind: 'offset', offsetC } : { kind: 'offset', offsetC, scale }, warnings };
 }
 
 const DAY_MS = 86_400_000;

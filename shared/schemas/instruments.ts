@@ -272,7 +272,14 @@ export const hydrometerSnapshotSchema = z.object({
   resolutionSg: z.number().optional(),
 });
 export const refractometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('refractometer'), wcf: z.number(), wcfSource: z.enum(wcfSources) });
-export const thermometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('thermometer'), offsetC: z.number(), checkedOn: z.string().nullable() });
+export const thermometerSnapshotSchema = z.object({
+  ...snapshotBase,
+  kind: z.literal('thermometer'),
+  offsetC: z.number(),
+  /** Two-point (ice and boil) correction: true = (reading − offsetC) × scale; absent means 1. */
+  scale: z.number().optional(),
+  checkedOn: z.string().nullable(),
+});
 export const phMeterSnapshotSchema = z.object({
   ...snapshotBase,
   kind: z.literal('ph_meter'),

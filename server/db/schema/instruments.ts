@@ -25,6 +25,8 @@ export const instruments = mysqlTable(
     wcfSource: mysqlEnum('wcf_source', wcfSources),
     /** Thermometer: how far it reads above (+) or below (−) true, °C, and when that was checked. */
     offsetC: double('offset_c'),
+    /** Thermometer: the two-point slope, true = (reading − offset) × scale; null is 1 (one-point check). */
+    offsetScale: double('offset_scale'),
     offsetCheckedOn: date('offset_checked_on', { mode: 'string' }),
     /** pH meter: display resolution, last two-point calibration, its buffers, and the reminder interval. */
     resolutionPh: double('resolution_ph'),

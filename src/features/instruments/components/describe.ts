@@ -72,6 +72,9 @@ export function correctionInWords(c: Correction, units: Units): string {
         ? `No drop from ${c.originalBrix} °Bx before fermentation yet: Brix ÷ ${c.wcf.toFixed(3)}, then the extract table.`
         : `Alcohol-corrected estimate (Terrill 2011) from ${c.originalBrix} °Bx before fermentation, factor ${c.wcf.toFixed(3)}${c.rough ? ': rough, outside the range the correction was fitted to' : ''}.`;
     case 'offset':
+      if (c.scale !== undefined && c.scale !== 1) {
+        return `Two-point correction from the ice and boiling checks: (reading − ${signedDelta(units, c.offsetC)}) × ${c.scale.toFixed(4)}.`;
+      }
       return c.offsetC === 0 ? 'No offset to take off.' : `${signedDelta(units, c.offsetC)} taken off: this thermometer reads ${c.offsetC > 0 ? 'high' : 'low'}.`;
     case 'ph-calibration':
       return c.calibratedOn
