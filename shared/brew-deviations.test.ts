@@ -38,10 +38,15 @@ function reading(kind: DeviationReading['kind'], corrected: number, extra: Parti
 const codes = (rs: DeviationReading[]) => findDeviations({ targets, readings: rs }).map((d) => d.code);
 
 describe('findDeviations: mash', () => {
-  it('calls out a mash pH outside the 5.2–5.6 band and not one on its edges (band: common practice, no source)', () => {
-    expect(codes([reading('mash_ph', 5.2), reading('mash_ph', 5.6), reading('mash_ph', 5.4)])).toEqual([]);
-    expect(codes([reading('mash_ph', 5.19)])).toEqual(['mash-ph-low']);
-    expect(codes([reading('mash_ph', 5.61)])).toEqual(['mash-ph-high']);
+  it("calls out a mash pH more than 0.1 from the recipe's target, never one at it (common practice, no source)", () => {
+    // No target in these test targets: 5.2 by default. 5.194 reads 5.19 on the meter: on target.
+    expect(codes([reading('mash_ph', 5.2), reading('mash_ph', 5.194), reading('mash_ph', 5.3), reading('mash_ph', 5.1)])).toEqual([]);
+    expect(codes([reading('mash_ph', 5.09)])).toEqual(['mash-ph-low']);
+    expect(codes([reading('mash_ph', 5.31)])).toEqual(['mash-ph-high']);
+    // A recipe that aims at 5.4: 5.55 is in the usual band but 0.15 off its target.
+    const [d] = findDeviations({ targets: { ...targets, mashPhTarget: 5.4 }, readings: [reading('mash_ph', 5.55)] });
+    expect(d).toMatchObject({ code: 'mash-ph-high', expected: 5.4 });
+    expect(d.message).toBe("Mash pH 5.55 is 0.15 above the recipe's 5.40 target (± 0.10).");
   });
 
   it('compares a mash temperature with the nearest step, 1 °C either way allowed (common practice, no source)', () => {
@@ -82,13 +87,13 @@ describe('findDeviations: pitch and instruments', () => {
 
   it('calls out a pH meter past its reminder, and one never calibrated, once per instrument', () => {
     // Calibrated 1 March with a 30-day reminder: due on 31 March.
-    const late = { ...reading('mash_ph', 5.4), takenAt: '2025-04-02T09:00:00Z' };
+    const late = { ...reading('mash_ph', 5.25), takenAt: '2025-04-02T09:00:00Z' };
     const [d] = findDeviations({ targets, readings: [late] });
     expect(d).toMatchObject({ code: 'instrument-overdue', instrumentName: 'Pocket pH meter' });
     expect(d.message).toBe('Pocket pH meter was last calibrated 32 days before this reading, past its 30-day reminder.');
 
     const never = { ...phMeter, calibratedOn: null };
-    expect(codes([reading('mash_ph', 5.4, { instrument: never }), reading('mash_ph', 5.3, { instrument: never })])).toEqual(['instrument-uncalibrated']);
+    expect(codes([reading('mash_ph', 5.25, { instrument: never }), reading('mash_ph', 5.3, { instrument: never })])).toEqual(['instrument-uncalibrated']);
   });
 
   it('calls out a refractometer on the default factor and a reading with no instrument of the brewer’s own', () => {

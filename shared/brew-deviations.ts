@@ -5,11 +5,13 @@
  *
  * Tolerances are the trade's habits, not a standard (common practice, no source):
  * mash temperature within 1 °C of the nearest step, OG within 2 gravity points, the volume into
- * the fermenter within 5 %, mash pH inside MASH_PH_BAND, pitch no warmer than the recipe's
+ * the fermenter within 5 %, mash pH within MASH_PH_TOLERANCE of the recipe's target (the usual
+ * MASH_PH_BAND is advice in the message, not the verdict), pitch no warmer than the recipe's
  * fermentation range.
  */
+import type { FgState } from './brewmath/fermentation';
 import { sgToPlato } from './brewmath/gravity';
-import { MASH_PH_BAND } from './brewmath/mash';
+import { MASH_PH_TARGET, mashPhVerdict } from './brewmath/mash';
 import { formatGravity, formatTemperature, formatVolume, type GravityUnit, type UnitSystem } from './brewmath/format';
 import type { InstrumentSnapshot } from './schemas/instruments';
 import type { BrewDeviation, ReadingKind } from './schemas/brews';
@@ -24,6 +26,8 @@ export interface DeviationTargets {
   mashSteps: readonly { tempC: number; minutes: number }[];
   fermentationTempMinC: number;
   fermentationTempMaxC: number;
+  /** The recipe's mash pH target; 5.2 when absent (common practice, no source). */
+  mashPhTarget?: number;
 }
 
 export interface DeviationReading {
@@ -130,16 +134,16 @@ export function findDeviations(input: {
     const at = { stage, readingId: r.id, decisionId: null, instrumentName: null } as const;
     switch (r.kind) {
       case 'mash_ph': {
-        const ph = round(r.corrected, 2);
-        if (ph < MASH_PH_BAND.min || ph > MASH_PH_BAND.max) {
-          const low = ph < MASH_PH_BAND.min;
+        const target = typeof targets.mashPhTarget === 'number' && Number.isFinite(targets.mashPhTarget) ? targets.mashPhTarget : MASH_PH_TARGET;
+        const judged = mashPhVerdict(round(r.corrected, 2), target);
+        if (judged.verdict !== 'on-target') {
           out.push({
             ...at,
-            code: low ? 'mash-ph-low' : 'mash-ph-high',
-            expected: low ? MASH_PH_BAND.min : MASH_PH_BAND.max,
+            code: judged.verdict === 'low' ? 'mash-ph-low' : 'mash-ph-high',
+            expected: target,
             actual: r.corrected,
             quantity: 'ph',
-            message: `Mash pH ${ph.toFixed(2)} is ${low ? 'below' : 'above'} the usual ${MASH_PH_BAND.min.toFixed(1)}–${MASH_PH_BAND.max.toFixed(1)} band.`,
+            message: judged.message,
           });
         }
         break;
@@ -305,14 +309,16 @@ export interface FermentationDeviationExcursion {
 
 export interface FermentationDeviationPackaging {
   packagedAt: string;
-  verdictState: 'too-early' | 'moving' | 'stable';
+  verdictState: FgState;
   verdictReason: string;
   overrideReason: string;
 }
 
 const verdictWords: Record<FermentationDeviationPackaging['verdictState'], string> = {
+  'no-reading': 'not yet read',
   'too-early': 'too early to tell',
   moving: 'still moving',
+  stuck: 'steady but well above the recipe FG (stuck)',
   stable: 'stable',
 };
 

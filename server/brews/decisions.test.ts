@@ -104,13 +104,34 @@ describe('POST /api/brews/:id/decisions', () => {
     const tooLittle = await scene.owner.agent.post(`/api/brews/${id}/decisions`).send({ input: { ...workedInput, targetVolumeL: 22 }, choice: { kind: 'boil-longer' } });
     expect(tooLittle.status).toBe(400);
     expect(tooLittle.body.fields.choice).toMatch(/less than the recipe's 22 L/);
+    // With the kettle's 1.5 L trub loss and 0.5 L dead space, boiling on leaves 21.197 − 2 = 19.2 L
+    // for the fermenter (worked by hand), short of the recipe's 21 L.
+    const afterLosses = await scene.owner.agent.post(`/api/brews/${id}/decisions`).send({ input: { ...workedInput, kettleLossL: 2 }, choice: { kind: 'boil-longer' } });
+    expect(afterLosses.status).toBe(400);
+    expect(afterLosses.body.fields.choice).toMatch(/19\.2 L into the fermenter after 2 L of kettle losses/);
     expect(await decisionCount(id)).toBe(0);
+  });
+
+  it('stores the fermenter volume after kettle losses', async () => {
+    const scene = await makeScene(h);
+    const id = await startBrewDay(scene);
+    const res = await scene.owner.agent.post(`/api/brews/${id}/decisions`).send({ input: { ...workedInput, kettleLossL: 2 }, choice: { kind: 'as-is' } });
+    expect(res.status).toBe(201);
+    // 22.56 L cooled (worked example above) less 2 L left in the kettle.
+    expect(res.body.chosen.fermenterVolumeL).toBeCloseTo(20.56, 9);
+    expect(res.body.result.result.kettleLossL).toBe(2);
   });
 
   it.each([
     ['Brix 60', { reading: { kind: 'refractometer', brix: 60 } }, 'input.reading.brix', 'Brix 60 is outside 0 to 40 °Bx, the scale of a brewing refractometer. Check the reading.'],
     ['a volume of 0', { volumeL: 0 }, 'input.volumeL', 'Kettle volume must be more than 0.'],
     ['minutes left below zero', { minutesLeft: -3 }, 'input.minutesLeft', 'Minutes left cannot be below 0.'],
+    [
+      'a hydrometer sample at 60 °C',
+      { reading: { kind: 'hydrometer', sg: 1.04, sampleTempC: 60, calibrationTempC: 20 } },
+      'input.reading.sampleTempC',
+      "A sample at 60 °C (140 °F) is too hot to decide the boil on: the hydrometer correction assumes wort expands like water, which holds only near room temperature. Cool the sample below 40 °C (104 °F), ideally to the hydrometer's calibration temperature, and read it again.",
+    ],
   ])('refuses %s with a message under the field and saves nothing', async (_what, change, field, message) => {
     const scene = await makeScene(h);
     const id = await startBrewDay(scene);

@@ -41,7 +41,7 @@ import { listInstruments } from '../instruments/service';
 import { fieldErrors } from '../lib/handle';
 import { BadRequest, Conflict, HttpError } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
-import { assembleLog, correctRaw, dedupeKey, existingKeys, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
+import { assembleLog, correctRaw, dedupeKey, existingKeys, expectedFgOf, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
 
 export class UnsupportedFile extends HttpError {
   constructor(message: string) {
@@ -342,7 +342,7 @@ export async function importReadings(db: Db, actor: Actor, brewId: number, buffe
     if (isDuplicateKey(error)) throw new Conflict('Some of these readings were saved by another import just now. Nothing was imported; try again and the rest will be added.');
     throw error;
   }
-  if (added > 0) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), stored.row.pitchedAt, now), now);
+  if (added > 0) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), stored.row.pitchedAt, now, expectedFgOf(stored)), now);
   const log = await assembleLog(db, actor, stored, now);
   return { added, skipped: prepared.length - added, log };
 }

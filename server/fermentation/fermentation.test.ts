@@ -44,11 +44,11 @@ describe('the fermentation log', () => {
   });
 
   // Common practice, no source: two hydrometer readings two days apart after day 12 that agree.
-  it('changes its verdict from too early to still moving to stable as readings come in', async () => {
+  it('changes its verdict from no reading to still moving to stable as readings come in', async () => {
     const s = await makeFermentationScene(h);
     const add = (day: number, sg: number) =>
       s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg, sampleTempC: 20, takenAt: s.day(day) });
-    expect((await add(3, 1.02)).body.log.verdict.state).toBe('too-early');
+    expect((await add(3, 1.02)).body.log.verdict.state).toBe('no-reading');
     expect((await add(12, 1.016)).body.log.verdict.state).toBe('too-early');
     const moving = await add(14, 1.012);
     expect(moving.body.log.verdict.state).toBe('moving');
@@ -66,7 +66,7 @@ describe('the fermentation log', () => {
       await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'refractometer', brix: 6, originalBrix: 12.4, takenAt: s.day(day) }).expect(201);
     }
     const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
-    expect(log.body.verdict).toMatchObject({ state: 'too-early', needsHydrometer: true });
+    expect(log.body.verdict).toMatchObject({ state: 'no-reading', needsHydrometer: true });
     expect(log.body.verdict.reason).toMatch(/hydrometer/);
   });
 
@@ -100,6 +100,8 @@ describe('the fermentation log', () => {
     ['a gravity of 1.5', () => ({ method: 'hydrometer', sg: 1.5, sampleTempC: 20 }), 'sg', /0.980 and 1.200/],
     ['a hot sample', () => ({ method: 'hydrometer', sg: 1.02, sampleTempC: 80 }), 'sampleTempC', /between 0 and 60 °C/],
     ['a Brix above the original', () => ({ method: 'refractometer', brix: 14, originalBrix: 12 }), 'brix', /only lowers it/],
+    // Terrill's cubic at 20 and 17 wort-corrected °Bx gives 1.1057, above the 1.0829 wort (worked by hand).
+    ['too small a Brix drop for the alcohol correction', () => ({ method: 'refractometer', brix: 17.68, originalBrix: 20.8 }), 'brix', /too early in fermentation.*1\.036–1\.106/],
     ['a fermenter at 90 °C', () => ({ method: 'thermometer', tempC: 90 }), 'tempC', /Check the thermometer/],
   ])('refuses a reading %s with a message under the field, and saves nothing', async (_what, body, field, message) => {
     const s = await makeFermentationScene(h);
@@ -162,6 +164,72 @@ describe('who may see and write the log', () => {
   });
 });
 
+// One API check per verdict state. The rule is common practice, no source: from day 12, the last
+// two hydrometer readings at least two days apart must be the same at the hydrometer's scale step,
+// with no steady fall over three readings, and not well above the recipe's FG (1.011 in this scene).
+describe('the final-gravity verdict, state by state', () => {
+  const hydrometerAt = (s: Awaited<ReturnType<typeof makeFermentationScene>>, day: number, sg: number, instrumentId?: number) =>
+    s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', instrumentId, sg, sampleTempC: 20, takenAt: s.day(day) });
+
+  it('too-early: day 5, before any check is worth taking', async () => {
+    const s = await makeFermentationScene(h, { pitchedDaysAgo: 5 });
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.verdict.state).toBe('too-early');
+    expect(log.body.verdict.reason).toMatch(/around day 12/);
+  });
+
+  it('no-reading: past day 12 with no hydrometer reading says so', async () => {
+    const s = await makeFermentationScene(h, { pitchedDaysAgo: 20 });
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.verdict.state).toBe('no-reading');
+    expect(log.body.verdict.reason).toMatch(/^No hydrometer reading since day 12 yet/);
+  });
+
+  it('moving: 1.012 then 1.011 three days apart is not the same figure', async () => {
+    const s = await makeFermentationScene(h);
+    await hydrometerAt(s, 14, 1.012).expect(201);
+    const res = await hydrometerAt(s, 17, 1.011).expect(201);
+    expect(res.body.log.verdict.state).toBe('moving');
+    expect(res.body.log.verdict.reason).toMatch(/^1\.012 on day 14 and 1\.011 on day 17, 3 days apart: the gravity fell by 0\.001/);
+  });
+
+  it('moving: a steady fall of 0.45 points a day on a 0.002 hydrometer (1.0128, 1.0119, 1.0110 on days 12, 14, 16)', async () => {
+    const s = await makeFermentationScene(h);
+    const coarse = await makeInstrument(s, { kind: 'hydrometer', name: 'Coarse hydrometer', calibrationTempC: 20, resolutionSg: 0.002 });
+    for (const [day, sg] of [
+      [12, 1.0128],
+      [14, 1.0119],
+    ]) {
+      await hydrometerAt(s, day, sg, coarse).expect(201);
+    }
+    const res = await hydrometerAt(s, 16, 1.011, coarse).expect(201);
+    expect(res.body.reading.instrument).toMatchObject({ resolutionSg: 0.002 });
+    expect(res.body.log.verdict.state).toBe('moving');
+    expect(res.body.log.verdict.reason).toMatch(/fell steadily/);
+  });
+
+  it('stuck: steady at 1.030 when the recipe expects 1.011, and packaging needs the override', async () => {
+    const s = await makeFermentationScene(h);
+    await hydrometerAt(s, 14, 1.03).expect(201);
+    const res = await hydrometerAt(s, 17, 1.03).expect(201);
+    expect(res.body.log.verdict.state).toBe('stuck');
+    expect(res.body.log.verdict.reason).toMatch(/steady, but 0\.019 above the 1\.011 this recipe should finish at/);
+    const refused = await s.owner.agent
+      .post(`/api/brews/${s.brewId}/fermentation/packaging`)
+      .send({ container: 'bottles', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'sucrose' });
+    expect(refused.status).toBe(409);
+    expect(refused.body.fields.override).toMatch(/^Stuck, not finished/);
+  });
+
+  it('stable: 1.012 on day 14 and 1.012 on day 17, and the message says what was compared', async () => {
+    const s = await makeFermentationScene(h);
+    await hydrometerAt(s, 14, 1.012).expect(201);
+    const res = await hydrometerAt(s, 17, 1.012).expect(201);
+    expect(res.body.log.verdict.state).toBe('stable');
+    expect(res.body.log.verdict.reason).toBe('1.012 on day 14 and 1.012 on day 17, 3 days apart: the same reading. Final gravity is stable.');
+  });
+});
+
 describe('packaging', () => {
   const keg = { container: 'keg', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'none' };
 
@@ -202,10 +270,11 @@ describe('packaging', () => {
     expect(res.status).toBe(201);
     // Residual CO2 at 20 °C (68 °F) from the quadratic in shared/brewmath/priming.ts (recalled from
     // memory): 3.0378 − 0.050062·68 + 0.00026555·68² = 0.8615 volumes. Sucrose: 342.30 g gives
-    // 4 × 44.01 g CO2 (stoichiometry), and one volume is 1.9635 g/L, so 3.818 g/L per volume:
-    // (2.5 − 0.8615) × 3.818 × 20 L = 125.1 g.
+    // 4 × 44.01 g CO2 (stoichiometry); CO2 is 1.977 g/L (CRC Handbook, recalled from memory) and
+    // yeast yields about 96 % of theory, so 1.977 × 342.30 / 176.04 / 0.96 = 4.004 g/L per volume:
+    // (2.5 − 0.8615) × 4.004 × 20 L = 131.2 g (worked by hand).
     expect(res.body.packaging.residualCo2Volumes).toBeCloseTo(0.8615, 3);
-    expect(res.body.packaging.primingSugarG).toBeCloseTo(125.1, 0);
+    expect(res.body.packaging.primingSugarG).toBeCloseTo(131.2, 0);
     expect(res.body.packaging).toMatchObject({ override: false, verdictState: 'stable' });
     await s.owner.agent.delete(`/api/brews/${s.brewId}/fermentation/packaging`).expect(200);
     const back = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);

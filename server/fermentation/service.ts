@@ -6,7 +6,7 @@
  */
 import { createHash } from 'node:crypto';
 import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
-import { residualCo2Volumes, primingSugarG } from '@shared/brewmath';
+import { expectedFinalGravity, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
 import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
 import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
 import {
@@ -174,10 +174,23 @@ function brewOf(actor: Actor, stored: StoredBrew, og: number | null): Fermentati
   };
 }
 
-export function verdictFor(rows: readonly FermentationReadingRow[], pitchedAt: Date | null, now: Date): FermentationVerdict | null {
+/** Where the recipe should finish, from the targets the brew day started with. */
+export function expectedFgOf(stored: StoredBrew): number | null {
+  const t = targetsOf(stored);
+  return expectedFinalGravity({ fgSg: typeof t.targetFg === 'number' ? t.targetFg : null });
+}
+
+function resolutionOf(row: FermentationReadingRow): number | null {
+  const snapshot = row.instrumentSnapshot as InstrumentSnapshot | null;
+  return snapshot?.kind === 'hydrometer' ? (snapshot.resolutionSg ?? null) : null;
+}
+
+export function verdictFor(rows: readonly FermentationReadingRow[], pitchedAt: Date | null, now: Date, expectedFgSg: number | null = null): FermentationVerdict | null {
   if (!pitchedAt) return null;
-  const gravity = rows.filter((r) => r.kind === 'gravity').map((r) => ({ takenAt: r.takenAt, sg: r.correctedValue, estimate: r.estimate }));
-  return fermentationVerdict(gravity, pitchedAt, now);
+  const gravity = rows
+    .filter((r) => r.kind === 'gravity')
+    .map((r) => ({ takenAt: r.takenAt, sg: r.correctedValue, estimate: r.estimate, resolutionSg: resolutionOf(r) }));
+  return fermentationVerdict(gravity, pitchedAt, now, { expectedFgSg });
 }
 
 export async function readingRows(db: DbOrTx, brewId: number) {
@@ -212,7 +225,7 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
   return {
     brew,
     readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
-    verdict: verdictFor(rows, pitchedAt, now),
+    verdict: verdictFor(rows, pitchedAt, now, expectedFgOf(stored)),
     temperature: temperatureSummary(temps, range, now),
     progress: fermentationProgress({
       og,
@@ -318,7 +331,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
       .where(and(eq(fermentationReadings.brewId, brewId), eq(fermentationReadings.dedupeKey, key)));
     id = existing.id;
   }
-  if (!duplicate) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), pitchedAt, now), now);
+  if (!duplicate) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), pitchedAt, now, expectedFgOf(stored)), now);
   const log = await assembleLog(db, actor, stored, now);
   const reading = log.readings.find((r) => r.id === id)!;
   return { reading, duplicate, log };
@@ -349,7 +362,12 @@ export async function recordPackaging(db: Db, actor: Actor, brewId: number, body
   const packagedAt = body.packagedAt ? new Date(body.packagedAt) : now;
   checkTakenAt(packagedAt, pitchedAt, now, 'packagedAt');
   const rows = await readingRows(db, brewId);
-  const verdict = verdictFor(rows, pitchedAt, now)!;
+  const verdict = verdictFor(rows, pitchedAt, now, expectedFgOf(stored))!;
+  if (verdict.state === 'stuck' && !body.override) {
+    throw new Conflict('The gravity is steady but well above where this recipe should finish: a stuck fermentation can restart in the bottle and burst it.', {
+      override: `Stuck, not finished: ${verdict.reason} To package anyway, tick the override and say why.`,
+    });
+  }
   if (verdict.state !== 'stable' && !body.override) {
     throw new Conflict('The final gravity is not proven stable yet: bottles filled before fermentation ends can burst.', {
       override: `Not stable yet: ${verdict.reason} To package anyway, tick the override and say why.`,

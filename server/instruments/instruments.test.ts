@@ -72,6 +72,27 @@ describe('instrument profiles', () => {
   });
 });
 
+describe("a hydrometer's scale step", () => {
+  it('defaults to 0.001, can be set, and a reading keeps the step it was taken with', async () => {
+    const { agent } = await brewer();
+    const hyd = await agent.post('/api/instruments').send({ kind: 'hydrometer', name: 'Glass hydrometer' }).expect(201);
+    expect(hyd.body).toMatchObject({ resolutionSg: 0.001 });
+    expect(hyd.body.snapshot).toMatchObject({ resolutionSg: 0.001 });
+    const set = await agent.post(`/api/instruments/${hyd.body.id}/calibrations`).send({ method: 'set', resolutionSg: 0.002 });
+    expect(set.status).toBe(201);
+    const after = await agent.get(`/api/instruments/${hyd.body.id}`).expect(200);
+    expect(after.body).toMatchObject({ resolutionSg: 0.002 });
+  });
+
+  it('refuses a step outside 0.0001–0.005 with a message under the field, and saves nothing', async () => {
+    const { agent, user } = await brewer();
+    const res = await agent.post('/api/instruments').send({ kind: 'hydrometer', name: 'Odd hydrometer', resolutionSg: 0.05 });
+    expect(res.status).toBe(400);
+    expect(res.body.fields.resolutionSg).toMatch(/between 0\.0001 and 0\.005/);
+    expect(await h.ctx.db.select().from(instruments).where(eq(instruments.ownerId, user.id))).toHaveLength(0);
+  });
+});
+
 describe("another brewer's instruments", () => {
   it('are not found (404) for reading, editing, calibrating or the log; nothing changes', async () => {
     const owner = await brewer();

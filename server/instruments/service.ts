@@ -7,6 +7,7 @@ import { and, desc, eq, inArray, max } from 'drizzle-orm';
 import { thermometerCheck, wcfCalibration } from '@shared/instruments';
 import {
   DEFAULT_HYDROMETER_CALIBRATION_C,
+  DEFAULT_HYDROMETER_RESOLUTION_SG,
   DEFAULT_PH_REMINDER_DAYS,
   DEFAULT_PH_RESOLUTION,
   DEFAULT_WCF,
@@ -38,11 +39,22 @@ export function toSnapshot(row: InstrumentRow, calibrationId: number | null): In
   const base = { instrumentId: row.id, name: row.name, calibrationId };
   switch (row.kind) {
     case 'hydrometer':
-      return { ...base, kind: 'hydrometer', calibrationTempC: row.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C };
+      return {
+        ...base,
+        kind: 'hydrometer',
+        calibrationTempC: row.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C,
+        resolutionSg: row.resolutionSg ?? DEFAULT_HYDROMETER_RESOLUTION_SG,
+      };
     case 'refractometer':
       return { ...base, kind: 'refractometer', wcf: row.wcf ?? DEFAULT_WCF, wcfSource: row.wcfSource ?? 'default' };
     case 'thermometer':
-      return { ...base, kind: 'thermometer', offsetC: row.offsetC ?? 0, checkedOn: row.offsetCheckedOn ?? null };
+      return {
+        ...base,
+        kind: 'thermometer',
+        offsetC: row.offsetC ?? 0,
+        ...(row.offsetScale !== null && row.offsetScale !== 1 ? { scale: row.offsetScale } : {}),
+        checkedOn: row.offsetCheckedOn ?? null,
+      };
     case 'ph_meter':
       return {
         ...base,
@@ -64,6 +76,7 @@ export function toInstrument(row: InstrumentRow, calibrationId: number | null): 
     notes: row.notes ?? null,
     archived: row.archived,
     calibrationTempC: row.calibrationTempC ?? null,
+    resolutionSg: row.kind === 'hydrometer' ? (row.resolutionSg ?? DEFAULT_HYDROMETER_RESOLUTION_SG) : null,
     wcf: row.wcf ?? null,
     wcfSource: row.wcfSource ?? null,
     offsetC: row.offsetC ?? null,
@@ -146,7 +159,10 @@ export async function getInstrument(db: DbOrTx, actor: Actor, id: number): Promi
 function initialValues(input: CreateInstrumentInput): InstrumentValues {
   switch (input.kind) {
     case 'hydrometer':
-      return { calibrationTempC: input.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C };
+      return {
+        calibrationTempC: input.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C,
+        resolutionSg: input.resolutionSg ?? DEFAULT_HYDROMETER_RESOLUTION_SG,
+      };
     case 'refractometer':
       return input.wcf === undefined ? { wcf: DEFAULT_WCF, wcfSource: 'default' } : { wcf: input.wcf, wcfSource: 'entered' };
     case 'thermometer':
@@ -238,7 +254,7 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
       const result = thermometerCheck(body);
       const elevationM = body.elevationM ?? null;
       return {
-        values: { offsetC: result.offsetC, offsetCheckedOn: todayIso() },
+        values: { offsetC: result.offsetC, offsetScale: result.scale === 1 ? null : result.scale, offsetCheckedOn: todayIso() },
         inputs: { iceReadingC: body.iceReadingC ?? null, boilingReadingC: body.boilingReadingC ?? null, elevationM },
         result: { ...result },
         also: elevationM === null ? undefined : (tx) => rememberElevation(tx, actor.id, elevationM),
@@ -252,7 +268,7 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
       };
     case 'set': {
       const allowed = settableByKind[row.kind];
-      const given = (['calibrationTempC', 'wcf', 'offsetC', 'resolutionPh', 'reminderDays'] as const).filter((k) => body[k] !== undefined);
+      const given = (['calibrationTempC', 'resolutionSg', 'wcf', 'offsetC', 'resolutionPh', 'reminderDays'] as const).filter((k) => body[k] !== undefined);
       const fields: Record<string, string> = {};
       for (const key of given) if (!allowed.includes(key)) fields[key] = `${instrumentKindLabels[row.kind]}s have no such setting.`;
       if (given.length === 0) fields[allowed[0]] = 'Enter the new value.';
@@ -264,7 +280,11 @@ async function workCalibration(db: DbOrTx, actor: Actor, row: InstrumentRow, bod
         inputs[key] = body[key];
       }
       if (values.wcf !== undefined) values.wcfSource = 'entered';
-      if (values.offsetC !== undefined) values.offsetCheckedOn = todayIso();
+      if (values.offsetC !== undefined) {
+        values.offsetCheckedOn = todayIso();
+        // A typed-in offset is a one-point correction.
+        values.offsetScale = null;
+      }
       return { values, inputs, result: null };
     }
   }

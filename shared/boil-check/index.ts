@@ -60,6 +60,8 @@ export interface BoilCheckInput {
   kettleCapacityL?: number;
   /** Fraction the wort shrinks by on cooling; 0.04 when not given. */
   coolingShrinkage?: number;
+  /** The kettle profile's trub loss plus dead space, litres left behind; 0 when not given. */
+  kettleLossL?: number;
 }
 
 /** The reading with its defaults filled in, as it was used. */
@@ -137,6 +139,7 @@ export function runBoilCheck(input: BoilCheckInput): BoilCheckOutcome {
       extract: potentials,
       kettleCapacityL: input.kettleCapacityL,
       coolingShrinkage: input.coolingShrinkage,
+      kettleLossL: input.kettleLossL,
     });
     const result: BoilCorrection = { ...full, options: full.options.filter((o) => o.kind !== 'extract' || onHand.has(o.extract)) };
     return { currentSg, reading: used, result, warnings };

@@ -119,7 +119,12 @@ function volume(litres: number, system: UnitSystem): string {
  */
 export function reasonInWords(
   option: InfeasibleOption,
-  context: { result: Pick<BoilCorrection, 'projected' | 'targetSg'>; targetVolumeL?: number; kettleCapacityL?: number; boilOffLPerHour?: number },
+  context: {
+    result: Pick<BoilCorrection, 'projected' | 'targetSg'> & Partial<Pick<BoilCorrection, 'kettleLossL' | 'maxBoilVolumeL'>>;
+    targetVolumeL?: number;
+    kettleCapacityL?: number;
+    boilOffLPerHour?: number;
+  },
   system: UnitSystem = 'metric',
 ): string {
   if (system === 'metric') return option.reason;
@@ -127,12 +132,16 @@ export function reasonInWords(
   const { result } = context;
   if (code === 'below-recipe-volume' && context.targetVolumeL !== undefined) {
     // Extract is conserved: the volume at which the wort reaches the target is pointsL / targetPoints.
-    const coldL = (result.projected.fermenterVolumeL * (result.projected.endSg - 1)) / (result.targetSg - 1);
-    return `Boiling on to the target would leave ${volume(coldL, system)} once cooled, less than the recipe's ${volume(context.targetVolumeL, system)}.`;
+    const loss = result.kettleLossL ?? 0;
+    const cooledL = result.projected.cooledVolumeL ?? result.projected.fermenterVolumeL + loss;
+    const coldL = (cooledL * (result.projected.endSg - 1)) / (result.targetSg - 1) - loss;
+    const after = loss > 0 ? ` after ${volume(loss, system)} of kettle losses` : ' once cooled';
+    return `Boiling on to the target would put ${volume(Math.max(coldL, 0), system)} into the fermenter${after}, less than the recipe's ${volume(context.targetVolumeL, system)}.`;
   }
   if (code === 'overfills-kettle' && context.kettleCapacityL !== undefined) {
-    const where = option.kind === 'water' ? ' Add it to the fermenter after chilling instead: the result is the same.' : '';
-    return `That would overfill the ${volume(context.kettleCapacityL, system)} kettle.${where}`;
+    const where = option.kind === 'water' ? ' Add the water to the fermenter after chilling instead (boiled and cooled, or clean drinking water): the gravity comes out the same.' : '';
+    const most = result.maxBoilVolumeL != null ? ` (at most ${volume(result.maxBoilVolumeL, system)})` : '';
+    return `That would leave less than 10 % of the ${volume(context.kettleCapacityL, system)} kettle free for a rolling boil${most}.${where}`;
   }
   if (code === 'too-long' && context.boilOffLPerHour !== undefined) {
     return `At ${litresToUsGallons(context.boilOffLPerHour).toFixed(2)}${NBSP}gal/h it would take too long: boiling that much longer changes colour and bitterness.`;

@@ -91,8 +91,12 @@ describe('late-boil correction when the wort is short of target', () => {
     expect(result.status).toBe('low');
     expect(result.projected.endSg).toBeCloseTo(end.sg, 12);
     expect(result.projected.endVolumeL).toBeCloseTo(end.volumeL, 12);
+    expect(result.projected.cooledVolumeL).toBeCloseTo(end.volumeL * 0.96, 12);
+    // No kettle losses given: all of it reaches the fermenter.
     expect(result.projected.fermenterVolumeL).toBeCloseTo(end.volumeL * 0.96, 12);
-    expect(result.projected.abvPercent).toBeCloseTo((end.sg - 1.012) * 131.25, 12);
+    // The recipe's apparent attenuation, (1.050 − 1.012) / 0.050 = 76 % (worked by hand), is kept:
+    // FG = 1 + (endSg − 1) × 0.24, so ABV = (endSg − 1) × 0.76 × 131.25.
+    expect(result.projected.abvPercent).toBeCloseTo((end.sg - 1) * 0.76 * 131.25, 12);
     expect(option(result, 'as-is')).toMatchObject({ feasible: true, endSg: result.projected.endSg });
   });
 
@@ -103,17 +107,22 @@ describe('late-boil correction when the wort is short of target', () => {
       expect(o.endSg).toBeCloseTo(1.05, 12);
       expect(o.kg).toBeGreaterThan(0);
       expect(o.fermenterVolumeL).toBeCloseTo(result.projected.fermenterVolumeL + o.kg * EXTRACT_VOLUME_L_PER_KG[kind], 12);
+      // At the target OG the recipe's own attenuation gives its own FG back: (1.050 − 1.012) × 131.25.
       expect(o.abvPercent).toBeCloseTo((1.05 - 1.012) * 131.25, 10);
     }
   });
 
-  it('dry extract needed matches the handbook rule to within its own volume (≈1 %)', () => {
+  it("dry extract needed is the handbook rule corrected for the extract's own volume (9.2 % more here, worked by hand)", () => {
     const o = option(result, 'extract', 'dme');
     if (o.kind !== 'extract' || !o.feasible) throw new Error('dme should be feasible');
-    const cold = result.projected.fermenterVolumeL;
-    const handbookKg = (cold * (50 - (result.projected.endSg - 1) * 1000)) / EXTRACT_POTENTIALS_POINTS_L_PER_KG.dme;
-    expect(o.kg).toBeGreaterThan(handbookKg);
-    expect(o.kg / handbookKg - 1).toBeLessThan(0.1);
+    // Worked by hand: 25 L − 4 L/h × 10 min = 24.333 L hot, × 0.96 = 23.36 L cold, at 44 × 25 / 24.333
+    // = 45.205 points. Handbook rule (points short × litres ÷ potential, ignoring the extract's own
+    // volume): 23.36 × (50 − 45.205) / 367 = 0.3052 kg. Counting the 0.62 L/kg the extract adds,
+    // which must also reach 50 points: 23.36 × (50 − 45.205) / (367 − 50 × 0.62) = 112.0 / 336 = 0.3333 kg.
+    expect(EXTRACT_POTENTIALS_POINTS_L_PER_KG.dme).toBe(367);
+    expect(EXTRACT_VOLUME_L_PER_KG.dme).toBe(0.62);
+    expect(o.kg).toBeCloseTo(0.3333, 3);
+    expect(o.kg / 0.3052 - 1).toBeCloseTo(0.092, 2);
   });
 
   it('offers boiling longer, leaving at least the recipe volume', () => {
@@ -179,6 +188,48 @@ describe('late-boil correction when the wort is over target', () => {
     const o = option(boilCorrection({ ...over, kettleCapacityL: 26 }), 'water');
     expect(o).toMatchObject({ feasible: false, code: 'overfills-kettle' });
     if (!o.feasible) expect(o.reason).toMatch(/fermenter/);
+  });
+});
+
+describe('kettle losses and boiling headroom', () => {
+  it('subtracts trub loss and dead space from what reaches the fermenter (issue case: 20.8 L cooled, 18.8 L in)', () => {
+    // Worked by hand: 22.5 L − 5 L/h × 10 min = 21.667 L hot, × 0.96 = 20.8 L cooled; 1.5 L trub
+    // and 0.5 L dead space stay in the kettle, so 18.8 L reaches the fermenter.
+    const result = boilCorrection({ volumeL: 22.5, sg: 1.05, minutesLeft: 10, boilOffLPerHour: 5, targetSg: 1.052, kettleLossL: 2 });
+    expect(result.projected.cooledVolumeL).toBeCloseTo(20.8, 9);
+    expect(result.projected.fermenterVolumeL).toBeCloseTo(18.8, 9);
+    expect(result.kettleLossL).toBe(2);
+    for (const o of result.options) if (o.feasible) expect(o.fermenterVolumeL).toBeCloseTo(o.cooledVolumeL - 2, 9);
+  });
+
+  it('refuses boiling longer when, after kettle losses, less than the recipe volume would reach the fermenter', () => {
+    // Worked by hand: the extract is 44 × 25 × 0.96 = 1056 point-litres; at 50 points that is
+    // 21.12 L cooled, less 2 L of losses = 19.12 L, short of the recipe's 21 L. Without losses it fits.
+    expect(option(boilCorrection(shortOfTarget), 'boil-longer')).toMatchObject({ feasible: true });
+    const o = option(boilCorrection({ ...shortOfTarget, kettleLossL: 2 }), 'boil-longer');
+    expect(o).toMatchObject({ feasible: false, code: 'below-recipe-volume' });
+    if (!o.feasible) expect(o.reason).toMatch(/19\.1 L into the fermenter after 2 L of kettle losses, less than the recipe's 21 L/);
+  });
+
+  // Common practice, no source: keep about 10 % of the kettle free for a rolling boil.
+  it('refuses water that leaves less than 10 % of the kettle free, pointing to the fermenter instead', () => {
+    // Worked by hand: 25 L at 1.056 → 1344 point-litres cold; 50 points needs 26.88 L, so
+    // 26.88 − 23.36 = 3.52 L of water, which is 3.67 L hot: 28.67 L in the kettle.
+    const over: BoilCorrectionInput = { ...shortOfTarget, sg: 1.056 };
+    // A 32 L kettle may hold 28.8 L while boiling: it fits.
+    expect(option(boilCorrection({ ...over, kettleCapacityL: 32 }), 'water')).toMatchObject({ feasible: true });
+    // A 31 L kettle would hold it, but only 27.9 L leaves room to boil.
+    const o = option(boilCorrection({ ...over, kettleCapacityL: 31 }), 'water');
+    expect(o).toMatchObject({ feasible: false, code: 'overfills-kettle' });
+    if (!o.feasible) {
+      expect(o.reason).toMatch(/28\.7 L, leaving less than 10 % of the 31 L kettle free/);
+      expect(o.reason).toMatch(/Add the water to the fermenter after chilling instead/);
+    }
+  });
+
+  it('refuses losses larger than the wort', () => {
+    expect(brewError(() => boilCorrection({ ...shortOfTarget, kettleLossL: 30 })).field).toBe('kettleLossL');
+    expect(brewError(() => boilCorrection({ ...shortOfTarget, kettleLossL: -1 })).field).toBe('kettleLossL');
   });
 });
 

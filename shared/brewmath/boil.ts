@@ -15,7 +15,8 @@ import { SG_MAX, VOLUME_MAX_L, requireRange, requireSg, requireVolume, requireWo
  * - volumes the brewer enters for the kettle are hot, as measured in the kettle during the boil;
  * - gravities are as read on a cooled sample (a refractometer drop cools in seconds);
  * - wort shrinks by `coolingShrinkage` (default 4 %, common practice) from boiling to pitching
- *   temperature, so fermenterVolumeL = hot volume × (1 − shrinkage), before any kettle losses;
+ *   temperature, so cooledVolumeL = hot volume × (1 − shrinkage), and fermenterVolumeL is that less
+ *   the kettle's trub loss and dead space (`kettleLossL`), the figure the recipe's volume means;
  * - extract is conserved in gravity points × litres; boil-off removes water only, at a steady
  *   rate in hot litres per hour.
  */
@@ -26,6 +27,8 @@ export const DEFAULT_TOLERANCE_SG = 0.001;
 const MAX_MINUTES = 24 * 60;
 /** Boiling on beyond this changes colour and bitterness too much to count as a gravity fix (common practice). */
 export const MAX_EXTRA_BOIL_MINUTES = 90;
+/** Keep about a tenth of the kettle free so a rolling boil does not boil over (common practice, no source). */
+export const KETTLE_HEADROOM_FRACTION = 0.1;
 
 export interface BoilProjectionInput {
   /** Hot wort in the kettle now, litres. */
@@ -101,6 +104,8 @@ export interface BoilCorrectionInput extends BoilProjectionInput {
   kettleCapacityL?: number;
   /** Fraction the wort shrinks by from boiling to pitching; default 0.04. */
   coolingShrinkage?: number;
+  /** Cold litres left behind in the kettle (trub loss plus dead space) when it is drained; default 0. */
+  kettleLossL?: number;
   /** How close to target counts as on target; default 0.001. */
   toleranceSg?: number;
 }
@@ -110,9 +115,14 @@ export interface EndState {
   endSg: number;
   /** Hot volume in the kettle at flame-out. */
   endVolumeL: number;
-  /** The same wort cooled, before kettle losses. Compare this with the recipe's volume. */
+  /** The same wort cooled, still in the kettle (before kettle losses). */
+  cooledVolumeL: number;
+  /** What reaches the fermenter: cooled, less the kettle's trub loss and dead space. Compare this with the recipe's volume. */
   fermenterVolumeL: number;
-  /** Simple ABV, (endSg − FG) × 131.25, at the recipe's FG (given or assumed); 0 if endSg ≤ FG. */
+  /**
+   * Simple ABV, (endSg − FG) × 131.25, with FG at the recipe's apparent attenuation (from its OG
+   * and FG, or 75 % when it gives no FG) applied to this option's own gravity.
+   */
   abvPercent: number;
 }
 
@@ -183,6 +193,12 @@ export interface BoilCorrection {
   fgSg: number;
   /** True when the recipe gave no FG and 75 % apparent attenuation was assumed. */
   fgAssumed: boolean;
+  /** The recipe's apparent attenuation, (OG − FG) / (OG − 1), used for every option's ABV. */
+  attenuation: number;
+  /** Cold litres subtracted from every fermenter volume for trub loss and dead space. */
+  kettleLossL: number;
+  /** The most the kettle may hold while boiling, keeping KETTLE_HEADROOM_FRACTION free; null without a kettle size. */
+  maxBoilVolumeL: number | null;
   /** The end state with no action. */
   projected: EndState;
   /** Always in this order: as-is, extract (dme, lme, sucrose, dextrose), water, boil-longer. */
@@ -226,6 +242,7 @@ export function boilCorrection(input: BoilCorrectionInput): BoilCorrection {
   requireRange(shrinkage, 0, 0.1, 'coolingShrinkage', 'Cooling shrinkage', '', 'It is a fraction; about 0.04 is usual.');
   const tolerancePoints = (input.toleranceSg ?? DEFAULT_TOLERANCE_SG) * 1000;
   requireRange(tolerancePoints, 0, 10, 'toleranceSg', 'Tolerance', 'points');
+  const kettleLossL = requireRange(input.kettleLossL ?? 0, 0, 50, 'kettleLossL', 'Kettle losses (trub and dead space)', 'L');
 
   let fgSg: number;
   const fgAssumed = input.targetFg === undefined;
@@ -254,29 +271,37 @@ export function boilCorrection(input: BoilCorrectionInput): BoilCorrection {
   const cold = 1 - shrinkage;
   const pointsL = (sg - 1) * 1000 * volumeL * cold;
   const endColdL = endHotL * cold;
+  if (endColdL - kettleLossL <= 0) {
+    throw new BrewMathError(
+      `The kettle losses (${show(kettleLossL, 1)} L of trub and dead space) are more than the ${show(endColdL, 1)} L the boil will end with. Check the losses in the kettle profile.`,
+      'inconsistent',
+      'kettleLossL',
+    );
+  }
   const projectedPoints = pointsL / endColdL;
   const targetPoints = (targetSg - 1) * 1000;
   const gap = projectedPoints - targetPoints;
   const status: BoilStatus =
     gap < -tolerancePoints - POINTS_EPSILON ? 'low' : gap > tolerancePoints + POINTS_EPSILON ? 'high' : 'on-target';
 
+  const maxBoilVolumeL = kettleCapacityL === undefined ? null : kettleCapacityL * (1 - KETTLE_HEADROOM_FRACTION);
   const ctx: Context = {
     status,
     volumeL,
     boilOffLPerHour,
     kettleCapacityL,
+    maxBoilVolumeL,
+    kettleLossL,
     targetVolumeL,
     targetSg,
     cold,
     pointsL,
     endColdL,
     targetPoints,
-    fgPoints: (fgSg - 1) * 1000,
+    attenuation: (targetSg - fgSg) / (targetSg - 1),
   };
-  const projectedSg = 1 + projectedPoints / 1000;
-  const projectedAbv = abvAt(ctx, projectedPoints);
   const options: BoilOption[] = [
-    { kind: 'as-is', feasible: true, endSg: projectedSg, endVolumeL: endHotL, fermenterVolumeL: endColdL, abvPercent: projectedAbv },
+    { kind: 'as-is', feasible: true, ...endState(ctx, projectedPoints, endColdL) },
     extractOption(ctx, 'dme', overrides?.dme ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.dme, EXTRACT_VOLUME_L_PER_KG.dme),
     extractOption(ctx, 'lme', overrides?.lme ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.lme, EXTRACT_VOLUME_L_PER_KG.lme),
     extractOption(ctx, 'sucrose', overrides?.sucrose ?? EXTRACT_POTENTIALS_POINTS_L_PER_KG.sucrose, EXTRACT_VOLUME_L_PER_KG.sucrose),
@@ -290,7 +315,10 @@ export function boilCorrection(input: BoilCorrectionInput): BoilCorrection {
     targetSg,
     fgSg,
     fgAssumed,
-    projected: { endSg: projectedSg, endVolumeL: endHotL, fermenterVolumeL: endColdL, abvPercent: projectedAbv },
+    attenuation: ctx.attenuation,
+    kettleLossL,
+    maxBoilVolumeL,
+    projected: endState(ctx, projectedPoints, endColdL),
     options,
   };
 }
@@ -301,17 +329,35 @@ interface Context {
   volumeL: number;
   boilOffLPerHour: number;
   kettleCapacityL: number | undefined;
+  maxBoilVolumeL: number | null;
+  kettleLossL: number;
   targetVolumeL: number | undefined;
   targetSg: number;
   cold: number;
   pointsL: number;
   endColdL: number;
   targetPoints: number;
-  fgPoints: number;
+  attenuation: number;
 }
 
+/** Simple ABV, (OG − FG) × 131.25, with FG = OG less the recipe's apparent attenuation of it. */
 function abvAt(ctx: Context, points: number): number {
-  return points > ctx.fgPoints ? (points - ctx.fgPoints) * 0.13125 : 0;
+  return points > 0 ? points * ctx.attenuation * 0.13125 : 0;
+}
+
+function endState(ctx: Context, points: number, coldL: number): EndState {
+  return {
+    endSg: 1 + points / 1000,
+    endVolumeL: coldL / ctx.cold,
+    cooledVolumeL: coldL,
+    fermenterVolumeL: coldL - ctx.kettleLossL,
+    abvPercent: abvAt(ctx, points),
+  };
+}
+
+/** Why an addition is refused when it leaves too little room to boil. */
+function headroomReason(ctx: Context, what: string, kettleL: number): string {
+  return `${what} would bring the kettle to ${show(kettleL, 1)} L, leaving less than ${show(KETTLE_HEADROOM_FRACTION * 100, 0)} % of the ${show(ctx.kettleCapacityL!, 1)} L kettle free for a rolling boil (at most ${show(ctx.maxBoilVolumeL!, 1)} L).`;
 }
 
 function extractOption(ctx: Context, extract: ExtractKind, potential: number, litresPerKg: number): BoilOption {
@@ -326,27 +372,19 @@ function extractOption(ctx: Context, extract: ExtractKind, potential: number, li
   }
   const kg = (ctx.targetPoints * ctx.endColdL - ctx.pointsL) / denominator;
   const addedL = kg * litresPerKg;
-  if (ctx.kettleCapacityL !== undefined && ctx.volumeL + addedL / ctx.cold > ctx.kettleCapacityL) {
+  const kettleL = ctx.volumeL + addedL / ctx.cold;
+  if (ctx.maxBoilVolumeL !== null && kettleL > ctx.maxBoilVolumeL) {
     return {
       kind: 'extract',
       feasible: false,
       extract,
       code: 'overfills-kettle',
-      reason: `${show(kg, 2)} kg would overfill the ${show(ctx.kettleCapacityL, 1)} L kettle.`,
+      reason: headroomReason(ctx, `${show(kg, 2)} kg`, kettleL),
     };
   }
   const coldL = ctx.endColdL + addedL;
   const points = (ctx.pointsL + potential * kg) / coldL;
-  return {
-    kind: 'extract',
-    feasible: true,
-    extract,
-    kg,
-    endSg: 1 + points / 1000,
-    endVolumeL: coldL / ctx.cold,
-    fermenterVolumeL: coldL,
-    abvPercent: abvAt(ctx, points),
-  };
+  return { kind: 'extract', feasible: true, extract, kg, ...endState(ctx, points, coldL) };
 }
 
 function waterOption(ctx: Context): BoilOption {
@@ -356,25 +394,18 @@ function waterOption(ctx: Context): BoilOption {
       : { kind: 'water', feasible: false, code: 'below-target', reason: REASON_WATER_BELOW };
   }
   const litres = ctx.pointsL / ctx.targetPoints - ctx.endColdL;
-  if (ctx.kettleCapacityL !== undefined && ctx.volumeL + litres / ctx.cold > ctx.kettleCapacityL) {
+  const kettleL = ctx.volumeL + litres / ctx.cold;
+  if (ctx.maxBoilVolumeL !== null && kettleL > ctx.maxBoilVolumeL) {
     return {
       kind: 'water',
       feasible: false,
       code: 'overfills-kettle',
-      reason: `${show(litres, 1)} L of water would overfill the ${show(ctx.kettleCapacityL, 1)} L kettle. Add it to the fermenter after chilling instead: the result is the same.`,
+      reason: `${headroomReason(ctx, `${show(litres, 1)} L of water`, kettleL)} Add the water to the fermenter after chilling instead (boiled and cooled, or clean drinking water): the gravity comes out the same.`,
     };
   }
   const coldL = ctx.endColdL + litres;
   const points = ctx.pointsL / coldL;
-  return {
-    kind: 'water',
-    feasible: true,
-    litres,
-    endSg: 1 + points / 1000,
-    endVolumeL: coldL / ctx.cold,
-    fermenterVolumeL: coldL,
-    abvPercent: abvAt(ctx, points),
-  };
+  return { kind: 'water', feasible: true, litres, ...endState(ctx, points, coldL) };
 }
 
 function boilLongerOption(ctx: Context): BoilOption {
@@ -390,12 +421,14 @@ function boilLongerOption(ctx: Context): BoilOption {
     return { kind: 'boil-longer', feasible: false, code: 'no-extract', reason: REASON_NO_EXTRACT };
   }
   const coldL = ctx.pointsL / ctx.targetPoints;
-  if (ctx.targetVolumeL !== undefined && coldL < ctx.targetVolumeL) {
+  const intoFermenterL = coldL - ctx.kettleLossL;
+  if (ctx.targetVolumeL !== undefined && intoFermenterL < ctx.targetVolumeL) {
+    const losses = ctx.kettleLossL > 0 ? ` after ${show(ctx.kettleLossL, 1)} L of kettle losses` : ' once cooled';
     return {
       kind: 'boil-longer',
       feasible: false,
       code: 'below-recipe-volume',
-      reason: `Boiling on to ${showSg(ctx.targetSg)} would leave ${show(coldL, 1)} L once cooled, less than the recipe's ${show(ctx.targetVolumeL, 1)} L.`,
+      reason: `Boiling on to ${showSg(ctx.targetSg)} would put ${show(Math.max(intoFermenterL, 0), 1)} L into the fermenter${losses}, less than the recipe's ${show(ctx.targetVolumeL, 1)} L.`,
     };
   }
   const boilOffColdLPerHour = ctx.boilOffLPerHour * ctx.cold;
@@ -409,13 +442,5 @@ function boilLongerOption(ctx: Context): BoilOption {
     };
   }
   const points = ctx.pointsL / coldL;
-  return {
-    kind: 'boil-longer',
-    feasible: true,
-    extraMinutes: ((ctx.endColdL - coldL) / boilOffColdLPerHour) * 60,
-    endSg: 1 + points / 1000,
-    endVolumeL: coldL / ctx.cold,
-    fermenterVolumeL: coldL,
-    abvPercent: abvAt(ctx, points),
-  };
+  return { kind: 'boil-longer', feasible: true, extraMinutes: ((ctx.endColdL - coldL) / boilOffColdLPerHour) * 60, ...endState(ctx, points, coldL) };
 }

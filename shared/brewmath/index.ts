@@ -26,6 +26,10 @@ export {
   DEFAULT_WCF,
   wcfFromPairs,
   refractometerWithAlcoholSg,
+  fermentingRefractometerSg,
+  TERRILL_FIT_RANGE,
+  NO_DROP_BRIX,
+  type FermentingRefractometerEstimate,
   type BrixSgPair,
   type WcfEstimate,
 } from './refractometer';
@@ -57,6 +61,7 @@ export {
   DEFAULT_COOLING_SHRINKAGE,
   DEFAULT_TOLERANCE_SG,
   MAX_EXTRA_BOIL_MINUTES,
+  KETTLE_HEADROOM_FRACTION,
   projectBoil,
   boilCorrection,
   boilOffRateLPerHour,
@@ -78,7 +83,12 @@ export {
   fgStability,
   FG_FIRST_CHECK_DAY,
   FG_MIN_SPAN_DAYS,
-  FG_TOLERANCE_SG,
+  FG_RESOLUTION_SG,
+  FG_TREND_LIMIT_SG_PER_DAY,
+  FG_STUCK_MARGIN_SG,
+  fgStates,
+  expectedFinalGravity,
+  type ComparedReading,
   type GravityReading,
   type FgStabilityOptions,
   type FgStability,
@@ -100,7 +110,7 @@ export {
   type PrimingSugar,
   type PrimingInput,
 } from './priming';
-export { MASH_PH_TARGET, MASH_PH_BAND, mashPhStatus, type MashPhStatus } from './mash';
+export { MASH_PH_TARGET, MASH_PH_BAND, MASH_PH_TOLERANCE, mashPhStatus, mashPhVerdict, type MashPhStatus, type MashPhVerdict } from './mash';
 export {
   LITRES_PER_US_GALLON,
   KG_PER_LB,

@@ -26,23 +26,37 @@ describe('residual CO2', () => {
 });
 
 describe('priming sugar', () => {
-  it('sucrose is about 4 g per litre per volume of CO2 (common practice, 3.8 to 4.0)', () => {
-    expect(PRIMING_G_PER_L_PER_CO2_VOLUME.sucrose).toBeGreaterThan(3.8);
-    expect(PRIMING_G_PER_L_PER_CO2_VOLUME.sucrose).toBeLessThan(4.0);
+  // Sources: CO2 density 1.977 g/L at 0 °C and 101.325 kPa (CRC Handbook, recalled from memory);
+  // about 96 % of theory reaches CO2, the rest going to glycerol, acids and yeast (Pasteur's
+  // balance, recalled from memory); molar masses from IUPAC atomic weights.
+  it('sucrose is 4.00 g per litre per volume of CO2 (worked by hand: 1.977 × 342.30 / (4 × 44.01) / 0.96)', () => {
+    // 1.977 × 342.30 = 676.73; / 176.04 = 3.8442; / 0.96 = 4.0044. The common rule of thumb is "about 4 g/L".
+    expect(PRIMING_G_PER_L_PER_CO2_VOLUME.sucrose).toBeCloseTo(4.0044, 3);
   });
 
-  it('corn sugar takes about 10 % more than sucrose, DME about half as much again (common practice)', () => {
+  it('corn sugar (the monohydrate) takes 15.8 % more than sucrose; DME is sucrose ÷ 0.68', () => {
+    // Stoichiometry, worked by hand: per mole of CO2, (198.17 / 2) / (342.30 / 4) = 99.085 / 85.575 = 1.1579.
     const { sucrose, dextrose, dme } = PRIMING_G_PER_L_PER_CO2_VOLUME;
-    expect(sucrose / dextrose).toBeGreaterThan(0.85);
-    expect(sucrose / dextrose).toBeLessThan(0.92);
-    expect(dme / sucrose).toBeGreaterThan(1.4);
-    expect(dme / sucrose).toBeLessThan(1.6);
+    expect(dextrose / sucrose).toBeCloseTo(1.1579, 3);
+    // 68 % fermentable DME: common practice, no source.
+    expect(dme / sucrose).toBeCloseTo(1 / 0.68, 9);
   });
 
-  it('5 US gal at 20 °C to 2.5 volumes takes about 3/4 cup, 4 to 5 oz, of corn sugar (a homebrewing handbook, recalled from memory)', () => {
+  it('20 L at 20 °C to 2.4 volumes takes about 122 g of sucrose (worked by hand)', () => {
+    // Residual CO2 at 20 °C = 68 °F from the published quadratic (recalled from memory):
+    // 3.0378 − 0.050062 × 68 + 0.00026555 × 68² = 0.8615 volumes; (2.4 − 0.8615) × 4.0044 × 20 L = 123.2 g.
+    // With the 0.878 volumes of the Bunsen coefficient instead, 121.9 g: "about 122 g".
+    const g = primingSugarG({ volumeL: 20, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'sucrose' });
+    expect(g).toBeCloseTo(123.2, 0);
+    expect(Math.abs(g / 122 - 1)).toBeLessThan(0.015);
+  });
+
+  it('5 US gal at 20 °C to 2.5 volumes takes 5.07 oz of corn sugar, a little above the "3/4 cup, 4 to 5 oz" handbook rule (recalled from memory)', () => {
+    // Worked by hand: 5 × 3.785411784 = 18.927 L; dextrose 1.977 × 198.17 / 88.02 / 0.96 = 4.6366 g/L per volume;
+    // (2.5 − 0.8615) × 4.6366 × 18.927 = 143.8 g = 5.07 oz (28.3495 g/oz). The handbook rule is for
+    // about 2.3–2.4 volumes from a cooler cellar, so a warmer, fizzier target lands just above it.
     const g = primingSugarG({ volumeL: usGallonsToLitres(5), warmestTempC: 20, targetCo2Volumes: 2.5, sugar: 'dextrose' });
-    expect(gToOz(g)).toBeGreaterThan(4);
-    expect(gToOz(g)).toBeLessThan(5.1);
+    expect(gToOz(g)).toBeCloseTo(5.07, 1);
   });
 
   it('beer that was warmer needs more sugar for the same carbonation (property)', () => {

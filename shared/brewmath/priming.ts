@@ -17,21 +17,30 @@ export function residualCo2Volumes(warmestTempC: number): number {
   return 3.0378 - 0.050062 * f + 0.00026555 * f * f;
 }
 
-// One "volume" is a litre of CO2 at 0 °C and 101.325 kPa per litre of beer:
-// 44.0095 g/mol (IUPAC) ÷ 22.41397 L/mol (CODATA ideal-gas molar volume) = 1.9635 g/L.
-const CO2_G_PER_L_PER_VOLUME = 44.0095 / 22.41397;
+/**
+ * One "volume" is a litre of CO2 at 0 °C and 101.325 kPa per litre of beer. CO2 is not an ideal
+ * gas: its real density there is 1.977 g/L (CRC Handbook of Chemistry and Physics, physical
+ * constants of inorganic compounds; recalled from memory), not the ideal 44.01 / 22.414 = 1.9635.
+ */
+export const CO2_G_PER_L_PER_VOLUME = 1.977;
+/**
+ * Yeast turns only about 95–96 % of the sugar it ferments into ethanol and CO2; the rest goes to
+ * glycerol, acids and new yeast (Pasteur's balance, as quoted in brewing and wine-making texts;
+ * recalled from memory). 96 % is used.
+ */
+export const CO2_YIELD_OF_THEORY = 0.96;
 
 /**
  * Grams of sugar per litre of beer per volume of CO2 wanted.
- * - sucrose: C12H22O11 + H2O → 4 C2H5OH + 4 CO2, so 342.30 g gives 176.04 g CO2: 3.82 g/L
- *   (stoichiometry; the yeast's own use of a little sugar is ignored, as is usual);
- * - dextrose: brewing "corn sugar" is the monohydrate, C6H12O6·H2O (198.17 g/mol) → 2 CO2: 4.42 g/L;
+ * - sucrose: C12H22O11 + H2O → 4 C2H5OH + 4 CO2, so 342.30 g gives 176.04 g CO2 in theory;
+ *   with 1.977 g/L and a 96 % yield: 1.977 × 342.30 / 176.04 / 0.96 = 4.00 g/L;
+ * - dextrose: brewing "corn sugar" is the monohydrate, C6H12O6·H2O (198.17 g/mol) → 2 CO2: 4.64 g/L;
  * - dme: about 68 % of dry malt extract ferments like sucrose (common practice, no source): sucrose ÷ 0.68.
  */
-const SUCROSE_G_PER_L_PER_VOLUME = (CO2_G_PER_L_PER_VOLUME * 342.2965) / (4 * 44.0095);
+const SUCROSE_G_PER_L_PER_VOLUME = (CO2_G_PER_L_PER_VOLUME * 342.2965) / (4 * 44.0095) / CO2_YIELD_OF_THEORY;
 export const PRIMING_G_PER_L_PER_CO2_VOLUME: Readonly<Record<PrimingSugar, number>> = {
   sucrose: SUCROSE_G_PER_L_PER_VOLUME,
-  dextrose: (CO2_G_PER_L_PER_VOLUME * 198.1712) / (2 * 44.0095),
+  dextrose: (CO2_G_PER_L_PER_VOLUME * 198.1712) / (2 * 44.0095) / CO2_YIELD_OF_THEORY,
   dme: SUCROSE_G_PER_L_PER_VOLUME / 0.68,
 };
 

@@ -1,5 +1,5 @@
 import { BrewMathError } from './errors';
-import { requireWcf, sgToPlato } from './gravity';
+import { brixToSg, requireWcf, sgToPlato } from './gravity';
 import { SG_MAX, SG_MIN, requireBrix, requireWortSg, show, showSg } from './validate';
 
 /** About 1.04 is the usual factor when a brewer has not measured their own (common practice). */
@@ -102,4 +102,65 @@ export function refractometerWithAlcoholSg(originalBrix: number, currentBrix: nu
     );
   }
   return sg;
+}
+
+/**
+ * What Terrill's cubic was fitted to, as described with the fit (S. Terrill 2011): finished beers
+ * of OG about 1.036–1.106 at 73–91 % apparent attenuation. Outside it the cubic extrapolates; at
+ * zero fermentation it even gives more than the wort itself (20.8 °Bx against 20.8 °Bx → 1.195).
+ */
+export const TERRILL_FIT_RANGE = { ogMin: 1.036, ogMax: 1.106, attenuationMin: 0.73, attenuationMax: 0.91 } as const;
+/** A drop smaller than a brewing refractometer's 0.1 °Bx scale step is no drop (common practice, no source). */
+export const NO_DROP_BRIX = 0.1;
+
+export interface FermentingRefractometerEstimate {
+  sg: number;
+  /** 'unfermented': no drop yet, so the plain Brix-to-gravity conversion; else Terrill's cubic. */
+  method: 'unfermented' | 'terrill-2011-cubic';
+  /** (OG − SG) / (OG − 1), with OG from the original reading. */
+  apparentAttenuation: number;
+  /** Outside the range the cubic was fitted to: a rough estimate only. */
+  rough: boolean;
+  /** Why it is rough, in words; null when it is not. */
+  roughReason: string | null;
+}
+
+/**
+ * A refractometer reading once fermentation may have started. With no drop from the original
+ * reading nothing has fermented, so it is the plain Brix-to-gravity conversion; with a drop it is
+ * Terrill's cubic, flagged rough outside the range it was fitted to, and refused where the cubic
+ * would put the beer above the wort it came from.
+ */
+export function fermentingRefractometerSg(originalBrix: number, currentBrix: number, wcf = 1): FermentingRefractometerEstimate {
+  requireBrix(originalBrix, 'originalBrix', 'Original Brix reading');
+  requireBrix(currentBrix, 'currentBrix', 'Current Brix reading');
+  requireWcf(wcf);
+  if (currentBrix > originalBrix + NO_DROP_BRIX / 2) {
+    // Let refractometerWithAlcoholSg word the error.
+    refractometerWithAlcoholSg(originalBrix, currentBrix, wcf);
+  }
+  const og = brixToSg(originalBrix, wcf);
+  if (originalBrix - currentBrix < NO_DROP_BRIX - 1e-9) {
+    return { sg: brixToSg(Math.min(currentBrix, originalBrix), wcf), method: 'unfermented', apparentAttenuation: 0, rough: false, roughReason: null };
+  }
+  const { ogMin, ogMax, attenuationMin, attenuationMax } = TERRILL_FIT_RANGE;
+  const range = `Terrill's (2011) correction was fitted to finished beers of OG ${showSg(ogMin)}–${showSg(ogMax)} at ${show(attenuationMin * 100, 0)}–${show(attenuationMax * 100, 0)} % apparent attenuation`;
+  const sg = refractometerWithAlcoholSg(originalBrix, currentBrix, wcf);
+  const attenuation = (og - sg) / (og - 1);
+  if (attenuation <= 0) {
+    throw new BrewMathError(
+      `${show(currentBrix, 2)} °Bx now against ${show(originalBrix, 2)} °Bx at the start is too early in fermentation for the alcohol correction: it would give ${showSg(sg)}, above the wort's own ${showSg(og)}. ${range}. Use a hydrometer, or read again once fermentation is further along.`,
+      'out-of-range',
+      'currentBrix',
+    );
+  }
+  let roughReason: string | null = null;
+  if (og < ogMin - 1e-9 || og > ogMax + 1e-9) {
+    roughReason = `The original reading is OG ${showSg(og)}, outside the ${showSg(ogMin)}–${showSg(ogMax)} the correction was fitted to: a rough estimate only.`;
+  } else if (attenuation < attenuationMin) {
+    roughReason = `Early in fermentation (about ${show(attenuation * 100, 0)} % attenuated): ${range}, so this is a rough estimate only.`;
+  } else if (attenuation > attenuationMax) {
+    roughReason = `About ${show(attenuation * 100, 0)} % attenuated, beyond the ${show(attenuationMax * 100, 0)} % the correction was fitted to: a rough estimate only.`;
+  }
+  return { sg, method: 'terrill-2011-cubic', apparentAttenuation: attenuation, rough: roughReason !== null, roughReason };
 }

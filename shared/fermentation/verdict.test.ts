@@ -3,16 +3,17 @@ import { fermentationVerdict } from './verdict';
 
 // The rule checked here is common practice, no source: time alone proves nothing; start checking
 // final gravity around day 12; package only when two hydrometer readings at least two days apart
-// agree (within 0.001). An alcohol-corrected refractometer reading is only an estimate.
+// are the same at the hydrometer's resolution; steady far above the recipe's FG is stuck. An
+// alcohol-corrected refractometer reading is only an estimate.
 const pitched = new Date('2026-03-01T18:00:00Z');
 const day = (n: number) => new Date(pitched.getTime() + n * 86_400_000);
-const hyd = (d: number, sg: number) => ({ takenAt: day(d), sg, estimate: false });
+const hyd = (d: number, sg: number, resolutionSg?: number) => ({ takenAt: day(d), sg, estimate: false, resolutionSg });
 const refr = (d: number, sg: number) => ({ takenAt: day(d), sg, estimate: true });
 
 describe('the fermentation verdict (common practice, no source)', () => {
   it('is never stable on elapsed days alone', () => {
     const v = fermentationVerdict([], pitched, day(40));
-    expect(v.state).toBe('too-early');
+    expect(v.state).toBe('no-reading');
     expect(v.reason).toMatch(/Take one now/);
     expect(v.nextCheckAt).toBe(day(40).toISOString());
   });
@@ -41,7 +42,7 @@ describe('the fermentation verdict (common practice, no source)', () => {
 
   it('refractometer estimates alone never make it stable: it asks for a hydrometer reading', () => {
     const v = fermentationVerdict([refr(12, 1.011), refr(14, 1.011), refr(17, 1.011)], pitched, day(17));
-    expect(v.state).toBe('too-early');
+    expect(v.state).toBe('no-reading');
     expect(v.needsHydrometer).toBe(true);
     expect(v.reason).toMatch(/hydrometer/);
   });
@@ -66,5 +67,17 @@ describe('the fermentation verdict (common practice, no source)', () => {
   it('a hydrometer reading that moved again after an agreeing pair keeps it moving', () => {
     const v = fermentationVerdict([hyd(12, 1.012), hyd(14, 1.012), hyd(16, 1.008)], pitched, day(16));
     expect(v.state).toBe('moving');
+  });
+
+  it('steady far above the recipe FG is stuck, with its own words and a next check', () => {
+    const v = fermentationVerdict([hyd(14, 1.03), hyd(17, 1.03)], pitched, day(17), { expectedFgSg: 1.012 });
+    expect(v.state).toBe('stuck');
+    expect(v.reason).toMatch(/steady, but 0\.018 above the 1\.012 this recipe should finish at/);
+    expect(v.nextCheckAt).toBe(day(19).toISOString());
+  });
+
+  it("uses each reading's hydrometer resolution", () => {
+    expect(fermentationVerdict([hyd(14, 1.013), hyd(16, 1.012)], pitched, day(16)).state).toBe('moving');
+    expect(fermentationVerdict([hyd(14, 1.0129, 0.002), hyd(16, 1.012, 0.002)], pitched, day(16)).state).toBe('stable');
   });
 });

@@ -100,17 +100,27 @@ export interface ThermometerCheckResult {
   /** Where pure water boils at the brewer's elevation on a standard day. */
   expectedBoilingC: number | null;
   boilingOffsetC: number | null;
-  /** How far the thermometer reads above (+) or below (−) true: subtracted from every reading. */
+  /**
+   * How far the thermometer reads above (+) or below (−) true at 0 °C (or at the one point
+   * checked): subtracted from every reading before `scale` applies.
+   */
   offsetC: number;
+  /**
+   * Two-point correction: true = (reading − offsetC) × scale, the straight line through the ice
+   * point and the boiling point. 1 with only one check.
+   */
+  scale: number;
   /** More than 1 °C off. */
   flagged: boolean;
   warnings: string[];
 }
 
 /**
- * A thermometer's offset from a check in a stirred ice bath (0 °C) and/or in water at a rolling
- * boil (boiling point from the elevation: ISA pressure and IAPWS-IF97, in shared/brewmath). With
- * both, the offset is their mean.
+ * A thermometer's correction from a check in a stirred ice bath (0 °C) and/or in water at a
+ * rolling boil (boiling point from the elevation: ISA pressure and IAPWS-IF97, in
+ * shared/brewmath). With one check it is a plain offset; with both it is the straight line through
+ * the two fixed points (a two-point calibration, as for any linear sensor), so the correction
+ * changes with temperature as the error does.
  */
 export function thermometerCheck(input: ThermometerCheckInput): ThermometerCheckResult {
   const ice = input.iceReadingC ?? null;
@@ -148,21 +158,33 @@ export function thermometerCheck(input: ThermometerCheckInput): ThermometerCheck
       );
     }
   }
-  const offsets = [iceOffsetC, boilingOffsetC].filter((o): o is number => o !== null);
-  const offsetC = offsets.reduce((a, b) => a + b, 0) / offsets.length;
-  const flagged = Math.abs(offsetC) > THERMOMETER_OFFSET_FLAG_C;
+  let offsetC: number;
+  let scale = 1;
+  if (iceOffsetC !== null && boilingOffsetC !== null && expectedBoilingC !== null) {
+    offsetC = iceOffsetC;
+    const span = boiling! - ice!;
+    if (!(span > 0)) {
+      throw new BrewMathError('The boiling-water reading must be above the ice-bath reading.', 'inconsistent', 'boilingReadingC');
+    }
+    scale = expectedBoilingC / span;
+  } else {
+    offsetC = (iceOffsetC ?? boilingOffsetC)!;
+  }
+  const worst = Math.max(Math.abs(iceOffsetC ?? 0), Math.abs(boilingOffsetC ?? 0));
+  const flagged = worst > THERMOMETER_OFFSET_FLAG_C;
   if (flagged) {
+    const off = Math.abs(iceOffsetC ?? 0) >= Math.abs(boilingOffsetC ?? 0) ? iceOffsetC! : boilingOffsetC!;
     warnings.push(
-      `This thermometer reads ${Math.abs(offsetC).toFixed(1)} °C ${offsetC > 0 ? 'high' : 'low'}, more than 1 °C off. Wortwise will correct for it, but a thermometer this far out may drift further: check it often, or replace it.`,
+      `This thermometer reads ${Math.abs(off).toFixed(1)} °C ${off > 0 ? 'high' : 'low'}, more than 1 °C off. Wortwise will correct for it, but a thermometer this far out may drift further: check it often, or replace it.`,
     );
   }
-  if (iceOffsetC !== null && boilingOffsetC !== null && Math.abs(iceOffsetC - boilingOffsetC) > 1) {
+  if (iceOffsetC !== null && boilingOffsetC !== null && Math.abs(iceOffsetC - boilingOffsetC) > 0.05) {
     warnings.push(
-      `It is off by ${iceOffsetC.toFixed(1)} °C in ice but ${boilingOffsetC.toFixed(1)} °C at the boil, so its error changes with temperature. The saved offset is the average; trust it most between the two.`,
+      `It is off by ${iceOffsetC.toFixed(1)} °C in ice but ${boilingOffsetC.toFixed(1)} °C at the boil, so its error changes with temperature: readings are corrected along the straight line between the two checks.`,
     );
   }
   if (boilingOffsetC !== null) {
     warnings.push('Weather moves the boiling point by up to about 1 °C; the ice bath is the more exact check.');
   }
-  return { iceOffsetC, expectedBoilingC, boilingOffsetC, offsetC, flagged, warnings };
+  return { iceOffsetC, expectedBoilingC, boilingOffsetC, offsetC, scale, flagged, warnings };
 }

@@ -71,8 +71,36 @@ describe('refractometer: the wort correction factor of the snapshot', () => {
     //    = 1 − 0.0539916 + 0.070644 + 0.03971664 − 0.0457812 − 0.01257984 + 0.013671288 = 1.011679
     const r = correctReading(refractometer, { brix: 6.24, originalBrix: 12.48, fermentationStarted: true });
     expect(Math.abs(r.corrected - 1.011679)).toBeLessThan(1e-6);
-    expect(r.correction).toEqual({ kind: 'wcf-alcohol', wcf: 1.04, originalBrix: 12.48, formula: 'terrill-2011-cubic' });
+    // OG of 12 °P is about 1.0484 (ASBC Plato table, recalled from memory), so about 76 % attenuated:
+    // inside the 73–91 % the correction was fitted to, not rough.
+    expect(r.correction).toEqual({ kind: 'wcf-alcohol', wcf: 1.04, originalBrix: 12.48, formula: 'terrill-2011-cubic', rough: false });
     expect(r.warnings.join(' ')).toMatch(/Alcohol skews a refractometer/);
+  });
+
+  it('with no drop from the original reading it is plain wort, not 1.195 (issue case 20.8 °Bx against 20.8 °Bx)', () => {
+    // 20.8 / 1.04 = 20.0 °P, which the ASBC Plato table gives as SG 1.0829 (recalled from memory).
+    const r = correctReading(refractometer, { brix: 20.8, originalBrix: 20.8, fermentationStarted: true });
+    expect(r.corrected).toBeCloseTo(1.0829, 3);
+    expect(r.correction).toMatchObject({ formula: 'unfermented' });
+    expect(r.warnings.join(' ')).toMatch(/nothing has fermented/);
+  });
+
+  it('refuses, under the Brix field, a small drop where the correction would exceed the wort itself', () => {
+    // Terrill cubic at OB 20, FB 17 (worked by hand): 1 − 0.089986 + 0.200158 + 0.110324 − 0.3675213
+    // − 0.05824 + 0.310958 = 1.1057, above the wort's 1.0829.
+    const e = brewError(() => correctReading(refractometer, { brix: 17 * 1.04, originalBrix: 20.8, fermentationStarted: true }));
+    expect(e.field).toBe('brix');
+    expect(e.message).toMatch(/too early in fermentation/);
+    expect(e.message).toMatch(/Terrill's \(2011\) correction was fitted to finished beers of OG 1\.036–1\.106 at 73–91 % apparent attenuation/);
+  });
+
+  it('flags an early-fermentation estimate as rough', () => {
+    // Terrill cubic at OB 20, FB 14 (worked by hand): 1 − 0.089986 + 0.164836 + 0.110324 − 0.2492532
+    // − 0.05824 + 0.17367599 = 1.05136: (1.0829 − 1.0514) / 0.0829 ≈ 38 % attenuated, below 73 %.
+    const r = correctReading(refractometer, { brix: 14 * 1.04, originalBrix: 20.8, fermentationStarted: true });
+    expect(Math.abs(r.corrected - 1.05136)).toBeLessThan(1e-5);
+    expect(r.correction).toMatchObject({ rough: true });
+    expect(r.warnings.join(' ')).toMatch(/Early in fermentation \(about 38 % attenuated\).*rough estimate/);
   });
 
   it('refuses a fermenting reading without the original Brix instead of giving a wrong gravity', () => {

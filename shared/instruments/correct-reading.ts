@@ -4,9 +4,10 @@
  * and a corrected number stored can never disagree. The snapshot is the calibration at the
  * moment of the reading; see docs/decisions/0005-readings-keep-their-calibration.md.
  */
-import { BrewMathError, brixToSg, correctHydrometer, hydrometerTempWarning, refractometerWithAlcoholSg } from '../brewmath';
+import { BrewMathError, brixToSg, correctHydrometer, fermentingRefractometerSg, hydrometerTempWarning } from '../brewmath';
 import {
   DEFAULT_HYDROMETER_CALIBRATION_C,
+  DEFAULT_HYDROMETER_RESOLUTION_SG,
   DEFAULT_PH_REMINDER_DAYS,
   DEFAULT_PH_RESOLUTION,
   DEFAULT_WCF,
@@ -48,8 +49,17 @@ export type Correction =
   | { kind: 'temperature'; calibrationTempC: number; sampleTempC: number }
   | { kind: 'wcf'; wcf: number }
   /** Alcohol-corrected estimate: S. Terrill (2011) cubic, with the original Brix. */
-  | { kind: 'wcf-alcohol'; wcf: number; originalBrix: number; formula: 'terrill-2011-cubic' }
-  | { kind: 'offset'; offsetC: number }
+  | {
+      kind: 'wcf-alcohol';
+      wcf: number;
+      originalBrix: number;
+      /** 'unfermented': no drop from the original reading yet, so the plain conversion. */
+      formula: 'terrill-2011-cubic' | 'unfermented';
+      /** Outside the range the correction was fitted to (absent on readings stored before it was flagged). */
+      rough?: boolean;
+    }
+  /** true = (reading − offsetC) × scale; scale is absent (1) for a one-point check. */
+  | { kind: 'offset'; offsetC: number; scale?: number }
   /** A pH meter corrects itself through its two-point calibration; we only record its state. */
   | { kind: 'ph-calibration'; calibratedOn: string | null; daysSinceCalibration: number | null; reminderDays: number };
 
@@ -127,13 +137,28 @@ function correctRefractometerReading(snapshot: RefractometerSnapshot, raw: Refra
       );
     }
     const originalBrix = requireNumber(raw.originalBrix, 'originalBrix', 'Original Brix reading');
-    const corrected = refractometerWithAlcoholSg(originalBrix, brix, wcf);
-    warnings.push(
-      'Alcohol skews a refractometer once fermentation starts: this is an alcohol-corrected estimate from the original Brix. Confirm the final gravity with a hydrometer before packaging.',
-    );
-    return { corrected, correction: { kind: 'wcf-alcohol', wcf, originalBrix, formula: 'terrill-2011-cubic' }, warnings };
+    const estimate = withField(() => fermentingRefractometerSg(originalBrix, brix, wcf), { currentBrix: 'brix' });
+    if (estimate.method === 'unfermented') {
+      warnings.push('No drop from the original reading yet, so nothing has fermented: this is the plain Brix-to-gravity conversion.');
+    } else {
+      warnings.push(
+        'Alcohol skews a refractometer once fermentation starts: this is an alcohol-corrected estimate from the original Brix. Confirm the final gravity with a hydrometer before packaging.',
+      );
+      if (estimate.roughReason) warnings.push(estimate.roughReason);
+    }
+    return { corrected: estimate.sg, correction: { kind: 'wcf-alcohol', wcf, originalBrix, formula: estimate.method, rough: estimate.rough }, warnings };
   }
   return { corrected: brixToSg(brix, wcf), correction: { kind: 'wcf', wcf }, warnings };
+}
+
+/** The math names its own parameters; a form names its fields. */
+function withField<T>(fn: () => T, fields: Record<string, string>): T {
+  try {
+    return fn();
+  } catch (error) {
+    if (error instanceof BrewMathError && error.field && fields[error.field]) throw new BrewMathError(error.message, error.code, fields[error.field]);
+    throw error;
+  }
 }
 
 function correctThermometerReading(snapshot: ThermometerSnapshot, raw: ThermometerRaw): CorrectedReading {
@@ -151,7 +176,8 @@ function correctThermometerReading(snapshot: ThermometerSnapshot, raw: Thermomet
   if (snapshot.checkedOn === null && offsetC === 0) {
     warnings.push('This thermometer has not been checked yet. Built-in gauges and stick-on strips can be several degrees off: check it in an ice bath.');
   }
-  return { corrected: tempC - offsetC, correction: { kind: 'offset', offsetC }, warnings };
+  const scale = snapshot.scale ?? 1;
+  return { corrected: (tempC - offsetC) * scale, correction: scale === 1 ? { kind: 'offset', offsetC } : { kind: 'offset', offsetC, scale }, warnings };
 }
 
 const DAY_MS = 86_400_000;
@@ -218,7 +244,13 @@ export function defaultSnapshot(kind: InstrumentKind): InstrumentSnapshot {
   const base = { instrumentId: null, calibrationId: null } as const;
   switch (kind) {
     case 'hydrometer':
-      return { ...base, kind, name: 'Hydrometer (20 °C, assumed)', calibrationTempC: DEFAULT_HYDROMETER_CALIBRATION_C };
+      return {
+        ...base,
+        kind,
+        name: 'Hydrometer (20 °C, assumed)',
+        calibrationTempC: DEFAULT_HYDROMETER_CALIBRATION_C,
+        resolutionSg: DEFAULT_HYDROMETER_RESOLUTION_SG,
+      };
     case 'refractometer':
       return { ...base, kind, name: `Refractometer (factor ${DEFAULT_WCF}, assumed)`, wcf: DEFAULT_WCF, wcfSource: 'default' };
     case 'thermometer':

@@ -18,6 +18,12 @@ export const BOIL_CHECK_LIMITS = {
   minutesLeft: 360,
   boilOffLPerHour: 100,
   coolingShrinkage: 0.1,
+  kettleLossL: 50,
+  /**
+   * The hydrometer correction assumes wort expands like water; far from the calibration
+   * temperature that no longer holds well enough to decide a boil (common practice, no source).
+   */
+  hydrometerSampleMaxC: 40,
 } as const;
 
 const gal = showGal;
@@ -66,6 +72,9 @@ export const targetSgSchema = number('the target OG', 'Target OG', (v) => v > 1 
 const shrinkageSchema = number('the cooling shrinkage', 'Cooling shrinkage', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.coolingShrinkage, () =>
   'Cooling shrinkage must be between 0 and 10 % (about 4 % is usual).',
 );
+const kettleLossSchema = number('the kettle losses', 'Kettle losses', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.kettleLossL, () =>
+  `Kettle losses (trub and dead space) must be between 0 and ${BOIL_CHECK_LIMITS.kettleLossL} L (0 and ${gal(BOIL_CHECK_LIMITS.kettleLossL)}).`,
+);
 const potentialSchema = number('the extract potential', 'Potential', (v) => v >= POTENTIAL_MIN_POINTS_L_PER_KG && v <= POTENTIAL_MAX_POINTS_L_PER_KG, () =>
   `Potential must be between ${POTENTIAL_MIN_POINTS_L_PER_KG} and ${POTENTIAL_MAX_POINTS_L_PER_KG} points·L/kg (about 6 to 54 points per lb per gallon); table sugar is about 384 (46).`,
 );
@@ -89,8 +98,10 @@ export const refractometerReadingSchema = z.object({
 export const hydrometerReadingSchema = z.object({
   kind: z.literal('hydrometer'),
   sg: wortGravity('the hydrometer reading', 'Hydrometer reading'),
-  sampleTempC: number('the sample temperature', 'Sample temperature', (v) => v >= 0 && v <= 100, () =>
-    `Sample temperature must be between 0 and 100 °C (${f(0)} and ${f(100)}). Cool the sample before reading it.`,
+  sampleTempC: number('the sample temperature', 'Sample temperature', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.hydrometerSampleMaxC, (v) =>
+    v < 0
+      ? `Sample temperature must be between 0 and ${BOIL_CHECK_LIMITS.hydrometerSampleMaxC} °C (${f(0)} and ${f(BOIL_CHECK_LIMITS.hydrometerSampleMaxC)}).`
+      : `A sample at ${v} °C (${f(v)}) is too hot to decide the boil on: the hydrometer correction assumes wort expands like water, which holds only near room temperature. Cool the sample below ${BOIL_CHECK_LIMITS.hydrometerSampleMaxC} °C (${f(BOIL_CHECK_LIMITS.hydrometerSampleMaxC)}), ideally to the hydrometer's calibration temperature, and read it again.`,
   ),
   calibrationTempC: number('the calibration temperature', 'Calibration temperature', (v) => v >= 0 && v <= 40, () =>
     `Calibration temperature must be between 0 and 40 °C (${f(0)} and ${f(40)}); most hydrometers say ${DEFAULT_CALIBRATION_TEMP_C} °C or 60 °F on the scale.`,
@@ -113,6 +124,7 @@ const boilCheckFields = z.object({
   potentials: potentialsSchema.optional(),
   kettleCapacityL: volume('the kettle size', 'Kettle size').optional(),
   coolingShrinkage: shrinkageSchema.optional(),
+  kettleLossL: kettleLossSchema.optional(),
 });
 
 /**
@@ -147,5 +159,6 @@ export const boilCorrectionRequestSchema = z.object({
   extract: potentialsSchema.optional(),
   kettleCapacityL: volume('the kettle size', 'Kettle size').optional(),
   coolingShrinkage: shrinkageSchema.optional(),
+  kettleLossL: kettleLossSchema.optional(),
 });
 export type BoilCorrectionRequest = z.input<typeof boilCorrectionRequestSchema>;

@@ -27,6 +27,9 @@ export const THERMOMETER_OFFSET_FLAG_C = 1;
 export const THERMOMETER_OFFSET_MAX_C = 10;
 
 export const DEFAULT_PH_RESOLUTION = 0.01;
+/** Most brewing hydrometers are marked every 0.001; finer lab ones every 0.0005, coarse ones every 0.002. */
+export const DEFAULT_HYDROMETER_RESOLUTION_SG = 0.001;
+export const HYDROMETER_RESOLUTION_PRESETS_SG = [0.0005, 0.001, 0.002] as const;
 export const DEFAULT_PH_REMINDER_DAYS = 30;
 /** The usual pair of buffers for a two-point calibration around mash pH (common practice, no source). */
 export const DEFAULT_PH_BUFFERS = { low: 4.01, high: 7.0 } as const;
@@ -56,6 +59,10 @@ export const wcfSchema = finite('Wort correction factor').min(WCF_MIN, { error: 
 
 const offsetMessage = `An offset over ${THERMOMETER_OFFSET_MAX_C} °C means the thermometer is broken or was misread: replace it rather than correct it.`;
 export const offsetSchema = finite('Offset').min(-THERMOMETER_OFFSET_MAX_C, { error: offsetMessage }).max(THERMOMETER_OFFSET_MAX_C, { error: offsetMessage });
+
+export const hydrometerResolutionSchema = finite('Scale step')
+  .min(0.0001, { error: 'The scale step is the gap between two marks on the hydrometer: between 0.0001 and 0.005 (usually 0.001).' })
+  .max(0.005, { error: 'The scale step is the gap between two marks on the hydrometer: between 0.0001 and 0.005 (usually 0.001).' });
 
 export const phResolutionSchema = finite('Resolution')
   .positive({ error: 'The resolution is the smallest step the meter shows, e.g. 0.01.' })
@@ -96,6 +103,7 @@ const hydrometerCreate = z.object({
   name: instrumentNameSchema,
   notes: notesSchema,
   calibrationTempC: calibrationTempSchema.default(DEFAULT_HYDROMETER_CALIBRATION_C),
+  resolutionSg: hydrometerResolutionSchema.default(DEFAULT_HYDROMETER_RESOLUTION_SG),
 });
 const refractometerCreate = z.object({
   kind: z.literal('refractometer'),
@@ -215,6 +223,7 @@ const phTwoPointCalibration = z
 const setCalibration = z.object({
   method: z.literal('set'),
   calibrationTempC: calibrationTempSchema.optional(),
+  resolutionSg: hydrometerResolutionSchema.optional(),
   wcf: wcfSchema.optional(),
   offsetC: offsetSchema.optional(),
   resolutionPh: phResolutionSchema.optional(),
@@ -237,8 +246,8 @@ export const methodsByKind: Record<InstrumentKind, readonly CalibrationMethod[]>
 };
 
 /** Which directly settable values belong to which instrument. */
-export const settableByKind: Record<InstrumentKind, readonly ('calibrationTempC' | 'wcf' | 'offsetC' | 'resolutionPh' | 'reminderDays')[]> = {
-  hydrometer: ['calibrationTempC'],
+export const settableByKind: Record<InstrumentKind, readonly ('calibrationTempC' | 'resolutionSg' | 'wcf' | 'offsetC' | 'resolutionPh' | 'reminderDays')[]> = {
+  hydrometer: ['calibrationTempC', 'resolutionSg'],
   refractometer: ['wcf'],
   thermometer: ['offsetC'],
   ph_meter: ['resolutionPh', 'reminderDays'],
@@ -255,9 +264,22 @@ const snapshotBase = {
   calibrationId: z.number().int().positive().nullable(),
 };
 
-export const hydrometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('hydrometer'), calibrationTempC: z.number() });
+export const hydrometerSnapshotSchema = z.object({
+  ...snapshotBase,
+  kind: z.literal('hydrometer'),
+  calibrationTempC: z.number(),
+  /** Absent in snapshots taken before hydrometers had a scale step: read as 0.001. */
+  resolutionSg: z.number().optional(),
+});
 export const refractometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('refractometer'), wcf: z.number(), wcfSource: z.enum(wcfSources) });
-export const thermometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('thermometer'), offsetC: z.number(), checkedOn: z.string().nullable() });
+export const thermometerSnapshotSchema = z.object({
+  ...snapshotBase,
+  kind: z.literal('thermometer'),
+  offsetC: z.number(),
+  /** Two-point (ice and boil) correction: true = (reading − offsetC) × scale; absent means 1. */
+  scale: z.number().optional(),
+  checkedOn: z.string().nullable(),
+});
 export const phMeterSnapshotSchema = z.object({
   ...snapshotBase,
   kind: z.literal('ph_meter'),
@@ -285,6 +307,7 @@ export interface Instrument {
   notes: string | null;
   archived: boolean;
   calibrationTempC: number | null;
+  resolutionSg: number | null;
   wcf: number | null;
   wcfSource: WcfSource | null;
   offsetC: number | null;

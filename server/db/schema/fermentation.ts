@@ -15,7 +15,7 @@ import { jsonDoc } from './columns';
 
 const stamp = (name: string) => timestamp(name, { mode: 'date', fsp: 3 });
 const created = (name: string) => stamp(name).notNull().default(sql`CURRENT_TIMESTAMP(3)`);
-const fgStates = ['too-early', 'moving', 'stable'] as const;
+const fgStates = ['no-reading', 'too-early', 'moving', 'stuck', 'stable'] as const;
 
 /**
  * One fermentation reading (gravity or fermenter temperature) with its instrument's calibration

@@ -18,11 +18,15 @@ export const instruments = mysqlTable(
     notes: text('notes'),
     /** Hydrometer: the temperature at which it reads true, °C. */
     calibrationTempC: double('calibration_temp_c'),
+    /** Hydrometer: its smallest scale step in SG (0.001 on most brewing hydrometers); null reads as 0.001. */
+    resolutionSg: double('resolution_sg'),
     /** Refractometer: wort correction factor, and whether it is the default, typed in, or measured from pairs. */
     wcf: double('wcf'),
     wcfSource: mysqlEnum('wcf_source', wcfSources),
     /** Thermometer: how far it reads above (+) or below (−) true, °C, and when that was checked. */
     offsetC: double('offset_c'),
+    /** Thermometer: the two-point slope, true = (reading − offset) × scale; null is 1 (one-point check). */
+    offsetScale: double('offset_scale'),
     offsetCheckedOn: date('offset_checked_on', { mode: 'string' }),
     /** pH meter: display resolution, last two-point calibration, its buffers, and the reminder interval. */
     resolutionPh: double('resolution_ph'),

@@ -38,6 +38,7 @@ function checkStart(brew: BrewDetail, wcf: number | undefined, calibrationTempC:
     targetFg: brew.targets.targetFg,
     kettleCapacityL: brew.equipment.kettleCapacityL ?? undefined,
     coolingShrinkage: brew.equipment.coolingShrinkage,
+    kettleLossL: brew.equipment.trubLossL + brew.equipment.deadSpaceL,
   };
 }
 

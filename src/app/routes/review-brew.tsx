@@ -24,7 +24,13 @@ export function loader(queryClient: QueryClient) {
   };
 }
 
-const verdictWords = { 'too-early': 'Too early to tell', moving: 'Still moving', stable: 'Stable' } as const;
+const verdictWords = {
+  'no-reading': 'No reading yet',
+  'too-early': 'Too early to tell',
+  moving: 'Still moving',
+  stuck: 'Steady, but well above the recipe FG',
+  stable: 'Stable',
+} as const;
 
 const clock = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
 

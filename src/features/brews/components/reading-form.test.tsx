@@ -19,6 +19,7 @@ function instrument(id: number, snapshot: InstrumentSnapshot): Instrument {
     notes: null,
     archived: false,
     calibrationTempC: snapshot.kind === 'hydrometer' ? snapshot.calibrationTempC : null,
+    resolutionSg: snapshot.kind === 'hydrometer' ? (snapshot.resolutionSg ?? 0.001) : null,
     wcf: snapshot.kind === 'refractometer' ? snapshot.wcf : null,
     wcfSource: snapshot.kind === 'refractometer' ? snapshot.wcfSource : null,
     offsetC: snapshot.kind === 'thermometer' ? snapshot.offsetC : null,

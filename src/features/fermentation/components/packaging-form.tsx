@@ -100,12 +100,13 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
           {!stable && (
             <div className="space-y-3 rounded-lg bg-alert-50 p-3 ring-1 ring-alert-500/30">
               <p className="text-sm font-semibold text-alert-700">
-                The verdict is “{log.verdict ? verdictTitles[log.verdict.state] : 'unknown'}”: the final gravity is not proven stable. Packaging now risks
-                over-carbonated or bursting bottles.
+                {log.verdict?.state === 'stuck'
+                  ? 'The gravity is steady, but well above where this recipe should finish: the fermentation looks stuck, not finished. Sugar left in the beer can start fermenting again in the bottle and burst it.'
+                  : `The verdict is “${log.verdict ? verdictTitles[log.verdict.state] : 'unknown'}”: the final gravity is not proven stable. Packaging now risks over-carbonated or bursting bottles.`}
               </p>
               <label className="flex min-h-touch cursor-pointer items-center gap-3 text-base">
                 <OverrideCheckbox />
-                Package anyway, before the gravity is stable
+                {log.verdict?.state === 'stuck' ? 'Package anyway, although the gravity is well above the recipe’s' : 'Package anyway, before the gravity is stable'}
               </label>
               {errors.override && (
                 <p role="alert" className="text-sm font-semibold text-alert-700">

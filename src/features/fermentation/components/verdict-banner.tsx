@@ -1,11 +1,13 @@
-import { CircleCheck, Hourglass, TrendingDown } from 'lucide-react';
+import { CircleCheck, Hourglass, OctagonPause, TrendingDown } from 'lucide-react';
 import type { FermentationVerdict } from '@shared/schemas/fermentation';
 import { useUnits } from '@/lib/units';
 import { shortDate, verdictTitles } from './words';
 
 const looks = {
+  'no-reading': { box: 'bg-cellar-50 ring-cellar-300 text-cellar-900', Icon: Hourglass },
   'too-early': { box: 'bg-cellar-50 ring-cellar-300 text-cellar-900', Icon: Hourglass },
   moving: { box: 'bg-malt-50 ring-malt-300 text-malt-700', Icon: TrendingDown },
+  stuck: { box: 'bg-malt-50 ring-malt-300 text-malt-700', Icon: OctagonPause },
   stable: { box: 'bg-ok-50 ring-ok-500 text-ok-700', Icon: CircleCheck },
 } as const;
 

@@ -3,8 +3,10 @@ import type { FgState } from '@shared/brewmath';
 import type { FermentationMethod } from '@shared/schemas/fermentation';
 
 export const verdictTitles: Record<FgState, string> = {
+  'no-reading': 'No reading yet',
   'too-early': 'Too early to tell',
   moving: 'Still moving',
+  stuck: 'Steady, but well above where this recipe should finish',
   stable: 'Stable: safe to package',
 };
 

@@ -10,6 +10,7 @@ import {
 } from '@shared/schemas/instruments';
 import { SaveFooter } from '@/components/ui/save-footer';
 import { CalibrationTempChoice } from './calibration-temp-choice';
+import { HydrometerResolutionChoice } from './hydrometer-resolution-choice';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -24,6 +25,7 @@ interface AddValues {
   name: string;
   preset: string;
   calibrationTempC: FormNumber;
+  resolutionSg: string;
   wcf: FormNumber;
   resolutionPh: string;
   reminderDays: FormNumber;
@@ -40,7 +42,12 @@ const namePlaceholders: Record<InstrumentKind, string> = {
 function toInput(v: AddValues): CreateInstrumentInput {
   switch (v.kind) {
     case 'hydrometer':
-      return { kind: v.kind, name: v.name, calibrationTempC: (v.preset === 'other' ? formNumber(v.calibrationTempC) : Number(v.preset)) as number };
+      return {
+        kind: v.kind,
+        name: v.name,
+        calibrationTempC: (v.preset === 'other' ? formNumber(v.calibrationTempC) : Number(v.preset)) as number,
+        resolutionSg: Number(v.resolutionSg),
+      };
     case 'refractometer':
       return { kind: v.kind, name: v.name, ...(v.wcf === '' || v.wcf === null ? {} : { wcf: v.wcf }) };
     case 'thermometer':
@@ -54,7 +61,7 @@ export function AddInstrumentForm({ units, onAdded, onCancel }: { units: Units; 
   const create = useCreateInstrument();
   return (
     <Formik<AddValues>
-      initialValues={{ kind: 'hydrometer', name: '', preset: '20', calibrationTempC: 20, wcf: '', resolutionPh: '0.01', reminderDays: DEFAULT_PH_REMINDER_DAYS, calibratedOn: '' }}
+      initialValues={{ kind: 'hydrometer', name: '', preset: '20', calibrationTempC: 20, resolutionSg: '0.001', wcf: '', resolutionPh: '0.01', reminderDays: DEFAULT_PH_REMINDER_DAYS, calibratedOn: '' }}
       validate={(v) => zodValidate(createInstrumentSchema)(toInput(v))}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
@@ -88,7 +95,10 @@ export function AddInstrumentForm({ units, onAdded, onCancel }: { units: Units; 
           <TextField name="name" label="Name" placeholder={namePlaceholders[values.kind]} />
 
           {values.kind === 'hydrometer' && (
-            <CalibrationTempChoice preset={values.preset} units={units} />
+            <>
+              <CalibrationTempChoice preset={values.preset} units={units} />
+              <HydrometerResolutionChoice />
+            </>
           )}
           {values.kind === 'refractometer' && (
             <NumberField

@@ -109,7 +109,9 @@ function CheckReadingBody({ snapshot, units }: { snapshot: InstrumentSnapshot; u
           </dd>
         </div>
         <div className="rounded-lg bg-white p-2 ring-2 ring-cellar-300">
-          <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Corrected</dt>
+          <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">
+            {outcome && 'result' in outcome && outcome.result.correction.kind === 'wcf-alcohol' && outcome.result.correction.rough ? 'Rough estimate' : 'Corrected'}
+          </dt>
           <dd className="text-xl font-bold tabular-nums text-cellar-900" data-testid="corrected">
             {outcome && 'corrected' in outcome ? outcome.corrected : '—'}
           </dd>

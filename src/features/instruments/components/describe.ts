@@ -48,7 +48,7 @@ export function headline(instrument: Instrument, units: Units): { value: string;
 export function snapshotSummary(s: InstrumentSnapshot, units: Units): string {
   switch (s.kind) {
     case 'hydrometer':
-      return `calibrated at ${units.format('temperature', s.calibrationTempC)}`;
+      return `calibrated at ${units.format('temperature', s.calibrationTempC)}, scale step ${s.resolutionSg ?? 0.001}`;
     case 'refractometer':
       return `factor ${s.wcf.toFixed(3)}${s.wcfSource === 'default' ? ' (default)' : ''}`;
     case 'thermometer':
@@ -64,12 +64,17 @@ export function snapshotSummary(s: InstrumentSnapshot, units: Units): string {
 export function correctionInWords(c: Correction, units: Units): string {
   switch (c.kind) {
     case 'temperature':
-      return `Corrected from a sample at ${units.format('temperature', c.sampleTempC)} to the ${units.format('temperature', c.calibrationTempC)} calibration.`;
+      return `Corrected from a sample at ${units.format('temperature', c.sampleTempC)} to the ${units.format('temperature', c.calibrationTempC)} calibration, for wort, assuming it expands like water.`;
     case 'wcf':
       return `Brix ÷ ${c.wcf.toFixed(3)} (the wort correction factor), then the extract table.`;
     case 'wcf-alcohol':
-      return `Alcohol-corrected estimate (Terrill 2011) from ${c.originalBrix} °Bx before fermentation, factor ${c.wcf.toFixed(3)}.`;
+      return c.formula === 'unfermented'
+        ? `No drop from ${c.originalBrix} °Bx before fermentation yet: Brix ÷ ${c.wcf.toFixed(3)}, then the extract table.`
+        : `Alcohol-corrected estimate (Terrill 2011) from ${c.originalBrix} °Bx before fermentation, factor ${c.wcf.toFixed(3)}${c.rough ? ': rough, outside the range the correction was fitted to' : ''}.`;
     case 'offset':
+      if (c.scale !== undefined && c.scale !== 1) {
+        return `Two-point correction from the ice and boiling checks: (reading − ${signedDelta(units, c.offsetC)}) × ${c.scale.toFixed(4)}.`;
+      }
       return c.offsetC === 0 ? 'No offset to take off.' : `${signedDelta(units, c.offsetC)} taken off: this thermometer reads ${c.offsetC > 0 ? 'high' : 'low'}.`;
     case 'ph-calibration':
       return c.calibratedOn

@@ -33,7 +33,7 @@ const calibrateLabels: Partial<Record<InstrumentKind, string>> = {
   ph_meter: 'Record a calibration',
 };
 const settingsLabels: Record<InstrumentKind, string> = {
-  hydrometer: 'Calibration temperature',
+  hydrometer: 'Calibration temperature and scale step',
   refractometer: 'Type in a factor',
   thermometer: 'Type in an offset',
   ph_meter: 'Resolution and reminder',

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { calibrateInstrumentSchema, DEFAULT_HYDROMETER_CALIBRATION_C, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
 import { SaveFooter } from '@/components/ui/save-footer';
 import { CalibrationTempChoice } from './calibration-temp-choice';
+import { HydrometerResolutionChoice } from './hydrometer-resolution-choice';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -14,6 +15,7 @@ import { NumberField } from '@/components/ui/number-field';
 interface SettingsValues {
   preset: string;
   calibrationTempC: FormNumber;
+  resolutionSg: string;
   wcf: FormNumber;
   offsetC: FormNumber;
   resolutionPh: string;
@@ -25,7 +27,12 @@ function toBody(kind: Instrument['kind'], v: SettingsValues): CalibrateInstrumen
   const note = v.note.trim() || null;
   switch (kind) {
     case 'hydrometer':
-      return { method: 'set', note, calibrationTempC: (v.preset === 'other' ? formNumber(v.calibrationTempC) : Number(v.preset)) as number };
+      return {
+        method: 'set',
+        note,
+        calibrationTempC: (v.preset === 'other' ? formNumber(v.calibrationTempC) : Number(v.preset)) as number,
+        resolutionSg: Number(v.resolutionSg),
+      };
     case 'refractometer':
       return { method: 'set', note, wcf: formNumber(v.wcf) as number };
     case 'thermometer':
@@ -36,7 +43,7 @@ function toBody(kind: Instrument['kind'], v: SettingsValues): CalibrateInstrumen
 }
 
 const titles: Record<Instrument['kind'], string> = {
-  hydrometer: 'Save calibration temperature',
+  hydrometer: 'Save hydrometer settings',
   refractometer: 'Save this factor',
   thermometer: 'Save this offset',
   ph_meter: 'Save settings',
@@ -55,6 +62,7 @@ export function SettingsForm({ instrument, units, onDone }: { instrument: Instru
   const initial: SettingsValues = {
     preset,
     calibrationTempC: cal,
+    resolutionSg: String(instrument.resolutionSg ?? 0.001),
     wcf: instrument.wcf ?? '',
     offsetC: instrument.offsetC ?? 0,
     resolutionPh: String(instrument.resolutionPh ?? 0.01),
@@ -88,7 +96,10 @@ export function SettingsForm({ instrument, units, onDone }: { instrument: Instru
       {({ values, isSubmitting, status }) => (
         <Form noValidate className="space-y-4">
           {instrument.kind === 'hydrometer' && (
-            <CalibrationTempChoice preset={values.preset} units={units} />
+            <>
+              <CalibrationTempChoice preset={values.preset} units={units} />
+              <HydrometerResolutionChoice />
+            </>
           )}
           {instrument.kind === 'refractometer' && (
             <NumberField name="wcf" label="Wort correction factor" hint="Between 0.9 and 1.2; most refractometers need about 1.00 to 1.10." className="max-w-60" />

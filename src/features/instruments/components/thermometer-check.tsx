@@ -114,10 +114,11 @@ function CheckForm({ units, onCancel }: { units: Units; onCancel: () => void }) 
               </div>
             )}
             <div>
-              <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Offset</dt>
+              <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{result.ok.scale === 1 ? 'Offset' : 'Offset at 0 °C'}</dt>
               <dd className={`text-2xl font-bold tabular-nums ${result.ok.flagged ? 'text-alert-700' : 'text-cellar-900'}`} data-testid="offset">
                 {signedDelta(units, result.ok.offsetC)}
               </dd>
+              {result.ok.scale !== 1 && <dd className="text-xs text-ink-faint">two-point: corrected along the line through both checks</dd>}
             </div>
           </dl>
           {result.ok.warnings.map((w) => (

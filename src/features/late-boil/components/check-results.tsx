@@ -46,7 +46,7 @@ export function CheckResults({ input, outcome, units, choice, onChoose }: Result
           {gapInWords(result, units.gravityUnit)}
         </p>
         <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3">
-          <Stat label="Gravity now" value={units.format('gravity', currentSg)} note={reading.kind === 'refractometer' ? `from ${reading.brix} °Bx` : 'corrected for temperature'} />
+          <Stat label="Gravity now" value={units.format('gravity', currentSg)} note={reading.kind === 'refractometer' ? `from ${reading.brix} °Bx` : 'corrected for temperature, for wort, assuming it expands like water'} />
           <Stat label="OG at the end" value={units.format('gravity', result.projected.endSg)} note={`target ${units.format('gravity', result.targetSg)}`} testId="projected-og" />
           <Stat label="Hot at flame-out" value={units.format('volume', result.projected.endVolumeL)} testId="projected-hot" />
           <Stat
@@ -57,6 +57,12 @@ export function CheckResults({ input, outcome, units, choice, onChoose }: Result
           />
           <Stat label="ABV" value={formatAbv(result.projected.abvPercent)} />
         </dl>
+        <p className="mt-2 text-xs text-ink-faint" data-testid="kettle-losses">
+          {result.kettleLossL > 0
+            ? `Into the fermenter is after ${units.format('volume', result.kettleLossL)} of trub and dead space left in the kettle (${units.format('volume', result.projected.cooledVolumeL)} cooled in the kettle).`
+            : 'No kettle losses entered: every cooled litre is counted as reaching the fermenter.'}
+          {result.maxBoilVolumeL !== null && ` Additions keep about 10 % of the kettle free to boil: at most ${units.format('volume', result.maxBoilVolumeL)} in it.`}
+        </p>
         {result.fgAssumed && (
           <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
         )}

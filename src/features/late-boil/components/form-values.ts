@@ -29,6 +29,7 @@ export interface LateBoilFormValues {
   potentials: Record<ExtractKind, NumberValue>;
   kettleCapacityL: NumberValue;
   coolingShrinkage: NumberValue;
+  kettleLossL: NumberValue;
 }
 
 /**
@@ -47,6 +48,8 @@ export interface LateBoilInitialValues {
   potentials?: Partial<Record<ExtractKind, number>>;
   kettleCapacityL?: number;
   coolingShrinkage?: number;
+  /** The kettle profile's trub loss plus dead space. */
+  kettleLossL?: number;
 }
 
 const v = (value: number | null | undefined): NumberValue => (typeof value === 'number' ? value : '');
@@ -78,6 +81,7 @@ export function toFormValues(initial: LateBoilInitialValues = {}): LateBoilFormV
     },
     kettleCapacityL: v(initial.kettleCapacityL),
     coolingShrinkage: v(initial.coolingShrinkage ?? DEFAULT_COOLING_SHRINKAGE),
+    kettleLossL: v(initial.kettleLossL ?? 0),
   };
 }
 
@@ -107,6 +111,7 @@ export function toCheckInput(values: LateBoilFormValues): Record<string, unknown
     potentials: Object.keys(potentials).length > 0 ? potentials : undefined,
     kettleCapacityL: optional(values.kettleCapacityL),
     coolingShrinkage: optional(values.coolingShrinkage),
+    kettleLossL: optional(values.kettleLossL),
   };
 }
 

@@ -172,10 +172,19 @@ describe('LateBoilCheck', { timeout: 30_000 }, () => {
     renderCheck({ initialValues: { volumeL: 26, boilOffLPerHour: 4, targetSg: 1.05 } });
     await user.click(screen.getByLabelText('Hydrometer (cooled sample)'));
     await typeInto('Hydrometer reading', '1.040');
-    await typeInto('Sample temperature', '45');
-    // Water at 45 °C is 990.2 kg/m³ against 998.2 at 20 °C (CRC Handbook, recalled from memory):
-    // 1.040 × 998.2 / 990.2 = 1.0484, the gravity now.
-    expect(screen.getByText('Gravity now').nextElementSibling).toHaveTextContent('1.048');
+    await typeInto('Sample temperature', '35');
+    // Water at 35 °C is 994.03 kg/m³ against 998.21 at 20 °C (CRC Handbook, recalled from memory):
+    // 1.040 × 998.21 / 994.03 = 1.0444, the gravity now.
+    expect(screen.getByText('Gravity now').nextElementSibling).toHaveTextContent('1.044');
     expect(screen.getByText(/more than 10 °C from the hydrometer's 20 °C calibration/)).toBeInTheDocument();
+  });
+
+  it('refuses a sample above 40 °C and asks for a cooled one', async () => {
+    renderCheck({ initialValues: { volumeL: 26, boilOffLPerHour: 4, targetSg: 1.05 } });
+    await user.click(screen.getByLabelText('Hydrometer (cooled sample)'));
+    await typeInto('Hydrometer reading', '1.040');
+    await typeInto('Sample temperature', '45');
+    expect(await screen.findAllByText(/too hot to decide the boil on.*Cool the sample below 40 °C/)).not.toHaveLength(0);
+    expect(screen.queryByText('Gravity now')).not.toBeInTheDocument();
   });
 });

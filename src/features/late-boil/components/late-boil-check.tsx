@@ -179,14 +179,17 @@ function Inputs({ units }: { units: Units }) {
         <details className="group">
           <summary className="flex min-h-touch cursor-pointer list-none items-center gap-1 font-semibold text-cellar-700 [&::-webkit-details-marker]:hidden">
             <ChevronRight aria-hidden className="size-5 transition-transform group-open:rotate-90" />
-            More settings: FG, kettle size, shrinkage, potentials
+            More settings: FG, kettle size and losses, shrinkage, potentials
           </summary>
           <div className="mt-2 space-y-4">
             <div className="grid grid-cols-2 gap-3">
               <QuantityField name="targetFg" kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
               <QuantityField name="kettleCapacityL" kind="volume" label="Kettle size" hint="Optional" units={units} />
             </div>
-            <NumberField name="coolingShrinkage" label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
+            <div className="grid grid-cols-2 gap-3">
+              <NumberField name="coolingShrinkage" label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
+              <QuantityField name="kettleLossL" kind="volume" label="Left in the kettle" hint="Trub loss plus dead space" units={units} />
+            </div>
             <fieldset>
               <legend className="mb-1 text-sm font-semibold text-ink-soft">Extract potentials, if yours differ ({us ? 'points per lb per gallon' : 'points × litres per kg'})</legend>
               <div className="grid grid-cols-2 gap-3">

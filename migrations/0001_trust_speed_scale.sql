@@ -17,6 +17,9 @@ CREATE TABLE `revoked_sessions` (
 	CONSTRAINT `revoked_sessions_session_id` PRIMARY KEY(`session_id`)
 );
 --> statement-breakpoint
+ALTER TABLE `packaging_records` MODIFY COLUMN `verdict_state` enum('no-reading','too-early','moving','stuck','stable') NOT NULL;--> statement-breakpoint
+ALTER TABLE `instruments` ADD `resolution_sg` double;--> statement-breakpoint
+ALTER TABLE `instruments` ADD `offset_scale` double;--> statement-breakpoint
 ALTER TABLE `idempotency_keys` ADD CONSTRAINT `idempotency_keys_user_id_users_id_fk` FOREIGN KEY (`user_id`) REFERENCES `users`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX `idempotency_keys_expires_idx` ON `idempotency_keys` (`expires_at`);--> statement-breakpoint
 CREATE INDEX `revoked_sessions_expires_idx` ON `revoked_sessions` (`expires_at`);
