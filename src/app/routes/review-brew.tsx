@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { ArrowLeft, Eye } from 'lucide-react';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { brewStatusLabels, readingKindLabels } from '@shared/schemas/brews';
+import { brewStatusLabels, readingKindInSentence } from '@shared/schemas/brews';
 import type { BrewReview, CommentTargetInput } from '@shared/schemas/comments';
 import { timelineEntries } from '@/features/brews/components/brew-log';
 import { reviewQueryOptions, useReview } from '@/features/reviews/api/get-review';
@@ -33,7 +33,7 @@ function targetOf(key: string, review: BrewReview): { target: CommentTargetInput
   const [prefix, raw] = [key.slice(0, 2), Number(key.slice(2))];
   if (prefix === 'r-') {
     const r = review.brew.readings.find((x) => x.id === raw);
-    return r ? { target: { kind: 'reading', id: r.id }, what: `the ${readingKindLabels[r.kind].toLowerCase()} reading at ${clock(r.takenAt)}` } : null;
+    return r ? { target: { kind: 'reading', id: r.id }, what: `the ${readingKindInSentence(r.kind)} reading at ${clock(r.takenAt)}` } : null;
   }
   if (prefix === 'd-') {
     const d = review.brew.decisions.find((x) => x.id === raw);

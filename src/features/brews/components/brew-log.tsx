@@ -1,7 +1,7 @@
 import { Trash2 } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { describeDeviation } from '@shared/brew-deviations';
-import { brewStageLabels, brewStatusLabels, readingKindLabels, type BrewDetail, type BrewNote, type BrewReading } from '@shared/schemas/brews';
+import { brewStageLabels, brewStatusLabels, readingKindInSentence, readingKindLabels, type BrewDetail, type BrewNote, type BrewReading } from '@shared/schemas/brews';
 import { Notice } from '@/components/ui/notice';
 import { useUnits, type Units } from '@/lib/units';
 import { useDeleteNote } from '../api/delete-note';
@@ -47,7 +47,7 @@ function ReadingEntry({ reading, brew, units }: { reading: BrewReading; brew: Br
           {reading.photos.map((p) => (
             <li key={p.id}>
               <a href={p.url} target="_blank" rel="noreferrer">
-                <img src={p.url} alt={`Photo of the ${readingKindLabels[reading.kind].toLowerCase()} reading`} className="size-20 rounded-lg object-cover ring-1 ring-cellar-100" />
+                <img src={p.url} alt={`Photo of the ${readingKindInSentence(reading.kind)} reading`} className="size-20 rounded-lg object-cover ring-1 ring-cellar-100" />
               </a>
             </li>
           ))}
