@@ -96,7 +96,7 @@ for (const [size, viewport] of [
         }
         found.push(...(await audit(page, path, size)), ...(await smallTargets(page, path, size)));
       }
-      expect(found).toEqual([]);
+      expect(found, JSON.stringify(found, null, 1)).toEqual([]);
       expect(errors.filter((e) => !/Failed to load resource/.test(e))).toEqual([]);
       await context.close();
     }, 120_000);
@@ -128,7 +128,7 @@ for (const [size, viewport] of [
         }
         found.push(...(await audit(page, path, size)), ...(await smallTargets(page, path, size)));
       }
-      expect(found).toEqual([]);
+      expect(found, JSON.stringify(found, null, 1)).toEqual([]);
       expect(errors.filter((e) => !/Failed to load resource/.test(e))).toEqual([]);
       await context.close();
     }, 240_000);
@@ -150,7 +150,7 @@ for (const [size, viewport] of [
         await admin.page.locator('h1').first().waitFor();
         found.push(...(await audit(admin.page, path, size)), ...(await smallTargets(admin.page, path, size)));
       }
-      expect(found).toEqual([]);
+      expect(found, JSON.stringify(found, null, 1)).toEqual([]);
       expect([...mentor.errors, ...admin.errors].filter((e) => !/Failed to load resource/.test(e))).toEqual([]);
       await mentor.context.close();
       await admin.context.close();

@@ -4,6 +4,7 @@ import { MASH_PH_BAND } from '@shared/brewmath';
 import { brewStageLabels, brewStages, readingKindInSentence, readingStage, type BrewDetail, type BrewStage, type BrewStageState, type ReadingKind } from '@shared/schemas/brews';
 import type { Instrument } from '@shared/schemas/instruments';
 import { Button } from '@/components/ui/button';
+import { cautionTexts } from '@/components/ui/cautions';
 import { Notice } from '@/components/ui/notice';
 import { NetworkError } from '@/lib/api-client';
 import { useUnits, type Units } from '@/lib/units';
@@ -99,7 +100,7 @@ function Targets({ brew, stage, units }: { brew: BrewDetail; stage: BrewStage; u
 const cautions: Partial<Record<BrewStage, { title: string; body: string }>> = {
   mash: { title: 'Hot mash', body: 'Stir and sample with a long spoon. Keep the pH electrode in its storage solution between readings.' },
   boil: { title: 'Hot wort and steam burn', body: 'Sample with a long spoon or tube, keep your face out of the steam, and never put a hydrometer in boiling wort.' },
-  chill: { title: 'Clean from here on', body: 'Anything that touches cooled wort must be sanitised. Yeast pitched into wort that is too hot dies.' },
+  chill: { title: 'Clean from here on', body: `Anything that touches cooled wort must be sanitised. Yeast pitched into wort that is too hot dies. ${cautionTexts.chemicals}` },
 };
 
 function StageActions({ brew, stage }: { brew: BrewDetail; stage: BrewStageState }) {
