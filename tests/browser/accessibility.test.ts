@@ -49,8 +49,8 @@ async function smallTargets(page: Page, label: string, size: string): Promise<Fo
     for (const el of document.querySelectorAll<HTMLElement>('a[href], button, input:not([type=hidden]), select, textarea, summary, [role=tab], [role=radio]')) {
       const r = el.getBoundingClientRect();
       if (r.width === 0 || r.height === 0 || getComputedStyle(el).visibility === 'hidden') continue;
-      // A radio or checkbox counts by its label, which is what the finger hits.
-      const hit = (el instanceof HTMLInputElement && (el.type === 'radio' || el.type === 'checkbox') && el.closest('label')) || el;
+      // An input drawn as its label (a visually hidden radio, checkbox or file input) counts by the label, which is what the finger hits.
+      const hit = (el instanceof HTMLInputElement && (el.closest('label') ?? (r.width <= 2 ? el.labels?.[0] : null))) || el;
       const h = hit.getBoundingClientRect();
       if (h.width >= 43.5 && h.height >= 43.5) continue;
       const inSentence = el.tagName === 'A' && el.parentElement && getComputedStyle(el).display === 'inline' && (el.parentElement.textContent ?? '').trim().length > (el.textContent ?? '').trim().length;
@@ -123,8 +123,11 @@ for (const [size, viewport] of [
         await page.goto(path);
         await page.locator('h1').first().waitFor();
         if (path.endsWith('stage=boil')) {
-          await page.getByRole('button', { name: 'Fill in an example' }).click();
-          await page.getByRole('article').first().waitFor();
+          // With a reading in, the options and their "Choose this" buttons are judged too.
+          const check = page.getByRole('form', { name: 'Late-boil check' });
+          await check.getByLabel('Brix').fill('11.4');
+          await check.getByLabel('Wort in the kettle (hot)').fill('26');
+          await check.getByRole('button', { name: 'Choose this' }).first().waitFor();
         }
         found.push(...(await audit(page, path, size)), ...(await smallTargets(page, path, size)));
       }

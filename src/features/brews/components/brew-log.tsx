@@ -89,7 +89,7 @@ export function timelineEntries(brew: BrewDetail, units: Units): Entry[] {
     if (s.skippedAt) entries.push({ at: s.skippedAt, rank: 2, key: `s-${s.stage}-skip`, node: <StageEntry text={`${label} skipped`} /> });
   }
   for (const r of brew.readings) entries.push({ at: r.takenAt, rank: 1, key: `r-${r.id}`, node: <ReadingEntry reading={r} brew={brew} units={units} /> });
-  for (const d of brew.decisions) entries.push({ at: d.decidedAt, rank: 1, key: `d-${d.id}`, node: <DecisionCard decision={d} deviations={brew.deviations} /> });
+  for (const d of brew.decisions) entries.push({ at: d.decidedAt, rank: 1, key: `d-${d.id}`, node: <DecisionCard decision={d} deviations={brew.deviations} level={3} /> });
   for (const n of brew.log) entries.push({ at: n.createdAt, rank: 1, key: `n-${n.id}`, node: <NoteEntry note={n} brewId={brew.id} canEdit={brew.permissions.edit} /> });
   return entries.sort((a, b) => Date.parse(a.at) - Date.parse(b.at) || a.rank - b.rank || a.key.localeCompare(b.key));
 }
