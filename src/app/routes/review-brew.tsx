@@ -106,6 +106,7 @@ export function Component() {
   }
   const { brew } = review;
   const t = brew.targets;
+  const fermenterVolume = brew.readings.filter((r) => r.kind === 'og' && r.volumeL !== null).at(-1)?.volumeL ?? null;
   const onDay = review.comments.filter((c) => c.target.kind === 'brew' || c.target.missing);
   return (
     <>
@@ -133,7 +134,8 @@ export function Component() {
           <section aria-label="Targets and results" className="grid grid-cols-2 gap-3 rounded-xl bg-white p-4 ring-1 ring-cellar-100">
             <Fact label="Target OG" value={units.format('gravity', t.targetOg)} />
             <Fact label="OG" value={units.format('gravity', brew.og)} />
-            <Fact label="Into the fermenter" value={units.format('volume', t.batchVolumeL)} />
+            <Fact label="Target volume" value={units.format('volume', t.batchVolumeL)} />
+            <Fact label="Into the fermenter" value={fermenterVolume === null ? 'not measured' : units.format('volume', fermenterVolume)} />
             <Fact label="Fermentation range" value={`${units.format('temperature', t.fermentationTempMinC)}–${units.format('temperature', t.fermentationTempMaxC)}`} />
             <Fact label="Status" value={brewStatusLabels[brew.status]} />
             <Fact label="Final gravity" value={review.fermentation.verdict ? verdictWords[review.fermentation.verdict.state] : 'Not pitched yet'} />

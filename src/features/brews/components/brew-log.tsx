@@ -99,16 +99,24 @@ export function timelineEntries(brew: BrewDetail, units: Units): Entry[] {
  * chart and the timeline. Print styles (brew-sheet.css) drop the navigation and buttons and keep
  * it within an A4 or US Letter page's width.
  */
+/** The volume measured with the latest OG reading, the one taken in the fermenter. */
+export function measuredIntoFermenter(brew: Pick<BrewDetail, 'readings'>): number | null {
+  const og = brew.readings.filter((r) => r.kind === 'og' && r.volumeL !== null).at(-1);
+  return og?.volumeL ?? null;
+}
+
 export function BrewLog({ brew }: { brew: BrewDetail }) {
   const units = useUnits();
   const t = brew.targets;
   const entries = timelineEntries(brew, units);
+  const fermenterVolume = measuredIntoFermenter(brew);
   return (
     <div className="brew-sheet space-y-6">
       <section aria-label="Targets" className="sheet-block grid grid-cols-2 gap-3 rounded-xl bg-white p-4 ring-1 ring-cellar-100 sm:grid-cols-4">
         <Fact label="Target OG" value={units.format('gravity', t.targetOg)} />
         <Fact label="OG" value={units.format('gravity', brew.og)} />
-        <Fact label="Into the fermenter" value={units.format('volume', t.batchVolumeL)} />
+        <Fact label="Target volume" value={units.format('volume', t.batchVolumeL)} />
+        <Fact label="Into the fermenter" value={fermenterVolume === null ? 'not measured' : units.format('volume', fermenterVolume)} />
         <Fact label="Target FG" value={units.format('gravity', t.targetFg)} />
         <Fact label="Status" value={brewStatusLabels[brew.status]} />
         <Fact label="Brewed" value={brew.brewedOn} />

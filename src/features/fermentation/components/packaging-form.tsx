@@ -59,7 +59,8 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
   const warmest = log.temperature.overall?.maxC ?? log.brew.fermentationTempMaxC;
   const initial: Values = {
     container: 'bottles',
-    volumeL: log.brew.batchVolumeL ?? '',
+    // What really went into the fermenter, else the recipe's plan.
+    volumeL: log.brew.fermenterVolumeL ?? log.brew.batchVolumeL ?? '',
     warmestTempC: warmest !== null ? Math.min(30, Math.max(0, Number(warmest.toFixed(1)))) : '',
     targetCo2Volumes: '2.4',
     sugar: 'sucrose',
@@ -91,7 +92,12 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
             </Notice>
           )}
           <div className="grid gap-4 sm:grid-cols-2">
-            <QuantityField name="volumeL" kind="volume" label="Beer to package" />
+            <QuantityField
+              name="volumeL"
+              kind="volume"
+              label="Beer to package"
+              hint={log.brew.fermenterVolumeL !== null ? 'From the volume you measured into the fermenter; less any left behind on the yeast.' : 'The recipe’s batch volume; change it to what you have.'}
+            />
             <QuantityField
               name="warmestTempC"
               kind="temperature"
