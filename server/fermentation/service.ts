@@ -136,6 +136,17 @@ export async function measuredOg(db: DbOrTx, brewId: number): Promise<number | n
   return row?.value ?? null;
 }
 
+/** The brew day's latest OG reading: its corrected gravity and the volume measured into the fermenter with it. */
+async function ogReading(db: DbOrTx, brewId: number): Promise<{ og: number | null; volumeL: number | null }> {
+  const [row] = await db
+    .select({ value: brewReadings.correctedValue, volumeL: brewReadings.volumeL })
+    .from(brewReadings)
+    .where(and(eq(brewReadings.brewId, brewId), eq(brewReadings.kind, 'og')))
+    .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
+    .limit(1);
+  return { og: row?.value ?? null, volumeL: row?.volumeL ?? null };
+}
+
 export async function remindersEnabledFor(db: DbOrTx, userId: number): Promise<boolean> {
   const [row] = await db.select({ on: fermentationSettings.remindersEnabled }).from(fermentationSettings).where(eq(fermentationSettings.userId, userId));
   return row?.on ?? true;
@@ -153,7 +164,7 @@ function targetsOf(stored: StoredBrew): Partial<RecipeTargets> {
   return (stored.row.targetsSnapshot ?? {}) as Partial<RecipeTargets>;
 }
 
-function brewOf(actor: Actor, stored: StoredBrew, og: number | null): FermentationBrew {
+function brewOf(actor: Actor, stored: StoredBrew, { og, volumeL }: { og: number | null; volumeL: number | null }): FermentationBrew {
   const t = targetsOf(stored);
   const n = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null);
   return {
@@ -170,6 +181,7 @@ function brewOf(actor: Actor, stored: StoredBrew, og: number | null): Fermentati
     fermentationTempMinC: n(t.fermentationTempMinC),
     fermentationTempMaxC: n(t.fermentationTempMaxC),
     batchVolumeL: n(t.batchVolumeL),
+    fermenterVolumeL: n(volumeL),
     og,
   };
 }
@@ -200,9 +212,9 @@ export async function readingRows(db: DbOrTx, brewId: number) {
 export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date()): Promise<FermentationLog> {
   const brewId = stored.row.id;
   const isOwner = stored.row.ownerId === actor.id;
-  const [rows, og, [packagingRow], reminderRows, enabled] = await Promise.all([
+  const [rows, ogRead, [packagingRow], reminderRows, enabled] = await Promise.all([
     readingRows(db, brewId),
-    measuredOg(db, brewId),
+    ogReading(db, brewId),
     db.select().from(packagingRecords).where(eq(packagingRecords.brewId, brewId)),
     isOwner
       ? db.select().from(fermentationReminders).where(eq(fermentationReminders.brewId, brewId)).orderBy(asc(fermentationReminders.dueAt))
@@ -210,7 +222,8 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
     isOwner ? remindersEnabledFor(db, actor.id) : Promise.resolve(null),
   ]);
   const pitchedAt = stored.row.pitchedAt;
-  const brew = brewOf(actor, stored, og);
+  const brew = brewOf(actor, stored, ogRead);
+  const og = ogRead.og;
   const range =
     brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
   const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));

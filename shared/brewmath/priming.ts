@@ -57,7 +57,7 @@ export interface PrimingInput {
 /** Grams of priming sugar; 0 when the beer already holds the wanted CO2. */
 export function primingSugarG({ volumeL, warmestTempC, targetCo2Volumes, sugar }: PrimingInput): number {
   requireVolume(volumeL, 'volumeL', 'Beer volume');
-  requireRange(targetCo2Volumes, 1, 4.5, 'targetCo2Volumes', 'Carbonation', 'volumes', 'Ordinary bottles are not rated above about 4 volumes.');
+  requireRange(targetCo2Volumes, 1, 4.5, 'targetCo2Volumes', 'Carbonation', 'volumes', 'Most beers want about 2.0 to 2.7.');
   if (!Object.hasOwn(PRIMING_G_PER_L_PER_CO2_VOLUME, sugar)) {
     throw new BrewMathError(`Unknown priming sugar "${String(sugar)}": use sucrose, dextrose or dme.`, 'inconsistent', 'sugar');
   }

@@ -23,6 +23,9 @@ export const brewStageLabels: Record<BrewStage, string> = {
   og: 'Original gravity',
 };
 
+/** The reading's name inside a sentence ("the mash pH reading"): lower case, but pH stays pH. */
+export const readingKindInSentence = (kind: ReadingKind) => readingKindLabels[kind].toLowerCase().replace(/\bph\b/, 'pH');
+
 export const brewStatuses = ['brewing', 'fermenting', 'packaged'] as const;
 export type BrewStatus = (typeof brewStatuses)[number];
 

@@ -414,6 +414,8 @@ export interface FermentationBrew {
   fermentationTempMinC: number | null;
   fermentationTempMaxC: number | null;
   batchVolumeL: number | null;
+  /** Measured into the fermenter with the brew day's OG reading, when it was given. */
+  fermenterVolumeL: number | null;
   /** The brew day's measured OG, corrected. */
   og: number | null;
 }

@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, Navigate } from 'react-router';
 import { meQueryOptions } from '@/lib/auth';
 import { requireSignedIn } from './guards';
+import { IndexPage } from './routes/index-page';
 import { RootLayout } from './routes/root-layout';
 import { RouteError } from './routes/route-error';
 
@@ -28,10 +29,11 @@ export function createAppRouter(queryClient: QueryClient) {
         { path: 'reset-password/:token', lazy: withClient(() => import('./routes/reset-password')) },
         { path: 'invitations/:token', lazy: withClient(() => import('./routes/invitation')) },
         { path: 'late-boil-check', lazy: withClient(() => import('./routes/late-boil-check')) },
+        // The front page for visitors, the home for brewers: decided after the root loader knows who.
+        { index: true, Component: IndexPage },
         {
           loader: requireSignedIn(queryClient),
           children: [
-            { index: true, lazy: withClient(() => import('./routes/home')) },
             { path: 'recipes', lazy: withClient(() => import('./routes/recipes')) },
             { path: 'recipes/new', lazy: withClient(() => import('./routes/recipes-new')) },
             { path: 'recipes/:id', lazy: withClient(() => import('./routes/recipes-view')) },

@@ -8,14 +8,25 @@ describe('an account, on a phone-sized window', () => {
     const { page, context, errors } = await newPage(b.browser);
     const email = `newcomer-${Date.now()}@example.org`;
 
+    // A visitor's first page says what Wortwise is, and never fetches the signed-in home's code.
+    const scripts: string[] = [];
+    page.on('request', (r) => {
+      if (r.resourceType() === 'script') scripts.push(new URL(r.url()).pathname);
+    });
     await page.goto('/');
-    await page.waitForURL(/\/sign-in/);
+    await page.getByRole('heading', { name: 'Brew to the numbers you planned', level: 1 }).waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(new URL(page.url()).pathname).toBe('/');
+    expect(scripts.filter((s) => /\/assets\/home-[\w-]+\.js$/.test(s))).toEqual([]);
+    expect(scripts.some((s) => /\/assets\/front-page-[\w-]+\.js$/.test(s))).toBe(true);
+    await expect(page.getByRole('link', { name: 'Try the late-boil check' }).isVisible()).resolves.toBe(true);
     await page.getByRole('link', { name: 'Create an account' }).click();
     await page.getByLabel('Your name').fill('Wren Halloway');
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill('a-long-password');
     await page.getByRole('button', { name: 'Create my account' }).click();
-    await page.getByRole('heading', { name: 'Welcome back, Wren Halloway' }).waitFor();
+    // A new account's first visit is a welcome, not a welcome back.
+    await page.getByRole('heading', { name: 'Welcome, Wren Halloway' }).waitFor();
 
     // No sideways scroll on a 375 px phone.
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);

@@ -95,7 +95,7 @@ describe('a brew day on a phone-sized window', () => {
     await expect.poll(() => photo.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(1);
 
     // The boil: the late-boil check, prefilled from the brew day's snapshot.
-    await page.getByRole('tab', { name: /^Boil/ }).click();
+    await page.getByRole('tab', { name: /Boil/ }).click();
     const check = page.getByRole('form', { name: 'Late-boil check' });
     await check.waitFor();
     await expect.poll(async () => check.getByLabel('Target OG').inputValue()).toBe('1.05');

@@ -10,7 +10,7 @@ import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
 import { BrewDay } from '@/features/brews/components/brew-day';
 import { BrewMissing } from '@/features/brews/components/brew-missing';
 import { DeleteBrew } from '@/features/brews/components/delete-brew';
-import { DecisionExtras } from '@/features/brews/components/decision-extras';
+import { DecisionExtras, DecisionReason } from '@/features/brews/components/decision-extras';
 import { BrewSharingPanel } from '@/features/brews/components/sharing-panel';
 import { instrumentsQueryOptions } from '@/features/instruments/api/list-instruments';
 import type { LateBoilInitialValues } from '@/features/late-boil/components/form-values';
@@ -80,10 +80,10 @@ export function Component() {
         key={checkKey}
         initialValues={initialValues}
         onChoose={({ option, input }) => saveDecision(input, toChoice(option))}
+        renderBeforeOptions={() => <DecisionReason initial={reason.current} onReasonChange={(text) => (reason.current = text)} />}
         renderAfterOptions={(check) => (
           <DecisionExtras
             ready={check !== null}
-            onReasonChange={(text) => (reason.current = text)}
             onOwnAction={(description) => (check ? saveDecision(check.input, { kind: 'own', description }) : Promise.resolve())}
           />
         )}

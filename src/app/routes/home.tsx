@@ -1,5 +1,5 @@
 import { BookOpen, Flame, FlaskConical, Gauge } from 'lucide-react';
-import { Link } from 'react-router';
+import { Link, useLocation } from 'react-router';
 import { useBrews } from '@/features/brews/api/list-brews';
 import { ButtonLink } from '@/components/ui/button';
 import { Card, Loading, PageHeader } from '@/components/ui/page';
@@ -17,12 +17,14 @@ export function Component() {
   const { data: me } = useMe();
   const brews = useBrews('mine');
   const units = useUnits();
+  // Straight after creating an account it is a first visit; every later one is a return.
+  const firstVisit = (useLocation().state as { firstVisit?: boolean } | null)?.firstVisit === true;
   if (!me) return null;
   const latest = (brews.data ?? []).slice(0, 3);
   return (
     <>
       <PageHeader
-        title={`Welcome back, ${me.displayName}`}
+        title={`${firstVisit ? 'Welcome' : 'Welcome back'}, ${me.displayName}`}
         subtitle="Your brewing at a glance."
         actions={
           <ButtonLink to="/brews" variant="primary">

@@ -42,7 +42,7 @@ function Toggle<T extends string>({ label, value, options, onChange }: { label: 
           role="radio"
           aria-checked={value === v}
           onClick={() => onChange(v)}
-          className={`min-h-touch rounded-md px-3 text-sm font-semibold ${value === v ? 'bg-cellar-700 text-white' : 'text-cellar-700'}`}
+          className={`min-h-touch min-w-touch rounded-md px-3 text-sm font-semibold ${value === v ? 'bg-cellar-700 text-white' : 'text-cellar-700'}`}
         >
           {text}
         </button>

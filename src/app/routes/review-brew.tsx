@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { ArrowLeft, Eye } from 'lucide-react';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { brewStatusLabels, readingKindLabels } from '@shared/schemas/brews';
+import { brewStatusLabels, readingKindInSentence } from '@shared/schemas/brews';
 import type { BrewReview, CommentTargetInput } from '@shared/schemas/comments';
 import { timelineEntries } from '@/features/brews/components/brew-log';
 import { reviewQueryOptions, useReview } from '@/features/reviews/api/get-review';
@@ -39,7 +39,7 @@ function targetOf(key: string, review: BrewReview): { target: CommentTargetInput
   const [prefix, raw] = [key.slice(0, 2), Number(key.slice(2))];
   if (prefix === 'r-') {
     const r = review.brew.readings.find((x) => x.id === raw);
-    return r ? { target: { kind: 'reading', id: r.id }, what: `the ${readingKindLabels[r.kind].toLowerCase()} reading at ${clock(r.takenAt)}` } : null;
+    return r ? { target: { kind: 'reading', id: r.id }, what: `the ${readingKindInSentence(r.kind)} reading at ${clock(r.takenAt)}` } : null;
   }
   if (prefix === 'd-') {
     const d = review.brew.decisions.find((x) => x.id === raw);
@@ -112,6 +112,7 @@ export function Component() {
   }
   const { brew } = review;
   const t = brew.targets;
+  const fermenterVolume = brew.readings.filter((r) => r.kind === 'og' && r.volumeL !== null).at(-1)?.volumeL ?? null;
   const onDay = review.comments.filter((c) => c.target.kind === 'brew' || c.target.missing);
   return (
     <>
@@ -139,7 +140,8 @@ export function Component() {
           <section aria-label="Targets and results" className="grid grid-cols-2 gap-3 rounded-xl bg-white p-4 ring-1 ring-cellar-100">
             <Fact label="Target OG" value={units.format('gravity', t.targetOg)} />
             <Fact label="OG" value={units.format('gravity', brew.og)} />
-            <Fact label="Into the fermenter" value={units.format('volume', t.batchVolumeL)} />
+            <Fact label="Target volume" value={units.format('volume', t.batchVolumeL)} />
+            <Fact label="Into the fermenter" value={fermenterVolume === null ? 'not measured' : units.format('volume', fermenterVolume)} />
             <Fact label="Fermentation range" value={`${units.format('temperature', t.fermentationTempMinC)}–${units.format('temperature', t.fermentationTempMaxC)}`} />
             <Fact label="Status" value={brewStatusLabels[brew.status]} />
             <Fact label="Final gravity" value={review.fermentation.verdict ? verdictWords[review.fermentation.verdict.state] : 'Not pitched yet'} />

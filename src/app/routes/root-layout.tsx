@@ -1,5 +1,5 @@
 import { Menu, X } from 'lucide-react';
-import { Suspense, useState } from 'react';
+import { Suspense, useEffect, useRef, useState } from 'react';
 import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
 import { useMe } from '@/lib/auth';
 import { PreferencesMenu } from '@/features/auth/components/preferences-menu';
@@ -17,6 +17,18 @@ export function RootLayout() {
   const location = useLocation();
   const [openOn, setOpenOn] = useState<string | null>(null);
   const menuOpen = openOn === location.pathname;
+  const menuButton = useRef<HTMLButtonElement>(null);
+  // Escape folds the open menu and puts focus back on its button, wherever focus was inside it.
+  useEffect(() => {
+    if (!menuOpen) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key !== 'Escape') return;
+      setOpenOn(null);
+      menuButton.current?.focus();
+    };
+    document.addEventListener('keydown', onKey);
+    return () => document.removeEventListener('keydown', onKey);
+  }, [menuOpen]);
   return (
     <div className="flex min-h-screen flex-col">
       <header className="no-print bg-cellar-700 text-white">
@@ -28,6 +40,7 @@ export function RootLayout() {
           <div className="ml-auto flex items-center gap-1">
             {items.length > 1 && (
               <button
+                ref={menuButton}
                 type="button"
                 aria-expanded={menuOpen}
                 aria-controls="main-nav"

@@ -9,7 +9,7 @@ export function Component() {
       <h1 className="mb-1 text-2xl font-bold text-cellar-900">Create your Wortwise account</h1>
       <p className="mb-4 text-ink-soft">Keep your recipes, log every reading on brew day and share the log with your club's mentor.</p>
       <Card>
-        <SignUpForm onSignedUp={() => navigate('/', { replace: true })} />
+        <SignUpForm onSignedUp={() => navigate('/', { replace: true, state: { firstVisit: true } })} />
       </Card>
       <p className="mt-4 text-center text-ink-soft">
         Already brewing with us?{' '}

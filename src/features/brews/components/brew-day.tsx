@@ -1,9 +1,10 @@
 import { Check, CircleDashed, SkipForward, Undo2 } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { MASH_PH_BAND } from '@shared/brewmath';
-import { brewStageLabels, brewStages, readingKindLabels, readingStage, type BrewDetail, type BrewStage, type BrewStageState, type ReadingKind } from '@shared/schemas/brews';
+import { brewStageLabels, brewStages, readingKindInSentence, readingStage, type BrewDetail, type BrewStage, type BrewStageState, type ReadingKind } from '@shared/schemas/brews';
 import type { Instrument } from '@shared/schemas/instruments';
 import { Button } from '@/components/ui/button';
+import { cautionTexts } from '@/components/ui/cautions';
 import { Notice } from '@/components/ui/notice';
 import { NetworkError } from '@/lib/api-client';
 import { useUnits, type Units } from '@/lib/units';
@@ -25,7 +26,7 @@ const stageKinds: Record<BrewStage, readonly ReadingKind[][]> = {
 
 function formTitle(kinds: readonly ReadingKind[]): string {
   if (kinds.length > 1) return 'Log a boil gravity';
-  return `New reading: ${readingKindLabels[kinds[0]].toLowerCase().replace('ph', 'pH')}`;
+  return `New reading: ${readingKindInSentence(kinds[0])}`;
 }
 
 type StageStatus = 'done' | 'skipped' | 'started' | 'not-started';
@@ -54,12 +55,12 @@ export function StageTabs({ brew, selected, onSelect }: { brew: BrewDetail; sele
             id={`stage-tab-${s.stage}`}
             aria-selected={active}
             aria-controls={`stage-panel-${s.stage}`}
-            aria-label={`${brewStageLabels[s.stage]}, ${statusWords[status]}`}
+            title={brewStageLabels[s.stage]}
             onClick={() => onSelect(s.stage)}
             className={`flex min-h-14 flex-col items-center justify-center rounded-lg px-1 py-1 text-sm font-semibold ring-1 ${active ? 'bg-cellar-700 text-white ring-cellar-700' : 'bg-white text-cellar-700 ring-cellar-300'}`}
           >
             <span className="flex items-center gap-1">
-              {status === 'done' ? <Check aria-hidden className="size-4" /> : status === 'skipped' ? <SkipForward aria-hidden className="size-4" /> : <span aria-hidden>{i + 1}</span>}
+              {status === 'done' ? <Check aria-hidden className="size-4" /> : status === 'skipped' ? <SkipForward aria-hidden className="size-4" /> : <span>{i + 1}</span>}
               {shortLabels[s.stage]}
             </span>
             <span className={`text-xs font-normal ${active ? 'text-cellar-100' : 'text-ink-faint'}`}>{statusWords[status]}</span>
@@ -99,7 +100,7 @@ function Targets({ brew, stage, units }: { brew: BrewDetail; stage: BrewStage; u
 const cautions: Partial<Record<BrewStage, { title: string; body: string }>> = {
   mash: { title: 'Hot mash', body: 'Stir and sample with a long spoon. Keep the pH electrode in its storage solution between readings.' },
   boil: { title: 'Hot wort and steam burn', body: 'Sample with a long spoon or tube, keep your face out of the steam, and never put a hydrometer in boiling wort.' },
-  chill: { title: 'Clean from here on', body: 'Anything that touches cooled wort must be sanitised. Yeast pitched into wort that is too hot dies.' },
+  chill: { title: 'Clean from here on', body: `Anything that touches cooled wort must be sanitised. Yeast pitched into wort that is too hot dies. ${cautionTexts.chemicals}` },
 };
 
 function StageActions({ brew, stage }: { brew: BrewDetail; stage: BrewStageState }) {

@@ -1,7 +1,7 @@
 import { Trash2 } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { describeDeviation } from '@shared/brew-deviations';
-import { brewStageLabels, brewStatusLabels, readingKindLabels, type BrewDetail, type BrewNote, type BrewReading } from '@shared/schemas/brews';
+import { brewStageLabels, brewStatusLabels, readingKindInSentence, readingKindLabels, type BrewDetail, type BrewNote, type BrewReading } from '@shared/schemas/brews';
 import { Notice } from '@/components/ui/notice';
 import { useUnits, type Units } from '@/lib/units';
 import { useDeleteNote } from '../api/delete-note';
@@ -47,7 +47,7 @@ function ReadingEntry({ reading, brew, units }: { reading: BrewReading; brew: Br
           {reading.photos.map((p) => (
             <li key={p.id}>
               <a href={p.url} target="_blank" rel="noreferrer">
-                <img src={p.url} alt={`Photo of the ${readingKindLabels[reading.kind].toLowerCase()} reading`} className="size-20 rounded-lg object-cover ring-1 ring-cellar-100" />
+                <img src={p.url} alt={`Photo of the ${readingKindInSentence(reading.kind)} reading`} className="size-20 rounded-lg object-cover ring-1 ring-cellar-100" />
               </a>
             </li>
           ))}
@@ -89,7 +89,7 @@ export function timelineEntries(brew: BrewDetail, units: Units): Entry[] {
     if (s.skippedAt) entries.push({ at: s.skippedAt, rank: 2, key: `s-${s.stage}-skip`, node: <StageEntry text={`${label} skipped`} /> });
   }
   for (const r of brew.readings) entries.push({ at: r.takenAt, rank: 1, key: `r-${r.id}`, node: <ReadingEntry reading={r} brew={brew} units={units} /> });
-  for (const d of brew.decisions) entries.push({ at: d.decidedAt, rank: 1, key: `d-${d.id}`, node: <DecisionCard decision={d} deviations={brew.deviations} /> });
+  for (const d of brew.decisions) entries.push({ at: d.decidedAt, rank: 1, key: `d-${d.id}`, node: <DecisionCard decision={d} deviations={brew.deviations} level={3} /> });
   for (const n of brew.log) entries.push({ at: n.createdAt, rank: 1, key: `n-${n.id}`, node: <NoteEntry note={n} brewId={brew.id} canEdit={brew.permissions.edit} /> });
   return entries.sort((a, b) => Date.parse(a.at) - Date.parse(b.at) || a.rank - b.rank || a.key.localeCompare(b.key));
 }
@@ -99,16 +99,24 @@ export function timelineEntries(brew: BrewDetail, units: Units): Entry[] {
  * chart and the timeline. Print styles (brew-sheet.css) drop the navigation and buttons and keep
  * it within an A4 or US Letter page's width.
  */
+/** The volume measured with the latest OG reading, the one taken in the fermenter. */
+export function measuredIntoFermenter(brew: Pick<BrewDetail, 'readings'>): number | null {
+  const og = brew.readings.filter((r) => r.kind === 'og' && r.volumeL !== null).at(-1);
+  return og?.volumeL ?? null;
+}
+
 export function BrewLog({ brew }: { brew: BrewDetail }) {
   const units = useUnits();
   const t = brew.targets;
   const entries = timelineEntries(brew, units);
+  const fermenterVolume = measuredIntoFermenter(brew);
   return (
     <div className="brew-sheet space-y-6">
       <section aria-label="Targets" className="sheet-block grid grid-cols-2 gap-3 rounded-xl bg-white p-4 ring-1 ring-cellar-100 sm:grid-cols-4">
         <Fact label="Target OG" value={units.format('gravity', t.targetOg)} />
         <Fact label="OG" value={units.format('gravity', brew.og)} />
-        <Fact label="Into the fermenter" value={units.format('volume', t.batchVolumeL)} />
+        <Fact label="Target volume" value={units.format('volume', t.batchVolumeL)} />
+        <Fact label="Into the fermenter" value={fermenterVolume === null ? 'not measured' : units.format('volume', fermenterVolume)} />
         <Fact label="Target FG" value={units.format('gravity', t.targetFg)} />
         <Fact label="Status" value={brewStatusLabels[brew.status]} />
         <Fact label="Brewed" value={brew.brewedOn} />

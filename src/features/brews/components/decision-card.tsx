@@ -6,7 +6,9 @@ import { useUnits } from '@/lib/units';
 import { decisionAction, decisionOutcomeText, decisionReadingText, timeText, deviationTitle } from './describe';
 
 /** A late-boil decision as recorded: what was read, what was chosen, where it leads, and why. */
-export function DecisionCard({ decision, deviations }: { decision: BrewDecision; deviations: readonly BrewDeviation[] }) {
+export function DecisionCard({ decision, deviations, level = 4 }: { decision: BrewDecision; deviations: readonly BrewDeviation[]; level?: 3 | 4 }) {
+  // An h4 under the brew day's stage sections, an h3 straight under a log's "Timeline" h2.
+  const Heading = level === 3 ? 'h3' : 'h4';
   const units = useUnits();
   const headingId = useId();
   const outcome = decisionOutcomeText(decision, units);
@@ -17,9 +19,9 @@ export function DecisionCard({ decision, deviations }: { decision: BrewDecision;
         <p className="text-xs font-semibold uppercase tracking-wide text-malt-700">Late-boil decision</p>
         <span className="text-sm text-ink-faint">{timeText(decision.decidedAt)}</span>
       </header>
-      <h4 id={headingId} className="mt-1 text-2xl font-bold text-cellar-900">
+      <Heading id={headingId} className="mt-1 text-2xl font-bold text-cellar-900">
         {decision.choice.kind === 'own' ? `Own action: ${decisionAction(decision, units)}` : decisionAction(decision, units)}
-      </h4>
+      </Heading>
       <p className="mt-1 text-sm text-ink-soft">Reading: {decisionReadingText(decision, units)}</p>
       {outcome && <p className="mt-1 font-semibold">{outcome}</p>}
       {decision.note && <p className="mt-2 whitespace-pre-line">Why: {decision.note}</p>}

@@ -7,17 +7,39 @@ import { NotSaved } from './not-saved';
 interface DecisionExtrasProps {
   /** The check can run: there is something to attach a decision to. */
   ready: boolean;
-  /** The reason typed so far, saved with whichever option is chosen. */
-  onReasonChange: (text: string) => void;
   /** Saves the brewer's own action with the current check. */
   onOwnAction: (description: string) => Promise<unknown>;
 }
 
-/** Below the late-boil options: why (saved with the choice), or an action of the brewer's own. */
-export function DecisionExtras({ ready, onReasonChange, onOwnAction }: DecisionExtrasProps) {
+/**
+ * Above the late-boil options: why, saved with whichever option is chosen. It comes before the
+ * "Choose this" buttons, so it can be written before the choice is saved.
+ */
+export function DecisionReason({ initial, onReasonChange }: { initial: string; onReasonChange: (text: string) => void }) {
   const reasonId = useId();
+  const [reason, setReason] = useState(initial);
+  return (
+    <div className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
+      <label htmlFor={reasonId} className="mb-1 block text-sm font-semibold text-ink-soft">
+        Why (optional): saved with the option you choose
+      </label>
+      <textarea
+        id={reasonId}
+        rows={2}
+        value={reason}
+        onChange={(e) => {
+          setReason(e.target.value);
+          onReasonChange(e.target.value);
+        }}
+        className="block w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base"
+      />
+    </div>
+  );
+}
+
+/** Below the late-boil options: an action of the brewer's own instead of any of them. */
+export function DecisionExtras({ ready, onOwnAction }: DecisionExtrasProps) {
   const ownId = useId();
-  const [reason, setReason] = useState('');
   const [own, setOwn] = useState('');
   const [state, setState] = useState<'idle' | 'saving' | 'saved' | 'offline'>('idle');
   const [problem, setProblem] = useState<string | null>(null);
@@ -45,21 +67,6 @@ export function DecisionExtras({ ready, onReasonChange, onOwnAction }: DecisionE
   if (!ready) return null;
   return (
     <div className="space-y-3 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
-      <div>
-        <label htmlFor={reasonId} className="mb-1 block text-sm font-semibold text-ink-soft">
-          Why (optional): saved with the option you choose
-        </label>
-        <textarea
-          id={reasonId}
-          rows={2}
-          value={reason}
-          onChange={(e) => {
-            setReason(e.target.value);
-            onReasonChange(e.target.value);
-          }}
-          className="block w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base"
-        />
-      </div>
       <details>
         <summary className="flex min-h-touch cursor-pointer items-center font-semibold text-cellar-700">Did something else?</summary>
         <div className="mt-2 space-y-2">

@@ -1,6 +1,6 @@
 import { Camera, RefreshCw, Trash2 } from 'lucide-react';
 import { useId, useRef, useState } from 'react';
-import { PHOTO_MAX_BYTES, readingKindLabels, type BrewDeviation, type BrewReading } from '@shared/schemas/brews';
+import { PHOTO_MAX_BYTES, readingKindInSentence, readingKindLabels, type BrewDeviation, type BrewReading } from '@shared/schemas/brews';
 import { describeDeviation } from '@shared/brew-deviations';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -72,7 +72,7 @@ export function ReadingCard({ brewId, reading, deviations, canEdit }: ReadingCar
         <ul className="mt-3 flex flex-wrap gap-2">
           {reading.photos.map((p) => (
             <li key={p.id}>
-              <Photo brewId={brewId} url={p.url} canDelete={canEdit} label={`Photo of the ${readingKindLabels[reading.kind].toLowerCase()} reading`} />
+              <Photo brewId={brewId} url={p.url} canDelete={canEdit} label={`Photo of the ${readingKindInSentence(reading.kind)} reading`} />
             </li>
           ))}
         </ul>

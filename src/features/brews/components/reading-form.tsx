@@ -5,6 +5,7 @@ import { correctReading, defaultSnapshot, type RawByKind } from '@shared/instrum
 import {
   readingInputSchema,
   readingInstrumentKinds,
+  readingKindInSentence,
   readingKindLabels,
   readingQuantity,
   type GravityMethod,
@@ -146,7 +147,7 @@ export function ReadingForm({ brewId, kinds, instruments, onSaved }: ReadingForm
   return (
     <Formik<ReadingFormValues> initialValues={initial} validate={validate} onSubmit={submit} enableReinitialize={false}>
       {({ isSubmitting, status, submitForm }) => (
-        <Form noValidate aria-label="New reading" className="space-y-4">
+        <Form noValidate aria-label={`New reading: ${kinds.map(readingKindInSentence).join(' or ')}`} className="space-y-4">
           <Fields kinds={kinds} instruments={instruments} />
           <SaveNotice failure={status} />
           {offline ? (

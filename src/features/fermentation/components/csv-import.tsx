@@ -10,6 +10,7 @@ import {
   type CsvMapping,
   type CsvPreview,
 } from '@shared/schemas/fermentation';
+import { countOf } from '@/lib/plural';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
@@ -80,7 +81,7 @@ export function CsvImport({ brewId }: { brewId: number }) {
       )}
       {importer.error && (
         <Notice tone="error" title="Nothing was imported">
-          <p>{rowErrors.length ? `${rowErrors.length} rows need attention.` : importer.error.message}</p>
+          <p>{rowErrors.length ? `${countOf(rowErrors.length, 'row')} ${rowErrors.length === 1 ? 'needs' : 'need'} attention.` : importer.error.message}</p>
           {rowErrors.length > 0 && (
             <ul className="mt-1 list-disc pl-5">
               {rowErrors.map(([k, m]) => (
@@ -101,7 +102,7 @@ export function CsvImport({ brewId }: { brewId: number }) {
               { file, mapping: result.mapping },
               {
                 onSuccess: (r) => {
-                  setDone(`Imported ${r.added} ${r.added === 1 ? 'reading' : 'readings'}${r.skipped ? `; ${r.skipped} already in the log were skipped` : ''}.`);
+                  setDone(`Imported ${countOf(r.added, 'reading')}${r.skipped ? `; ${r.skipped} already in the log ${r.skipped === 1 ? 'was' : 'were'} skipped` : ''}.`);
                   setResult(null);
                   setFile(null);
                 },
@@ -109,7 +110,8 @@ export function CsvImport({ brewId }: { brewId: number }) {
             )
           }
         >
-          {result.newCount > 0 ? `Import ${result.newCount} ${result.newCount === 1 ? 'reading' : 'readings'}` : 'Nothing new to import'}
+          {/* All or nothing: while any row has a problem, no count is offered, because nothing would be imported. */}
+          {result.mappingErrors || result.errorCount > 0 ? 'Fix the problems to import' : result.newCount > 0 ? `Import ${countOf(result.newCount, 'reading')}` : 'Nothing new to import'}
         </Button>
       )}
     </div>
@@ -197,7 +199,7 @@ function PreviewSummary({ preview }: { preview: CsvPreview }) {
   return (
     <div className="space-y-3">
       <p className="text-base">
-        <strong>{preview.rowCount}</strong> rows: <strong>{preview.newCount}</strong> new, {preview.duplicateCount} already in the log,{' '}
+        <strong>{preview.rowCount}</strong> {preview.rowCount === 1 ? 'row' : 'rows'}: <strong>{preview.newCount}</strong> new, {preview.duplicateCount} already in the log,{' '}
         <span className={preview.errorCount ? 'font-semibold text-alert-700' : ''}>{preview.errorCount} with problems</span>.
       </p>
       {preview.errorCount > 0 && (

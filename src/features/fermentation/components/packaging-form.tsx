@@ -11,6 +11,7 @@ import {
   type PackagingSugar,
 } from '@shared/schemas/fermentation';
 import { Button } from '@/components/ui/button';
+import { cautionTexts } from '@/components/ui/cautions';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
@@ -58,7 +59,8 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
   const warmest = log.temperature.overall?.maxC ?? log.brew.fermentationTempMaxC;
   const initial: Values = {
     container: 'bottles',
-    volumeL: log.brew.batchVolumeL ?? '',
+    // What really went into the fermenter, else the recipe's plan.
+    volumeL: log.brew.fermenterVolumeL ?? log.brew.batchVolumeL ?? '',
     warmestTempC: warmest !== null ? Math.min(30, Math.max(0, Number(warmest.toFixed(1)))) : '',
     targetCo2Volumes: '2.4',
     sugar: 'sucrose',
@@ -83,8 +85,18 @@ export function PackagingForm({ log }: { log: FermentationLog }) {
       {({ values, isSubmitting, status, submitForm, errors }) => (
         <Form noValidate className="space-y-4" aria-label="Packaging">
           <ContainerPicker />
+          {values.container === 'keg' && (
+            <Notice tone="caution" title="Gas under pressure">
+              {cautionTexts.co2}
+            </Notice>
+          )}
           <div className="grid gap-4 sm:grid-cols-2">
-            <QuantityField name="volumeL" kind="volume" label="Beer to package" />
+            <QuantityField
+              name="volumeL"
+              kind="volume"
+              label="Beer to package"
+              hint={log.brew.fermenterVolumeL !== null ? 'From the volume you measured into the fermenter; less any left behind on the yeast.' : 'The recipe’s batch volume; change it to what you have.'}
+            />
             <QuantityField
               name="warmestTempC"
               kind="temperature"
@@ -212,7 +224,7 @@ function SugarResult() {
         {problem && <p className="text-sm font-semibold text-alert-700">{problem}</p>}
       </div>
       {values.container === 'bottles' && typeof co2 === 'number' && co2 > BOTTLE_CO2_CAUTION_VOLUMES && (
-        <Notice tone="caution">Ordinary bottles are not made for more than about {BOTTLE_CO2_CAUTION_VOLUMES} volumes: use heavy bottles rated for it.</Notice>
+        <Notice tone="caution">Ordinary bottles are not made for more than about {BOTTLE_CO2_CAUTION_VOLUMES} volumes of CO2: use heavy bottles rated for it, or a keg.</Notice>
       )}
     </div>
   );

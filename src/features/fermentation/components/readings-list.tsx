@@ -1,6 +1,7 @@
 import { Trash2 } from 'lucide-react';
 import { useState } from 'react';
 import type { FermentationReading } from '@shared/schemas/fermentation';
+import { countOf } from '@/lib/plural';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useUnits } from '@/lib/units';
@@ -66,7 +67,7 @@ export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId:
       </ol>
       {newestFirst.length > SHOWN && (
         <Button variant="secondary" className="mt-2 w-full sm:w-auto" onClick={() => setAll(!all)}>
-          {all ? 'Show the latest only' : `Show all ${newestFirst.length} readings`}
+          {all ? 'Show the latest only' : `Show all ${countOf(newestFirst.length, 'reading')}`}
         </Button>
       )}
     </>

@@ -1,4 +1,5 @@
 import type { TemperatureRange, TemperatureSummary } from '@shared/schemas/fermentation';
+import { countOf } from '@/lib/plural';
 import { Notice } from '@/components/ui/notice';
 import { useUnits } from '@/lib/units';
 import { shortDateTime } from './words';
@@ -11,13 +12,13 @@ export function TemperaturePanel({ summary }: { summary: TemperatureSummary }) {
   return (
     <div className="space-y-3">
       <dl className="grid grid-cols-2 gap-3">
-        <Figure label="Last 24 hours" value={range(summary.last24h)} hint={summary.last24h ? `${summary.last24h.count} readings` : 'No reading in the last 24 hours'} />
-        <Figure label="Whole fermentation" value={range(summary.overall)} hint={summary.overall ? `${summary.overall.count} readings` : 'No readings yet'} />
+        <Figure label="Last 24 hours" value={range(summary.last24h)} hint={summary.last24h ? countOf(summary.last24h.count, 'reading') : 'No reading in the last 24 hours'} />
+        <Figure label="Whole fermentation" value={range(summary.overall)} hint={summary.overall ? countOf(summary.overall.count, 'reading') : 'No readings yet'} />
         <Figure label="Recipe range" value={summary.target ? `${t(summary.target.minC)} – ${t(summary.target.maxC)}` : '—'} />
         <Figure label="Latest" value={summary.latest ? t(summary.latest.tempC) : '—'} hint={summary.latest ? shortDateTime(summary.latest.takenAt) : undefined} />
       </dl>
       {summary.excursions.length > 0 && (
-        <Notice tone="caution" title={`${summary.excursions.length} ${summary.excursions.length === 1 ? 'reading' : 'readings'} outside the recipe's range`}>
+        <Notice tone="caution" title={`${countOf(summary.excursions.length, 'reading')} outside the recipe's range`}>
           <ul className="mt-1 space-y-0.5">
             {summary.excursions.map((e) => (
               <li key={`${e.takenAt}-${e.tempC}`}>

@@ -74,7 +74,8 @@ function CheckReadingBody({ snapshot, units }: { snapshot: InstrumentSnapshot; u
   const headingId = useId();
   const outcome = work(snapshot, values, units);
   return (
-    <section aria-labelledby={headingId} className="rounded-lg bg-cellar-50 p-3" data-testid="check-reading">
+    // A group, not a region: every instrument card has one, and landmarks must have distinct names.
+    <div role="group" aria-labelledby={headingId} className="rounded-lg bg-cellar-50 p-3" data-testid="check-reading">
       <h4 id={headingId} className="mb-2 font-semibold text-cellar-900">
         Check a reading
       </h4>
@@ -134,6 +135,6 @@ function CheckReadingBody({ snapshot, units }: { snapshot: InstrumentSnapshot; u
           {outcome.error}
         </Notice>
       )}
-    </section>
+    </div>
   );
 }

@@ -2,6 +2,7 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import { calibrateInstrumentSchema, DEFAULT_PH_BUFFERS, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
 import { SaveFooter } from '@/components/ui/save-footer';
+import { cautionTexts } from '@/components/ui/cautions';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
@@ -66,6 +67,7 @@ export function PhCalibration({ instrument, onDone }: { instrument: Instrument; 
             Calibrate the meter itself in two fresh buffers as its maker describes, then record it here. Rinse the electrode between buffers and keep it in storage
             solution, never dry or in plain water.
           </p>
+          <Notice tone="caution">{cautionTexts.phSolutions}</Notice>
           <div className="grid gap-3 sm:grid-cols-3">
             <TextField name="calibratedOn" type="date" label="Calibrated on" max={localToday()} />
             <NumberField name="bufferLowPh" label="First buffer" unit="pH" />

@@ -28,10 +28,12 @@ interface ResultsProps {
   units: Units;
   choice: ChoiceState | null;
   onChoose?: (option: FeasibleOption) => void;
+  /** Above the option cards, so it is read before choosing (on brew day: why, saved with the choice). */
+  beforeOptions?: ReactNode;
 }
 
 /** The answer: where the wort is heading, then one card per thing the brewer can do about it. */
-export function CheckResults({ input, outcome, units, choice, onChoose }: ResultsProps) {
+export function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions }: ResultsProps) {
   const { result, currentSg, reading, warnings } = outcome;
   const ordered = orderedOptions(result);
   const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
@@ -76,6 +78,7 @@ export function CheckResults({ input, outcome, units, choice, onChoose }: Result
 
       <h2 className="text-lg font-bold text-cellar-900">Your options</h2>
       {anyExtract && <p className="text-sm text-ink-soft">Adding extract or sugar: sprinkle it in slowly while stirring, as it can foam up and boil over.</p>}
+      {beforeOptions}
       <ul className="space-y-3">
         {ordered.map((option) => (
           <li key={optionKey(option)}>

@@ -37,6 +37,8 @@ export interface LateBoilCheckProps {
   nudge?: ReactNode;
   /** Rendered after the options, with the current check (or null while it cannot run). */
   renderAfterOptions?: (check: { input: BoilCheckParsed; result: BoilCheckOutcome } | null) => ReactNode;
+  /** Rendered between the answer and the option cards while there are options to choose from. */
+  renderBeforeOptions?: () => ReactNode;
 }
 
 const validateForm = (values: LateBoilFormValues) => zodValidate(boilCheckInputSchema)(toCheckInput(values));
@@ -53,7 +55,7 @@ const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
  * and sees, as they type, where the wort is heading and what to do about it. Everything is
  * worked out in the browser with the shared brewing math, so it keeps working on a lost connection.
  */
-export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions }: LateBoilCheckProps) {
+export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions, renderBeforeOptions }: LateBoilCheckProps) {
   const userUnits = useUnits();
   const units = unitsOverride ?? userUnits;
   const start = useMemo(() => toFormValues(initialValues), [initialValues]);
@@ -67,7 +69,7 @@ export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, n
             <Inputs units={units} />
           </div>
           <div className="lg:sticky lg:top-4">
-            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} />
+            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} renderBeforeOptions={renderBeforeOptions} />
           </div>
         </div>
       </Form>
@@ -235,7 +237,8 @@ function Answer({
   onChoose,
   nudge,
   renderAfterOptions,
-}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
+  renderBeforeOptions,
+}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'renderBeforeOptions'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
   const { values } = useFormikContext<LateBoilFormValues>();
   const check = useCheck(values);
   const [choice, setChoice] = useState<ChoiceState | null>(null);
@@ -266,7 +269,9 @@ function Answer({
     <div className="min-w-0 space-y-4">
       <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
         {check.ok ? (
-          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onChoose ? (o) => void choose(o) : undefined} />
+          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onChoose ? (o) => void choose(o) : undefined}
+            beforeOptions={renderBeforeOptions?.()}
+          />
         ) : (
           <NotReady missing={check.missing} problems={check.problems} />
         )}

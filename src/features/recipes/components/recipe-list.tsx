@@ -124,7 +124,7 @@ function Toolbar({ query, sort, dir, onChange }: { query: ListRecipesQuery; sort
               role="radio"
               aria-checked={active}
               onClick={() => onChange({ scope: scope === 'all' ? undefined : scope })}
-              className={`min-h-touch flex-1 whitespace-nowrap rounded-md px-3 text-sm font-semibold ${active ? 'bg-cellar-700 text-white' : 'text-cellar-700 hover:bg-cellar-50'}`}
+              className={`min-h-touch min-w-touch flex-1 whitespace-nowrap rounded-md px-3 text-sm font-semibold ${active ? 'bg-cellar-700 text-white' : 'text-cellar-700 hover:bg-cellar-50'}`}
             >
               {scopeLabels[scope]}
             </button>
@@ -212,7 +212,7 @@ function RecipeTable({ items, sort, dir, onSort }: { items: RecipeListItem[]; so
     return (
       <th scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : undefined} className={`px-3 py-2 font-semibold ${className}`}>
         {key ? (
-          <button type="button" onClick={() => onSort(key)} className="inline-flex min-h-touch items-center gap-1 hover:text-cellar-900">
+          <button type="button" onClick={() => onSort(key)} className="-mx-2 inline-flex min-h-touch min-w-touch items-center gap-1 px-2 hover:text-cellar-900">
             {label}
             {active && (dir === 'asc' ? <ArrowUp aria-hidden className="size-4" /> : <ArrowDown aria-hidden className="size-4" />)}
           </button>
@@ -240,7 +240,7 @@ function RecipeTable({ items, sort, dir, onSort }: { items: RecipeListItem[]; so
           {items.map((r) => (
             <tr key={r.id} className="hover:bg-cellar-50">
               <td className="px-3 py-2">
-                <Link to={`/recipes/${r.id}`} className="font-semibold text-cellar-700 underline-offset-2 hover:underline">
+                <Link to={`/recipes/${r.id}`} className="inline-flex min-h-touch items-center font-semibold text-cellar-700 underline-offset-2 hover:underline">
                   {r.name}
                 </Link>
                 <div className="mt-0.5">

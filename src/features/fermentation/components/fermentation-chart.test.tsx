@@ -1,0 +1,57 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import type { Me } from '@shared/schemas/auth';
+import type { FermentationLog } from '@shared/schemas/fermentation';
+import { meQueryOptions } from '@/lib/auth';
+import { FermentationChart } from './fermentation-chart';
+
+const pitchedAt = '2026-03-01T12:00:00.000Z';
+const day = (d: number) => new Date(Date.parse(pitchedAt) + d * 86_400_000).toISOString();
+
+/** Only what the chart reads; the rest of a log does not matter to it. */
+const log = {
+  brew: { pitchedAt, targetFg: 1.012 },
+  readings: [
+    { kind: 'gravity', takenAt: day(0), corrected: 1.05, estimate: false },
+    { kind: 'temperature', takenAt: day(1), corrected: 20, estimate: false },
+    { kind: 'gravity', takenAt: day(12), corrected: 1.012, estimate: false },
+  ],
+  temperature: { target: { minC: 18, maxC: 21 } },
+  verdict: { daysSincePitch: 12 },
+  progress: { og: 1.05 },
+} as unknown as FermentationLog;
+
+function renderChart(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'>) {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity } } });
+  const me: Me = { id: 1, email: 'b@example.org', displayName: 'B', siteRole: 'user', clubs: [], ...prefs };
+  queryClient.setQueryData(meQueryOptions().queryKey, me);
+  render(
+    <QueryClientProvider client={queryClient}>
+      <FermentationChart log={log} />
+    </QueryClientProvider>,
+  );
+}
+
+describe('the fermentation chart’s text alternative', () => {
+  it('names the picture and describes it in a sentence, in the brewer’s units, with correct plurals', () => {
+    // 20 °C = 68 °F, 18 °C = 64.4 °F, 21 °C = 69.8 °F (°F = °C × 9/5 + 32, NIST SP 811 appendix B).
+    renderChart({ unitSystem: 'us', gravityUnit: 'sg' });
+    const img = screen.getByRole('img', { name: 'Gravity (SG) and fermenter temperature (°F) since pitching' });
+    const summary = screen.getByTestId('chart-summary');
+    expect(img).toHaveAttribute('aria-describedby', summary.id);
+    const text = summary.textContent!.replace(/\u00a0/g, ' ');
+    expect(text).toContain('2 gravity readings and 1 temperature reading over 12 days since pitching.');
+    expect(text).toContain('Latest gravity 1.012 on day 12, target FG 1.012.');
+    expect(text).toContain('Fermenter between 68.0 °F and 68.0 °F, recipe range 64.4 °F to 69.8 °F.');
+  });
+
+  it('lists every reading in a table one tap away', async () => {
+    renderChart({ unitSystem: 'metric', gravityUnit: 'sg' });
+    await userEvent.click(screen.getByText('The numbers as a table'));
+    const table = screen.getByRole('table', { name: 'Fermentation readings by day since pitching' });
+    const rows = within(table).getAllByRole('row').map((r) => r.textContent!.replace(/\u00a0/g, ' '));
+    expect(rows).toEqual(['DayWhatValue', '0Gravity1.050', '1Fermenter temperature20.0 °C', '12Gravity1.012']);
+  });
+});
