@@ -8,6 +8,8 @@ import { createHash } from 'node:crypto';
 import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
 import { BrewMathError, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
 import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
+import { findFermentationDeviations, type FermentationDeviation } from '@shared/brew-deviations';
+import type { BrewDeviation } from '@shared/schemas/brews';
 import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
 import {
   methodKind,
@@ -192,6 +194,40 @@ export async function readingRows(db: DbOrTx, brewId: number) {
   return db.select().from(fermentationReadings).where(eq(fermentationReadings.brewId, brewId)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id));
 }
 
+function rangeOf(brew: FermentationBrew): { minC: number; maxC: number } | null {
+  return brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
+}
+
+function temperatureOf(rows: readonly FermentationReadingRow[], range: { minC: number; maxC: number } | null, now: Date) {
+  const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
+  return temperatureSummary(temps, range, now);
+}
+
+/**
+ * Fermentation's deviations from its rows alone (no query), as the review shows them after the
+ * brew day's own: the mentor's queue counts them for many brew days loaded at once.
+ */
+export function fermentationDeviations(
+  actor: Actor,
+  stored: StoredBrew,
+  rows: readonly FermentationReadingRow[],
+  packagingRow: PackagingRecordRow | null,
+  brewDay: readonly BrewDeviation[],
+  now: Date,
+): FermentationDeviation[] {
+  const brew = brewOf(actor, stored, null);
+  const range = rangeOf(brew);
+  const temperature = temperatureOf(rows, range, now);
+  return findFermentationDeviations({
+    range: temperature.target,
+    readings: rows.map((r) => toFermentationReading(r, stored.row.pitchedAt)),
+    excursions: temperature.excursions,
+    packaging: packagingRow ? toPackaging(packagingRow) : null,
+    pitchedAt: brew.pitchedAt,
+    brewDay,
+  });
+}
+
 export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date()): Promise<FermentationLog> {
   const brewId = stored.row.id;
   const isOwner = stored.row.ownerId === actor.id;
@@ -206,9 +242,7 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
   ]);
   const pitchedAt = stored.row.pitchedAt;
   const brew = brewOf(actor, stored, og);
-  const range =
-    brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
-  const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
+  const range = rangeOf(brew);
   const gravity = rows.filter((r) => r.kind === 'gravity');
   const latest = gravity.length ? gravity[gravity.length - 1] : null;
   const reminders: ScheduledReminder[] = reminderRows.map((r) => ({
@@ -221,7 +255,7 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
     brew,
     readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
     verdict: verdictFor(rows, pitchedAt, now),
-    temperature: temperatureSummary(temps, range, now),
+    temperature: temperatureOf(rows, range, now),
     progress: fermentationProgress({
       og,
       targetOg: brew.targetOg,
