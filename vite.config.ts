@@ -2,11 +2,12 @@ import { fileURLToPath } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vitest/config';
+import { precompress } from './scripts/lib/precompress';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), precompress()],
   resolve: {
     alias: {
       '@/': here('./src/'),
@@ -21,7 +22,8 @@ export default defineConfig({
   },
   build: {
     outDir: 'dist',
-    sourcemap: true,
+    // Maps for our own debugging stay in dist/ but are neither linked from the code nor served (server/app.ts).
+    sourcemap: 'hidden',
     manifest: true,
   },
   test: {
