@@ -33,7 +33,7 @@ export function createApp(ctx: AppContext) {
 
   app.use(helmet());
   // JSON and the HTML fallback are compressed on the fly (brotli when the browser takes it); the
-  // built files come precompressed (scripts/lib/precompress.ts) and are left alone here.
+  // built files come precompressed (the precompress plugin in vite.config.ts) and are left alone here.
   app.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
   app.use(express.json({ limit: '100kb' }));
   app.use(cookieParser());

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { makeUser } from './db/factories';
 import { createHarness, type TestHarness } from '../tests/support/api';
 
-// A built client in miniature: what Vite and scripts/lib/precompress.ts leave in dist/.
+// A built client in miniature: what Vite and its precompress plugin (vite.config.ts) leave in dist/.
 const dist = mkdtempSync(path.join(tmpdir(), 'wortwise-dist-'));
 const js = `export const answer = ${JSON.stringify('x'.repeat(4000))};\n`;
 mkdirSync(path.join(dist, 'assets'));

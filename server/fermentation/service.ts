@@ -43,6 +43,7 @@ import {
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
+import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 const DAY_MS = 86_400_000;
 const iso = (d: Date) => d.toISOString();
@@ -331,26 +332,29 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
   let duplicate = false;
   let id: number;
   try {
-    [{ id }] = await db
-      .insert(fermentationReadings)
-      .values({
-        brewId,
-        kind: methodKind[body.method],
-        method: body.method,
-        instrumentId: snapshot.instrumentId,
-        instrumentSnapshot: snapshot,
-        raw,
-        correctedValue: corrected,
-        correction,
-        warnings,
-        estimate: correction.kind === 'wcf-alcohol',
-        takenAt,
-        note: body.note,
-        source: 'manual',
-        dedupeKey: key,
-        createdBy: actor.id,
-      })
-      .$returningId();
+    [{ id }] = await db.transaction(async (tx) => {
+      await lockAndCheckReadingLimit(tx, brewId, 'fermentation');
+      return tx
+        .insert(fermentationReadings)
+        .values({
+          brewId,
+          kind: methodKind[body.method],
+          method: body.method,
+          instrumentId: snapshot.instrumentId,
+          instrumentSnapshot: snapshot,
+          raw,
+          correctedValue: corrected,
+          correction,
+          warnings,
+          estimate: correction.kind === 'wcf-alcohol',
+          takenAt,
+          note: body.note,
+          source: 'manual',
+          dedupeKey: key,
+          createdBy: actor.id,
+        })
+        .$returningId();
+    });
   } catch (error) {
     if (!isDuplicateKeyError(error)) throw error;
     duplicate = true;
