@@ -1,5 +1,5 @@
 import { Check, RotateCcw } from 'lucide-react';
-import { useId, type ReactNode } from 'react';
+import { memo, useId, type ReactNode } from 'react';
 import {
   gapInWords,
   optionActionParts,
@@ -30,8 +30,12 @@ interface ResultsProps {
   onChoose?: (option: FeasibleOption) => void;
 }
 
-/** The answer: where the wort is heading, then one card per thing the brewer can do about it. */
-export function CheckResults({ input, outcome, units, choice, onChoose }: ResultsProps) {
+/**
+ * The answer: where the wort is heading, then one card per thing the brewer can do about it.
+ * Memoised: Formik renders the whole form again when a field is marked touched, and this panel is
+ * the costly part; it renders only when the check itself changed.
+ */
+export const CheckResults = memo(function CheckResults({ input, outcome, units, choice, onChoose }: ResultsProps) {
   const { result, currentSg, reading, warnings } = outcome;
   const ordered = orderedOptions(result);
   const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
@@ -92,7 +96,7 @@ export function CheckResults({ input, outcome, units, choice, onChoose }: Result
       )}
     </div>
   );
-}
+});
 
 function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
   return (
