@@ -22,4 +22,8 @@ ALTER TABLE `instruments` ADD `resolution_sg` double;--> statement-breakpoint
 ALTER TABLE `instruments` ADD `offset_scale` double;--> statement-breakpoint
 ALTER TABLE `idempotency_keys` ADD CONSTRAINT `idempotency_keys_user_id_users_id_fk` FOREIGN KEY (`user_id`) REFERENCES `users`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX `idempotency_keys_expires_idx` ON `idempotency_keys` (`expires_at`);--> statement-breakpoint
-CREATE INDEX `revoked_sessions_expires_idx` ON `revoked_sessions` (`expires_at`);
+CREATE INDEX `revoked_sessions_expires_idx` ON `revoked_sessions` (`expires_at`);--> statement-breakpoint
+CREATE INDEX `recipes_owner_updated_idx` ON `recipes` (`owner_id`,`updated_at`,`id`);--> statement-breakpoint
+CREATE INDEX `recipes_owner_name_idx` ON `recipes` (`owner_id`,`name`,`id`);--> statement-breakpoint
+CREATE INDEX `recipes_owner_style_idx` ON `recipes` (`owner_id`,`style`,`id`);--> statement-breakpoint
+CREATE INDEX `recipes_owner_og_idx` ON `recipes` (`owner_id`,`target_og`,`id`);

@@ -3,7 +3,7 @@
  * migrations, demo data once, the fake SMTP server, the built client and the API on one port.
  * Run again, it reuses what is already running; Ctrl-C stops what it started.
  */
-import { execFileSync } from 'node:child_process';
+import { buildClientIfChanged } from './lib/client-build';
 import { seedDemo } from '../server/db/seed';
 import '../server/demo-seeds';
 import { createDb } from '../server/db/client';
@@ -53,8 +53,9 @@ try {
   }
 
   if (!process.env.SKIP_BUILD) {
-    console.log('Building the client…');
-    execFileSync('npx', ['vite', 'build', '--logLevel', 'warn'], { cwd: projectRoot, stdio: 'inherit' });
+    console.log('Checking the client build…');
+    const outcome = buildClientIfChanged(projectRoot);
+    console.log(outcome === 'built' ? 'Client built.' : 'Client unchanged since the last build; reusing dist/.');
   }
   const server = await startServer(loadEnv());
   stops.push(() => server.stop());

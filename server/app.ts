@@ -1,7 +1,10 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
+import { constants as zlibConstants } from 'node:zlib';
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import express from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import helmet from 'helmet';
 import { adminRouter } from './admin/router';
 import { authRouter } from './auth/router';
@@ -30,6 +33,9 @@ export function createApp(ctx: AppContext) {
   if (env.TRUST_PROXY) app.set('trust proxy', env.TRUST_PROXY);
 
   app.use(helmet());
+  // JSON and the HTML fallback are compressed on the fly (brotli when the browser takes it); the
+  // built files come precompressed (the precompress plugin in vite.config.ts) and are left alone here.
+  app.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
   app.use(express.json({ limit: '100kb' }));
   app.use(cookieParser());
 
@@ -54,8 +60,16 @@ export function createApp(ctx: AppContext) {
 
   // The built client, with every other GET falling back to index.html for client-side routing.
   if (existsSync(path.join(clientDist, 'index.html'))) {
-    app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
-    app.use('/assets', express.static(path.join(clientDist, 'assets'), { immutable: true, maxAge: '1y' }));
+    // Source maps are built for us, not published.
+    app.use((req, res, next) => (req.path.endsWith('.map') ? res.status(404).end() : next()));
+    // Hashed file names never change content: cached for a year. Answered before the general
+    // handler below, whose hour would otherwise win; a missing asset is a 404, not the app's page.
+    const precompressed = { enableBrotli: true, orderPreference: ['br', 'gzip'], index: false };
+    app.use(
+      '/assets',
+      expressStaticGzip(path.join(clientDist, 'assets'), { ...precompressed, serveStatic: { immutable: true, maxAge: '1y', index: false, fallthrough: false } }),
+    );
+    app.use(expressStaticGzip(clientDist, { ...precompressed, serveStatic: { maxAge: '1h', index: false } }));
     app.get('/{*path}', (_req, res) => {
       res.set('Cache-Control', 'no-cache').sendFile('index.html', { root: clientDist });
     });

@@ -532,6 +532,7 @@ const cases: Case[] = [
 
   // The mentor's review
   { route: 'GET /api/reviews/queue', call: (a) => a.get('/api/reviews/queue'), expected: signedIn(200) },
+  { route: 'GET /api/reviews/reviewed', call: (a) => a.get('/api/reviews/reviewed'), expected: signedIn(200) },
   ...bothBrews('GET /api/brews/:brewId/review', (a, b) => a.get(`/api/brews/${b.id}/review`), sharedRead(200)),
   ...bothBrews('GET /api/brews/:brewId/comments', (a, b) => a.get(`/api/brews/${b.id}/comments`), sharedRead(200)),
   ...bothBrews(

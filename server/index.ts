@@ -7,7 +7,7 @@ import { createMailer } from './mail/mailer';
 
 /** Starts the HTTP server; resolves with a function that shuts it down gracefully. */
 export async function startServer(env = loadEnv()) {
-  const { db, pool } = createDb(env.DATABASE_URL);
+  const { db, pool } = createDb(env.DATABASE_URL, { poolSize: env.DB_POOL_SIZE });
   const ctx: AppContext = { env, db, pool, mailer: createMailer(env) };
   const app = createApp(ctx);
   const server = await new Promise<import('node:http').Server>((resolve) => {

@@ -15,6 +15,7 @@ import { brewNotes, brewReadings, brews } from '../db/schema';
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, NotFound } from '../lib/errors';
 import { loadBrewForActor, touchStage, toReading } from './service';
+import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 /** The instrument a reading is taken with: fixed by its kind, or the gravity method the brewer chose. */
 function instrumentKindFor(body: ReadingBody): InstrumentKind {
@@ -84,9 +85,9 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
   const stage = readingStage[body.kind];
 
   const id = await db.transaction(async (tx) => {
-    // The brew row first: the stage and updatedAt written below would otherwise deadlock with a
-    // reading posted at the same moment (see server/db/locks.ts).
-    await lockBrewRow(tx, brewId);
+    // The brew row first (inside lockAndCheckReadingLimit): the stage and updatedAt written below
+    // would otherwise deadlock with a reading posted at the same moment (see server/db/locks.ts).
+    await lockAndCheckReadingLimit(tx, brewId, 'brew');
     const [{ id }] = await tx
       .insert(brewReadings)
       .values({

@@ -10,6 +10,7 @@ import {
   brewStages,
   readingQuantity,
   type BrewDecision,
+  type BrewDeviation,
   type BrewDetail,
   type BrewNote,
   type BrewReading,
@@ -165,6 +166,15 @@ function predictedSg(decision: BrewDecision): number | null {
   return typeof sg === 'number' ? sg : null;
 }
 
+/** Where a brew day left its targets, from its readings and decisions alone (no query): the log, the review and the mentor's queue agree. */
+export function brewDayDeviations(targets: RecipeTargets, readings: readonly BrewReading[], decisions: readonly BrewDecision[]): BrewDeviation[] {
+  return findDeviations({
+    targets,
+    readings: readings.map((r) => ({ id: r.id, kind: r.kind, corrected: r.corrected, volumeL: r.volumeL, instrument: r.instrument, takenAt: r.takenAt })),
+    decisions: decisions.map((d) => ({ id: d.id, choiceKind: d.choice.kind, predictedSg: predictedSg(d), decidedAt: d.decidedAt })),
+  });
+}
+
 export async function getBrew(db: DbOrTx, actor: Actor, id: number): Promise<BrewDetail> {
   const stored = await loadBrewForActor(db, actor, id, 'read');
   return assembleBrew(db, actor, stored);
@@ -209,11 +219,7 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
     readings,
     decisions,
     log: noteRows.map(toNote),
-    deviations: findDeviations({
-      targets,
-      readings: readings.map((r) => ({ id: r.id, kind: r.kind, corrected: r.corrected, volumeL: r.volumeL, instrument: r.instrument, takenAt: r.takenAt })),
-      decisions: decisions.map((d) => ({ id: d.id, choiceKind: d.choice.kind, predictedSg: predictedSg(d), decidedAt: d.decidedAt })),
-    }),
+    deviations: brewDayDeviations(targets, readings, decisions),
     permissions: {
       edit: can(actor, 'update', resource),
       share: can(actor, 'share', resource),

@@ -1,19 +1,30 @@
 import { drizzle } from 'drizzle-orm/mysql2';
+import type { Logger } from 'drizzle-orm/logger';
 import mysql from 'mysql2/promise';
 import * as schema from './schema';
 import { retryTransactions } from './transaction';
 
-export function createDb(url: string) {
+/** Ten connections suit one instance on a small machine; DB_POOL_SIZE changes it (server/env.ts). */
+export const DEFAULT_POOL_SIZE = 10;
+
+export interface DbOptions {
+  /** At most this many connections to MariaDB at once; requests beyond it wait their turn. */
+  poolSize?: number;
+  /** Drizzle's query logger: the tests count statements with it. */
+  logger?: Logger;
+}
+
+export function createDb(url: string, options: DbOptions = {}) {
   const pool = mysql.createPool({
     uri: url,
-    connectionLimit: 10,
+    connectionLimit: options.poolSize ?? DEFAULT_POOL_SIZE,
     connectTimeout: 5_000,
     // DATETIME/TIMESTAMP values are UTC on both sides.
     timezone: 'Z',
     enableKeepAlive: true,
   });
   // Every db.transaction retries a deadlock or lock-wait timeout: see transaction.ts.
-  const db = retryTransactions(drizzle(pool, { schema, mode: 'default' }));
+  const db = retryTransactions(drizzle(pool, { schema, mode: 'default', logger: options.logger ?? false }));
   return { db, pool };
 }
 

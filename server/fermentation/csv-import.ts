@@ -42,6 +42,7 @@ import { fieldErrors } from '../lib/handle';
 import { BadRequest, Conflict, HttpError } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
 import { assembleLog, correctRaw, dedupeKey, existingKeys, expectedFgOf, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
+import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 export class UnsupportedFile extends HttpError {
   constructor(message: string) {
@@ -314,6 +315,7 @@ export async function importReadings(db: Db, actor: Actor, brewId: number, buffe
         existing.add(p.key);
         fresh.push(p);
       }
+      if (fresh.length > 0) await lockAndCheckReadingLimit(tx, brewId, 'fermentation', fresh.length);
       for (let i = 0; i < fresh.length; i += 500) {
         await tx.insert(fermentationReadings).values(
           fresh.slice(i, i + 500).map((p) => ({

@@ -8,6 +8,8 @@ import { createHash } from 'node:crypto';
 import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
 import { expectedFinalGravity, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
 import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
+import { findFermentationDeviations, type FermentationDeviation } from '@shared/brew-deviations';
+import type { BrewDeviation } from '@shared/schemas/brews';
 import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
 import {
   methodKind,
@@ -43,6 +45,7 @@ import { isDuplicateKey } from '../lib/db-errors';
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
+import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 const DAY_MS = 86_400_000;
 const iso = (d: Date) => d.toISOString();
@@ -209,6 +212,40 @@ export async function readingRows(db: DbOrTx, brewId: number) {
   return db.select().from(fermentationReadings).where(eq(fermentationReadings.brewId, brewId)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id));
 }
 
+function rangeOf(brew: FermentationBrew): { minC: number; maxC: number } | null {
+  return brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
+}
+
+function temperatureOf(rows: readonly FermentationReadingRow[], range: { minC: number; maxC: number } | null, now: Date) {
+  const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
+  return temperatureSummary(temps, range, now);
+}
+
+/**
+ * Fermentation's deviations from its rows alone (no query), as the review shows them after the
+ * brew day's own: the mentor's queue counts them for many brew days loaded at once.
+ */
+export function fermentationDeviations(
+  actor: Actor,
+  stored: StoredBrew,
+  rows: readonly FermentationReadingRow[],
+  packagingRow: PackagingRecordRow | null,
+  brewDay: readonly BrewDeviation[],
+  now: Date,
+): FermentationDeviation[] {
+  const brew = brewOf(actor, stored, { og: null, volumeL: null });
+  const range = rangeOf(brew);
+  const temperature = temperatureOf(rows, range, now);
+  return findFermentationDeviations({
+    range: temperature.target,
+    readings: rows.map((r) => toFermentationReading(r, stored.row.pitchedAt)),
+    excursions: temperature.excursions,
+    packaging: packagingRow ? toPackaging(packagingRow) : null,
+    pitchedAt: brew.pitchedAt,
+    brewDay,
+  });
+}
+
 export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date()): Promise<FermentationLog> {
   const brewId = stored.row.id;
   const isOwner = stored.row.ownerId === actor.id;
@@ -224,9 +261,7 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
   const pitchedAt = stored.row.pitchedAt;
   const brew = brewOf(actor, stored, ogRead);
   const og = ogRead.og;
-  const range =
-    brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
-  const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
+  const range = rangeOf(brew);
   const gravity = rows.filter((r) => r.kind === 'gravity');
   const latest = gravity.length ? gravity[gravity.length - 1] : null;
   const reminders: ScheduledReminder[] = reminderRows.map((r) => ({
@@ -239,7 +274,7 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
     brew,
     readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
     verdict: verdictFor(rows, pitchedAt, now, expectedFgOf(stored)),
-    temperature: temperatureSummary(temps, range, now),
+    temperature: temperatureOf(rows, range, now),
     progress: fermentationProgress({
       og,
       targetOg: brew.targetOg,
@@ -315,26 +350,29 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
   let duplicate = false;
   let id: number;
   try {
-    [{ id }] = await db
-      .insert(fermentationReadings)
-      .values({
-        brewId,
-        kind: methodKind[body.method],
-        method: body.method,
-        instrumentId: snapshot.instrumentId,
-        instrumentSnapshot: snapshot,
-        raw,
-        correctedValue: corrected,
-        correction,
-        warnings,
-        estimate: correction.kind === 'wcf-alcohol',
-        takenAt,
-        note: body.note,
-        source: 'manual',
-        dedupeKey: key,
-        createdBy: actor.id,
-      })
-      .$returningId();
+    [{ id }] = await db.transaction(async (tx) => {
+      await lockAndCheckReadingLimit(tx, brewId, 'fermentation');
+      return tx
+        .insert(fermentationReadings)
+        .values({
+          brewId,
+          kind: methodKind[body.method],
+          method: body.method,
+          instrumentId: snapshot.instrumentId,
+          instrumentSnapshot: snapshot,
+          raw,
+          correctedValue: corrected,
+          correction,
+          warnings,
+          estimate: correction.kind === 'wcf-alcohol',
+          takenAt,
+          note: body.note,
+          source: 'manual',
+          dedupeKey: key,
+          createdBy: actor.id,
+        })
+        .$returningId();
+    });
   } catch (error) {
     if (!isDuplicateKey(error)) throw error;
     duplicate = true;

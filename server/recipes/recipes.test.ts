@@ -8,6 +8,7 @@ import { recipeFermentables, recipes } from '../db/schema';
 import { createHarness, type TestHarness } from '../../tests/support/api';
 import { getRecipeTargets, loadRecipeForActor } from './service';
 import { loadSessionUser } from '../auth/session';
+import { makeScene } from '../brews/test-scene';
 
 let h: TestHarness;
 beforeAll(async () => {
@@ -313,10 +314,13 @@ describe('GET /api/recipes: search, sort and paging on the server', () => {
     for (const s of specs) await agent.post('/api/recipes').send(paleAle(s)).expect(201);
 
     const byName = await agent.get('/api/recipes?sort=name&pageSize=2');
-    expect(byName.body).toMatchObject({ total: 4, page: 1, pageSize: 2 });
+    expect(byName.body).toMatchObject({ pageSize: 2, nextCursor: expect.any(String) });
+    expect(byName.body).not.toHaveProperty('total');
     expect(byName.body.items.map((r: { name: string }) => r.name)).toEqual(['Amber Fox', 'Barley Storm']);
-    const page2 = await agent.get('/api/recipes?sort=name&pageSize=2&page=2');
+    const page2 = await agent.get('/api/recipes').query({ sort: 'name', pageSize: 2, cursor: byName.body.nextCursor });
     expect(page2.body.items.map((r: { name: string }) => r.name)).toEqual(['Copper Kettle', 'Dark Hollow 100%']);
+    // Exactly four: the last page says there is no more.
+    expect(page2.body.nextCursor).toBeNull();
 
     const strongest = await agent.get('/api/recipes?sort=abv&dir=desc&pageSize=1');
     expect(strongest.body.items[0]).toMatchObject({ name: 'Barley Storm', isOwner: true });
@@ -336,6 +340,47 @@ describe('GET /api/recipes: search, sort and paging on the server', () => {
     const bad = await agent.get('/api/recipes?sort=colour&pageSize=1000');
     expect(bad.status).toBe(400);
     expect(bad.body.fields).toEqual({ sort: 'Sort by name, style, og, abv or updated.', pageSize: 'Ask for at most 100 recipes a page.' });
+  });
+});
+
+describe('GET /api/recipes: paged by key across mine and shared', () => {
+  it('walks every sort in both directions without repeating or skipping a recipe, own and shared mixed, equal values ordered by id', async () => {
+    const s = await makeScene(h);
+    const mine = [1.04, 1.05, 1.05, 1.05, 1.062];
+    const theirs = [1.045, 1.05, 1.07];
+    for (const [i, og] of mine.entries()) await s.owner.agent.post('/api/recipes').send(paleAle({ name: `Mine ${i}`, style: i % 2 ? 'Bitter' : 'Stout', targetOg: og })).expect(201);
+    for (const [i, og] of theirs.entries()) {
+      const { id } = (await s.member.agent.post('/api/recipes').send(paleAle({ name: `Theirs ${i}`, style: 'Mild', targetOg: og })).expect(201)).body;
+      await s.member.agent.put(`/api/recipes/${id}/sharing`).send({ clubIds: [s.club.id] }).expect(200);
+    }
+    // Someone else's unshared recipe never shows.
+    await s.other.agent.post('/api/recipes').send(paleAle({ name: 'Elsewhere', targetOg: 1.05 })).expect(201);
+
+    for (const sort of ['name', 'style', 'og', 'abv', 'updated'] as const) {
+      for (const dir of ['asc', 'desc'] as const) {
+        const all = (await s.owner.agent.get('/api/recipes').query({ sort, dir, pageSize: 100 }).expect(200)).body;
+        expect(all.nextCursor).toBeNull();
+        // The scene's own recipe, five more of mine and three shared by a club member.
+        expect(all.items).toHaveLength(1 + mine.length + theirs.length);
+        const walked: number[] = [];
+        let cursor: string | undefined;
+        for (let guard = 0; guard < 20; guard++) {
+          const res = await s.owner.agent.get('/api/recipes').query({ sort, dir, pageSize: 3, ...(cursor ? { cursor } : {}) }).expect(200);
+          walked.push(...res.body.items.map((r: { id: number }) => r.id));
+          cursor = res.body.nextCursor ?? undefined;
+          if (!cursor) break;
+        }
+        expect(walked, `${sort} ${dir}`).toEqual(all.items.map((r: { id: number }) => r.id));
+      }
+    }
+    const shared = (await s.owner.agent.get('/api/recipes?scope=shared&sort=og').expect(200)).body.items;
+    expect(shared.map((r: { name: string }) => r.name)).toEqual(['Theirs 0', 'Theirs 1', 'Theirs 2']);
+    const byOg = (await s.owner.agent.get('/api/recipes?sort=og&pageSize=100').expect(200)).body.items.map((r: { targetOg: number }) => r.targetOg);
+    expect(byOg).toEqual([...byOg].sort((a, b) => a - b));
+
+    const bad = await s.owner.agent.get('/api/recipes').query({ sort: 'name', cursor: 'not-a-cursor' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.fields).toEqual({ cursor: 'This list has changed since; start again from the top.' });
   });
 });
 

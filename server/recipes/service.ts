@@ -4,7 +4,7 @@
  * in one transaction; a save names the version it was edited from and is refused (409) when the
  * stored recipe has moved on, so nobody's edits are overwritten silently.
  */
-import { and, asc, count, desc, eq, inArray, like, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import {
   estimateRecipeOg,
   targetAbv,
@@ -14,6 +14,7 @@ import {
   type RecipeList,
   type RecipeListItem,
   type RecipeSharing,
+  type RecipeSort,
   type RecipeTargets,
 } from '@shared/schemas/recipes';
 import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
@@ -22,7 +23,7 @@ import { can, requireAccess, type Actor, type ResourceAction } from '../auth/per
 import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
 import type { DbOrTx, Tx } from '../db/client';
 import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, users, type RecipeRow } from '../db/schema';
-import { Conflict, NotFound } from '../lib/errors';
+import { BadRequest, Conflict, NotFound } from '../lib/errors';
 
 /** A recipe as stored, with its child rows and the clubs it is shared with. */
 export interface StoredRecipe {
@@ -123,85 +124,138 @@ export async function getRecipe(db: DbOrTx, actor: Actor, id: number): Promise<R
 // ---------------------------------------------------------------------------------------------
 // Listing
 
-/** Recipes the actor may read: their own, and those shared with a club they are in. */
-function visibleTo(actor: Actor, scope: 'all' | 'mine' | 'shared'): SQL {
-  const mine = eq(recipes.ownerId, actor.id);
-  const clubIds = actor.memberships.map((m) => m.clubId);
-  const shared =
-    clubIds.length > 0
-      ? inArray(
-          recipes.id,
-          // A subquery, not a join, so a recipe shared with two of my clubs is listed once.
-          sql`(select ${recipeClubShares.recipeId} from ${recipeClubShares} where ${inArray(recipeClubShares.clubId, clubIds)})`,
-        )
-      : sql`false`;
-  if (scope === 'mine') return mine;
-  if (scope === 'shared') return and(ne(recipes.ownerId, actor.id), shared)!;
-  return or(mine, shared)!;
-}
-
 /** LIKE treats % and _ as wildcards; a brewer searching for "50%" means the characters. */
 function likePattern(q: string) {
   return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
+/** Each sort but ABV has an owner-plus-column index (server/db/schema/recipes.ts), so a page of one's own recipes reads only that page. */
 const sortColumns = {
-  name: recipes.name,
-  style: recipes.style,
-  og: recipes.targetOg,
+  name: sql`${recipes.name}`,
+  style: sql`${recipes.style}`,
+  og: sql`${recipes.targetOg}`,
   abv: sql`(${recipes.targetOg} - ${recipes.targetFg})`,
-  updated: recipes.updatedAt,
+  updated: sql`${recipes.updatedAt}`,
 } as const;
 
+type SortKey = string | number;
+const BAD_CURSOR = 'This list has changed since; start again from the top.';
+
+/** The cursor is the last row's sort value and id, opaque to the client. */
+function encodeCursor(sort: RecipeSort, value: SortKey, id: number) {
+  return Buffer.from(JSON.stringify([sort, value, id]), 'utf8').toString('base64url');
+}
+
+function decodeCursor(sort: RecipeSort, cursor: string): { value: SortKey; id: number } {
+  try {
+    const parsed: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8'));
+    if (Array.isArray(parsed) && parsed.length === 3 && parsed[0] === sort && Number.isInteger(parsed[2])) {
+      const [, value, id] = parsed as [string, unknown, number];
+      const numeric = sort === 'og' || sort === 'abv';
+      if (numeric ? typeof value === 'number' && Number.isFinite(value) : typeof value === 'string') return { value: value as SortKey, id };
+    }
+  } catch {
+    // fall through to the 400 below
+  }
+  throw new BadRequest(BAD_CURSOR, { cursor: BAD_CURSOR });
+}
+
+/** drizzle's raw rows give TIMESTAMP columns as 'YYYY-MM-DD HH:MM:SS.fff' in UTC (the pool's timezone). */
+const fromDbTimestamp = (value: string | Date) => (value instanceof Date ? value : new Date(`${value.replace(' ', 'T')}Z`));
+
+interface ListRow {
+  id: number;
+  name: string;
+  style: string;
+  owner_id: number;
+  owner_name: string;
+  version: number;
+  batch_volume_l: number;
+  target_og: number;
+  target_fg: number;
+  updated_at: string | Date;
+  sort_key: SortKey | Date;
+}
+
+/**
+ * Recipes the actor may read, a page at a time: their own and those shared with their clubs are
+ * two branches of one UNION ALL, each reading at most a page from its index (owner and sort
+ * column; shares by club), so other brewers' recipes are never scanned and the cost does not grow
+ * with the table. Paged by key (the last row's sort value and id) rather than OFFSET, and "more"
+ * is known from one extra row rather than a count of everything.
+ */
 export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<typeof listRecipesQuerySchema>): Promise<RecipeList> {
-  const conditions: SQL[] = [visibleTo(actor, query.scope)];
+  const key = sortColumns[query.sort];
+  const dir = query.dir ?? (query.sort === 'updated' ? 'desc' : 'asc');
+  const cursor = query.cursor ? decodeCursor(query.sort, query.cursor) : null;
+  const take = query.pageSize + 1;
+  const filters: SQL[] = [];
   if (query.q) {
     const pattern = likePattern(query.q);
-    conditions.push(or(like(recipes.name, pattern), like(recipes.style, pattern))!);
+    filters.push(sql`(${recipes.name} like ${pattern} or ${recipes.style} like ${pattern})`);
   }
-  const where = and(...conditions);
-  const dir = query.dir ?? (query.sort === 'updated' ? 'desc' : 'asc');
-  const order = dir === 'desc' ? desc : asc;
-  const [{ total }] = await db.select({ total: count() }).from(recipes).where(where);
-  const rows = await db
-    .select({
-      id: recipes.id,
-      name: recipes.name,
-      style: recipes.style,
-      ownerId: recipes.ownerId,
-      ownerName: users.displayName,
-      version: recipes.version,
-      batchVolumeL: recipes.batchVolumeL,
-      targetOg: recipes.targetOg,
-      targetFg: recipes.targetFg,
-      updatedAt: recipes.updatedAt,
-    })
-    .from(recipes)
-    .innerJoin(users, eq(users.id, recipes.ownerId))
-    .where(where)
-    .orderBy(order(sortColumns[query.sort]), order(recipes.id))
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize);
+  if (cursor) {
+    const value = query.sort === 'updated' ? new Date(cursor.value as string) : cursor.value;
+    if (value instanceof Date && Number.isNaN(value.getTime())) throw new BadRequest(BAD_CURSOR, { cursor: BAD_CURSOR });
+    filters.push(
+      dir === 'asc'
+        ? sql`(${key} > ${value} or (${key} = ${value} and ${recipes.id} > ${cursor.id}))`
+        : sql`(${key} < ${value} or (${key} = ${value} and ${recipes.id} < ${cursor.id}))`,
+    );
+  }
+  const order = dir === 'asc' ? sql`asc` : sql`desc`;
+  const branch = (who: SQL) => sql`(select ${recipes.id} as id, ${recipes.name} as name, ${recipes.style} as style, ${recipes.ownerId} as owner_id,
+      ${users.displayName} as owner_name, ${recipes.version} as version, ${recipes.batchVolumeL} as batch_volume_l,
+      ${recipes.targetOg} as target_og, ${recipes.targetFg} as target_fg, ${recipes.updatedAt} as updated_at, ${key} as sort_key
+    from ${recipes} inner join ${users} on ${users.id} = ${recipes.ownerId}
+    where ${sql.join([who, ...filters], sql` and `)}
+    order by ${key} ${order}, ${recipes.id} ${order} limit ${take})`;
+  const clubIds = actor.memberships.map((m) => m.clubId);
+  const branches: SQL[] = [];
+  if (query.scope !== 'shared') branches.push(branch(sql`${recipes.ownerId} = ${actor.id}`));
+  if (query.scope !== 'mine' && clubIds.length > 0) {
+    branches.push(
+      branch(
+        // A subquery, not a join, so a recipe shared with two of my clubs is listed once.
+        sql`${recipes.id} in (select ${recipeClubShares.recipeId} from ${recipeClubShares} where ${inArray(recipeClubShares.clubId, clubIds)}) and ${recipes.ownerId} <> ${actor.id}`,
+      ),
+    );
+  }
+  if (branches.length === 0) return { items: [], nextCursor: null, pageSize: query.pageSize };
+  const [result] = await db.execute(sql`${sql.join(branches, sql` union all `)} order by sort_key ${order}, id ${order} limit ${take}`);
+  const rows = result as unknown as ListRow[];
+  const page = rows.slice(0, query.pageSize);
   const shares =
-    rows.length > 0
+    page.length > 0
       ? await db
           .select({ recipeId: recipeClubShares.recipeId, clubId: recipeClubShares.clubId })
           .from(recipeClubShares)
-          .where(inArray(recipeClubShares.recipeId, rows.map((r) => r.id)))
+          .where(inArray(recipeClubShares.recipeId, page.map((r) => r.id)))
           .orderBy(asc(recipeClubShares.clubId))
       : [];
-  const items: RecipeListItem[] = rows.map((r) => ({
-    ...r,
-    isOwner: r.ownerId === actor.id,
-    abvPercent: targetAbv(r.targetOg, r.targetFg)?.abvPercent ?? 0,
+  const items: RecipeListItem[] = page.map((r) => ({
+    id: r.id,
+    name: r.name,
+    style: r.style,
+    ownerId: r.owner_id,
+    ownerName: r.owner_name,
+    isOwner: r.owner_id === actor.id,
+    version: r.version,
+    batchVolumeL: r.batch_volume_l,
+    targetOg: r.target_og,
+    targetFg: r.target_fg,
+    abvPercent: targetAbv(r.target_og, r.target_fg)?.abvPercent ?? 0,
     sharedWithClubIds: visibleClubIds(
       actor,
-      r.ownerId,
+      r.owner_id,
       shares.filter((s) => s.recipeId === r.id).map((s) => s.clubId),
     ),
-    updatedAt: r.updatedAt.toISOString(),
+    updatedAt: fromDbTimestamp(r.updated_at).toISOString(),
   }));
-  return { items, total: Number(total), page: query.page, pageSize: query.pageSize };
+  const last = page[page.length - 1];
+  const lastKey = last && (query.sort === 'updated' ? fromDbTimestamp(last.updated_at).toISOString() : (last.sort_key as SortKey));
+  const nextCursor = rows.length > query.pageSize && last ? encodeCursor(query.sort, query.sort === 'og' || query.sort === 'abv' ? Number(lastKey) : String(lastKey), last.id) : null;
+  return { items, nextCursor, pageSize: query.pageSize };
 }
 export type { ListRecipesQuery };
 

@@ -3,12 +3,14 @@ import { and, eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { recipeInputSchema } from '@shared/schemas/recipes';
 import { loadSessionUser } from '../auth/session';
+import { createDb } from '../db/client';
 import { addMember, makeUser } from '../db/factories';
 import { brewClubShares } from '../db/schema';
 import { createRecipe } from '../recipes/service';
 import { createHarness, type TestHarness } from '../../tests/support/api';
 import { testRecipe } from '../brews/test-scene';
 import { makeFermentationScene } from '../fermentation/test-scene';
+import { listQueue, listReviewed } from './service';
 import { makeReviewScene, sharedBrewWithDecision } from './test-scene';
 
 let h: TestHarness;
@@ -95,6 +97,76 @@ describe('GET /api/reviews/queue', () => {
       expect((await agent.get('/api/reviews/queue').expect(200)).body).toEqual([]);
     }
     await request(h.app).get('/api/reviews/queue').expect(401);
+  });
+});
+
+describe('GET /api/reviews/reviewed', () => {
+  it('finds again the brew days a mentor of the club has commented on, latest comment first, with the same summary as the queue', async () => {
+    const s = await makeReviewScene(h);
+    const first = await sharedBrewWithDecision(s);
+    const second = await sharedBrewWithDecision(s);
+    const waiting = await sharedBrewWithDecision(s);
+    const queued = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body;
+    const before = queued.find((q: { brewId: number }) => q.brewId === first.brewId);
+
+    await s.mentor.agent.post(`/api/brews/${first.brewId}/comments`).send({ body: 'Good mash.' }).expect(201);
+    await s.mentor.agent.post(`/api/brews/${second.brewId}/comments`).send({ body: 'Check the boil-off.' }).expect(201);
+    // A later comment on the first brings it to the top.
+    await new Promise((r) => setTimeout(r, 1100));
+    await s.mentor.agent.post(`/api/brews/${first.brewId}/comments`).send({ body: 'And the late boil.' }).expect(201);
+
+    const reviewed = (await s.mentor.agent.get('/api/reviews/reviewed').expect(200)).body;
+    const ids = reviewed.map((r: { brewId: number }) => r.brewId);
+    expect(ids.filter((id: number) => [first.brewId, second.brewId, waiting.brewId].includes(id))).toEqual([first.brewId, second.brewId]);
+    const item = reviewed.find((r: { brewId: number }) => r.brewId === first.brewId);
+    const { reviewedAt, ...summary } = item;
+    expect(summary).toEqual(before);
+    expect(Date.parse(reviewedAt)).toBeGreaterThan(Date.parse(reviewed.find((r: { brewId: number }) => r.brewId === second.brewId).reviewedAt));
+    const queue = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.map((q: { brewId: number }) => q.brewId);
+    expect(queue).toContain(waiting.brewId);
+    expect(queue).not.toContain(first.brewId);
+
+    // Members, mentors of other clubs and the brewer have no reviewed list of this club.
+    for (const agent of [s.member.agent, s.otherMentor.agent, s.owner.agent]) {
+      const list = (await agent.get('/api/reviews/reviewed').expect(200)).body.map((r: { brewId: number }) => r.brewId);
+      expect(list).not.toContain(first.brewId);
+    }
+    await request(h.app).get('/api/reviews/reviewed').expect(401);
+  });
+});
+
+describe('the queue and the reviewed list read each table once, whatever their length', () => {
+  it('issues the same number of statements for 2 shared brew days as for 12', async () => {
+    const s = await makeReviewScene(h);
+    let statements = 0;
+    const counted = createDb(h.ctx.env.DATABASE_URL, { poolSize: 2, logger: { logQuery: () => void statements++ } });
+    try {
+      const actor = (await loadSessionUser(h.ctx.db, s.mentor.user.id))!;
+      const count = async (list: typeof listQueue) => {
+        statements = 0;
+        const items = await list(counted.db, actor);
+        return { statements, length: items.length };
+      };
+      for (let i = 0; i < 2; i++) await sharedBrewWithDecision(s);
+      const reviewedBrew = await sharedBrewWithDecision(s);
+      await s.mentor.agent.post(`/api/brews/${reviewedBrew.brewId}/comments`).send({ body: 'Seen.' }).expect(201);
+      const small = { queue: await count(listQueue), reviewed: await count(listReviewed) };
+      expect(small.queue.length).toBe(2);
+      expect(small.reviewed.length).toBe(1);
+
+      for (let i = 0; i < 10; i++) await sharedBrewWithDecision(s);
+      const more = await sharedBrewWithDecision(s);
+      await s.mentor.agent.post(`/api/brews/${more.brewId}/comments`).send({ body: 'Seen too.' }).expect(201);
+      const large = { queue: await count(listQueue), reviewed: await count(listReviewed) };
+      expect(large.queue.length).toBe(12);
+      expect(large.reviewed.length).toBe(2);
+      expect(large.queue.statements).toBe(small.queue.statements);
+      expect(large.reviewed.statements).toBe(small.reviewed.statements);
+      // Two to find the shares and the comments, six to read the brew days' rows.
+      expect(large.queue.statements).toBeLessThanOrEqual(8);
+    } finally {
+      await counted.pool.end();
+    }
   });
 });
 

@@ -3,10 +3,10 @@ import { brewParamsSchema, commentInputSchema, commentParamsSchema } from '@shar
 import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
 import { handle } from '../lib/handle';
-import { addComment, deleteComment, getReview, listComments, listQueue } from './service';
+import { addComment, deleteComment, getReview, listComments, listQueue, listReviewed } from './service';
 
 /**
- * A mentor's review: `/api/reviews/queue`, and `/api/brews/:brewId/review` and `…/comments` beside
+ * A mentor's review: `/api/reviews/queue` and `/api/reviews/reviewed`, and `/api/brews/:brewId/review` and `…/comments` beside
  * the brew-day routes. Mounted on the API root before the brew-day router; it answers only its own paths.
  */
 export function reviewsRouter(ctx: AppContext) {
@@ -17,6 +17,12 @@ export function reviewsRouter(ctx: AppContext) {
     '/reviews/queue',
     requireUser,
     handle({}, (_v, req) => listQueue(db, currentUser(req))),
+  );
+
+  router.get(
+    '/reviews/reviewed',
+    requireUser,
+    handle({}, (_v, req) => listReviewed(db, currentUser(req))),
   );
 
   router.get(

@@ -5,16 +5,17 @@
  * server/auth/permissions.ts. A comment is written in a transaction that re-reads the brew day's
  * shares with a lock, so a comment sent a second after the brewer stopped sharing is refused.
  */
-import { and, asc, desc, eq, inArray, ne } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, max, ne } from 'drizzle-orm';
 import { findFermentationDeviations } from '@shared/brew-deviations';
-import { readingKindLabels, type BrewDetail } from '@shared/schemas/brews';
-import type { BrewComment, BrewReview, CommentBody, CommentCreated, CommentTarget, ReviewDeviation, ReviewQueueItem } from '@shared/schemas/comments';
+import { readingKindLabels } from '@shared/schemas/brews';
+import type { RecipeTargets } from '@shared/schemas/recipes';
+import type { BrewComment, BrewReview, CommentBody, CommentCreated, CommentTarget, ReviewDeviation, ReviewedItem, ReviewQueueItem } from '@shared/schemas/comments';
 import { can, canDeleteComment, canSeeComment, type Actor, type OwnedResource } from '../auth/permissions';
-import { getBrew, loadBrewForActor, type StoredBrew } from '../brews/service';
+import { brewDayDeviations, getBrew, loadBrewForActor, toDecision, toReading, type StoredBrew } from '../brews/service';
 import type { AppContext } from '../context';
 import type { Db, DbOrTx } from '../db/client';
-import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, users, type CommentRow } from '../db/schema';
-import { assembleLog } from '../fermentation/service';
+import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, packagingRecords, users, type CommentRow } from '../db/schema';
+import { assembleLog, fermentationDeviations } from '../fermentation/service';
 import { Forbidden, NotFound } from '../lib/errors';
 import { sendAfterCommit } from '../mail/mailer';
 import { mentorCommentNotice } from '../mail/templates';
@@ -222,14 +223,23 @@ export async function getReview(db: DbOrTx, actor: Actor, brewId: number): Promi
   };
 }
 
+interface ClubShare {
+  sharedAt: Date;
+  /** Latest comment of a mentor of these clubs (reviewed list only). */
+  reviewedAt: Date | null;
+  clubs: { id: number; name: string }[];
+}
+
 /**
- * The brew days shared with clubs where the actor is a mentor that no mentor of that club has
- * commented on yet, newest share first. Anyone who mentors no club gets an empty list (not a 403):
- * the Reviews page is in everyone's navigation and says what it lists.
+ * The brew days shared by others with clubs where the actor is a mentor, split by whether a mentor
+ * of that club has commented (a comment counts for a club when its author is a mentor of that club
+ * now, not the brewer). Two statements whatever the number of shares.
  */
-export async function listQueue(db: DbOrTx, actor: Actor): Promise<ReviewQueueItem[]> {
+async function mentorShares(db: DbOrTx, actor: Actor) {
+  const waiting = new Map<number, ClubShare>();
+  const reviewed = new Map<number, ClubShare>();
   const mentorClubIds = actor.memberships.filter((m) => m.role === 'mentor').map((m) => m.clubId);
-  if (mentorClubIds.length === 0) return [];
+  if (mentorClubIds.length === 0) return { waiting, reviewed };
   const shares = await db
     .select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId, clubName: clubs.name, sharedAt: brewClubShares.sharedAt })
     .from(brewClubShares)
@@ -237,65 +247,120 @@ export async function listQueue(db: DbOrTx, actor: Actor): Promise<ReviewQueueIt
     .innerJoin(clubs, eq(clubs.id, brewClubShares.clubId))
     .where(and(inArray(brewClubShares.clubId, mentorClubIds), ne(brews.ownerId, actor.id)))
     .orderBy(desc(brewClubShares.sharedAt), desc(brews.brewedOn), desc(brews.id));
-  if (shares.length === 0) return [];
-  // A comment counts for a club when its author is a mentor of that club now (not the brewer).
-  const reviewed = await db
-    .selectDistinct({ brewId: comments.brewId, clubId: clubMemberships.clubId })
+  if (shares.length === 0) return { waiting, reviewed };
+  const commented = await db
+    .select({ brewId: comments.brewId, clubId: clubMemberships.clubId, lastAt: max(comments.createdAt) })
     .from(comments)
     .innerJoin(brews, eq(brews.id, comments.brewId))
     .innerJoin(clubMemberships, and(eq(clubMemberships.userId, comments.authorId), eq(clubMemberships.role, 'mentor')))
     .where(
       and(
-        inArray(
-          comments.brewId,
-          shares.map((s) => s.brewId),
-        ),
+        inArray(comments.brewId, [...new Set(shares.map((s) => s.brewId))]),
         inArray(clubMemberships.clubId, mentorClubIds),
         ne(comments.authorId, brews.ownerId),
       ),
-    );
-  const done = new Set(reviewed.map((r) => `${r.brewId}:${r.clubId}`));
-  const waiting = new Map<number, { sharedAt: Date; clubs: { id: number; name: string }[] }>();
+    )
+    .groupBy(comments.brewId, clubMemberships.clubId);
+  const done = new Map(commented.map((r) => [`${r.brewId}:${r.clubId}`, r.lastAt]));
   for (const s of shares) {
-    if (done.has(`${s.brewId}:${s.clubId}`)) continue;
-    const entry = waiting.get(s.brewId) ?? { sharedAt: s.sharedAt, clubs: [] };
+    const key = `${s.brewId}:${s.clubId}`;
+    const lastAt = done.get(key);
+    const into = done.has(key) ? reviewed : waiting;
+    const entry = into.get(s.brewId) ?? { sharedAt: s.sharedAt, reviewedAt: null, clubs: [] };
     if (s.sharedAt > entry.sharedAt) entry.sharedAt = s.sharedAt;
+    if (lastAt && (!entry.reviewedAt || lastAt > entry.reviewedAt)) entry.reviewedAt = lastAt;
     entry.clubs.push({ id: s.clubId, name: s.clubName });
-    waiting.set(s.brewId, entry);
+    into.set(s.brewId, entry);
   }
-  const ids = [...waiting.keys()].slice(0, QUEUE_LIMIT);
-  const items = await Promise.all(
-    ids.map(async (brewId): Promise<ReviewQueueItem | null> => {
-      let stored: StoredBrew;
-      try {
-        stored = await loadBrewForActor(db, actor, brewId, 'read');
-      } catch (error) {
-        // Unshared or deleted between the two queries: not waiting any more.
-        if (error instanceof NotFound) return null;
-        throw error;
-      }
-      const { brew, deviations } = await reviewParts(db, actor, stored);
-      const entry = waiting.get(brewId)!;
-      return toQueueItem(brew, entry, deviations.length);
-    }),
-  );
-  return items
-    .filter((i): i is ReviewQueueItem => i !== null)
-    .sort((a, b) => b.sharedAt.localeCompare(a.sharedAt) || b.brewedOn.localeCompare(a.brewedOn) || b.brewId - a.brewId);
+  return { waiting, reviewed };
 }
 
-function toQueueItem(brew: BrewDetail, entry: { sharedAt: Date; clubs: { id: number; name: string }[] }, deviationCount: number): ReviewQueueItem {
+/**
+ * The summary of each brew day with its deviation count (brew day and fermentation, as on the
+ * review page), for any number of brew days in six statements: each table is read once with an
+ * `IN (…)` list rather than once per brew day.
+ */
+async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubShare>, now = new Date()): Promise<ReviewQueueItem[]> {
+  const ids = [...entries.keys()];
+  if (ids.length === 0) return [];
+  const [brewRows, shareRows, readingRows, decisionRows, fermentationRows, packagingRows] = await Promise.all([
+    db.select({ row: brews, ownerName: users.displayName }).from(brews).innerJoin(users, eq(users.id, brews.ownerId)).where(inArray(brews.id, ids)),
+    db.select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId }).from(brewClubShares).where(inArray(brewClubShares.brewId, ids)).orderBy(asc(brewClubShares.clubId)),
+    db.select().from(brewReadings).where(inArray(brewReadings.brewId, ids)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
+    db.select().from(brewDecisions).where(inArray(brewDecisions.brewId, ids)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
+    db.select().from(fermentationReadings).where(inArray(fermentationReadings.brewId, ids)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id)),
+    db.select().from(packagingRecords).where(inArray(packagingRecords.brewId, ids)),
+  ]);
+  const byBrew = <T extends { brewId: number }>(rows: readonly T[]) => {
+    const map = new Map<number, T[]>();
+    for (const r of rows) {
+      const list = map.get(r.brewId);
+      if (list) list.push(r);
+      else map.set(r.brewId, [r]);
+    }
+    return map;
+  };
+  const shares = byBrew(shareRows);
+  const readings = byBrew(readingRows);
+  const decisions = byBrew(decisionRows);
+  const fermentation = byBrew(fermentationRows);
+  const packaging = new Map(packagingRows.map((p) => [p.brewId, p]));
+  const items: ReviewQueueItem[] = [];
+  for (const { row, ownerName } of brewRows) {
+    const stored: StoredBrew = { row, ownerName, sharedWithClubIds: (shares.get(row.id) ?? []).map((s) => s.clubId) };
+    // Unshared or deleted between the queries: not waiting any more.
+    if (!can(actor, 'read', resourceOf(stored))) continue;
+    const brewReadingList = (readings.get(row.id) ?? []).map((r) => toReading(r));
+    const brewDay = brewDayDeviations(row.targetsSnapshot as RecipeTargets, brewReadingList, (decisions.get(row.id) ?? []).map(toDecision));
+    const later = fermentationDeviations(actor, stored, fermentation.get(row.id) ?? [], packaging.get(row.id) ?? null, brewDay, now);
+    const og = brewReadingList.findLast((r) => r.kind === 'og')?.corrected ?? null;
+    items.push(toQueueItem(stored, og, entries.get(row.id)!, brewDay.length + later.length));
+  }
+  return items;
+}
+
+const newestShareFirst = (a: ReviewQueueItem, b: ReviewQueueItem) =>
+  b.sharedAt.localeCompare(a.sharedAt) || b.brewedOn.localeCompare(a.brewedOn) || b.brewId - a.brewId;
+
+/**
+ * The brew days shared with clubs where the actor is a mentor that no mentor of that club has
+ * commented on yet, newest share first. Anyone who mentors no club gets an empty list (not a 403):
+ * the Reviews page is in everyone's navigation and says what it lists. A constant number of
+ * statements whatever the queue's length (server/reviews/queue.test.ts counts them).
+ */
+export async function listQueue(db: DbOrTx, actor: Actor): Promise<ReviewQueueItem[]> {
+  const { waiting } = await mentorShares(db, actor);
+  const newest = new Map([...waiting].slice(0, QUEUE_LIMIT));
+  return (await queueItems(db, actor, newest)).sort(newestShareFirst);
+}
+
+/**
+ * The brew days a mentor of the actor's clubs has already commented on, latest comment first, so
+ * a brew day that left the queue can be found again. Same statement count as the queue.
+ */
+export async function listReviewed(db: DbOrTx, actor: Actor): Promise<ReviewedItem[]> {
+  const { reviewed } = await mentorShares(db, actor);
+  const latest = new Map([...reviewed].sort(([, a], [, b]) => b.reviewedAt!.getTime() - a.reviewedAt!.getTime()).slice(0, QUEUE_LIMIT));
+  const items = await queueItems(db, actor, latest);
+  return items
+    .map((i) => ({ ...i, reviewedAt: latest.get(i.brewId)!.reviewedAt!.toISOString() }))
+    .sort((a, b) => b.reviewedAt.localeCompare(a.reviewedAt) || newestShareFirst(a, b));
+}
+
+function toQueueItem(stored: StoredBrew, og: number | null, entry: ClubShare, deviationCount: number): ReviewQueueItem {
+  const { row } = stored;
+  const targets = row.targetsSnapshot as RecipeTargets;
   return {
-    brewId: brew.id,
-    brewName: brew.name,
-    brewerName: brew.ownerName,
-    recipeName: brew.recipeName,
-    brewedOn: brew.brewedOn,
-    status: brew.status,
+    brewId: row.id,
+    brewName: row.name,
+    brewerName: stored.ownerName,
+    recipeName: targets.name,
+    brewedOn: row.brewedOn,
+    status: row.status,
     sharedAt: entry.sharedAt.toISOString(),
-    clubs: entry.clubs.sort((a, b) => a.name.localeCompare(b.name)),
-    og: brew.og,
-    targetOg: brew.targetOg,
+    clubs: [...entry.clubs].sort((a, b) => a.name.localeCompare(b.name)),
+    og,
+    targetOg: targets.targetOg,
     deviationCount,
   };
 }

@@ -99,12 +99,18 @@ export interface ReviewQueueItem {
   status: BrewDetail['status'];
   /** When it was shared with the (latest of the) clubs below. */
   sharedAt: string;
-  /** The clubs, where you mentor, it is shared with and no mentor has commented on yet. */
+  /** The clubs, where you mentor, it is shared with and no mentor has commented on yet (on the reviewed list: those a mentor has). */
   clubs: { id: number; name: string }[];
   og: number | null;
   targetOg: number;
   /** Brew day and fermentation together, as on the review page. */
   deviationCount: number;
+}
+
+/** One brew day a mentor of your clubs has commented on: it left the queue and is found here again. */
+export interface ReviewedItem extends ReviewQueueItem {
+  /** The latest comment by a mentor of the clubs listed. */
+  reviewedAt: string;
 }
 
 export type ReviewDeviation = BrewDeviation | FermentationDeviation;

@@ -365,7 +365,8 @@ export const listRecipesQuerySchema = z.object({
   scope: z.enum(recipeScopes, { error: 'Choose all, mine or shared.' }).default('all'),
   sort: z.enum(recipeSorts, { error: 'Sort by name, style, og, abv or updated.' }).default('updated'),
   dir: z.enum(['asc', 'desc'], { error: 'Sort direction is asc or desc.' }).optional(),
-  page: z.coerce.number({ error: 'Page must be a number.' }).int().min(1, { error: 'Pages start at 1.' }).default(1),
+  /** Where the previous page ended (its `nextCursor`); absent for the first page. */
+  cursor: z.string().max(300, { error: 'This list has changed since; start again from the top.' }).optional(),
   pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int().min(1).max(100, { error: 'Ask for at most 100 recipes a page.' }).default(20),
 });
 /** What a client asks for; the server fills in the defaults. */
@@ -374,7 +375,7 @@ export interface ListRecipesQuery {
   scope?: RecipeScope;
   sort?: RecipeSort;
   dir?: 'asc' | 'desc';
-  page?: number;
+  cursor?: string;
   pageSize?: number;
 }
 
@@ -394,10 +395,11 @@ export interface RecipeListItem {
   updatedAt: string;
 }
 
+/** One page of the list, paged by key: ask again with `cursor: nextCursor` for the next. No total is counted. */
 export interface RecipeList {
   items: RecipeListItem[];
-  total: number;
-  page: number;
+  /** Null on the last page. */
+  nextCursor: string | null;
   pageSize: number;
 }
 

@@ -11,10 +11,15 @@ export function zodValidate<S extends z.ZodType>(schema: S) {
   return (values: unknown): FormikErrors<z.input<S>> => {
     const parsed = schema.safeParse(values);
     if (parsed.success) return {};
-    const errors: Record<string, unknown> = {};
-    for (const issue of parsed.error.issues) setIn(errors, issue.path.map(String), issue.message);
-    return errors as FormikErrors<z.input<S>>;
+    return issuesToErrors<z.input<S>>(parsed.error.issues);
   };
+}
+
+/** Zod issues as Formik's nested error object (for a form that has already parsed its values). */
+export function issuesToErrors<T>(issues: readonly z.core.$ZodIssue[]): FormikErrors<T> {
+  const errors: Record<string, unknown> = {};
+  for (const issue of issues) setIn(errors, issue.path.map(String), issue.message);
+  return errors as FormikErrors<T>;
 }
 
 function setIn(target: Record<string, unknown>, path: string[], message: string) {

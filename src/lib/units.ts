@@ -85,14 +85,23 @@ export interface Units extends UnitPrefs {
   fromDisplay: (kind: QuantityKind, shown: number) => number;
 }
 
+const unitsCache = new Map<string, Units>();
+
+/** One object per combination of preferences, so memoised components see the same units between renders. */
 export function unitsFor(prefs: UnitPrefs): Units {
-  return {
-    ...prefs,
-    unit: (kind) => quantityUnit(kind, prefs),
-    format: (kind, si) => formatQuantity(kind, prefs, si),
-    toDisplay: (kind, si) => toDisplay(kind, prefs, si),
-    fromDisplay: (kind, shown) => fromDisplay(kind, prefs, shown),
+  const key = `${prefs.unitSystem}:${prefs.gravityUnit}`;
+  const cached = unitsCache.get(key);
+  if (cached) return cached;
+  const p = { unitSystem: prefs.unitSystem, gravityUnit: prefs.gravityUnit };
+  const units: Units = {
+    ...p,
+    unit: (kind) => quantityUnit(kind, p),
+    format: (kind, si) => formatQuantity(kind, p, si),
+    toDisplay: (kind, si) => toDisplay(kind, p, si),
+    fromDisplay: (kind, shown) => fromDisplay(kind, p, shown),
   };
+  unitsCache.set(key, units);
+  return units;
 }
 
 /** The signed-in user's units (metric and SG for visitors). */

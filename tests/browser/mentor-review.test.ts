@@ -112,6 +112,9 @@ describe('a mentor’s review, on a phone-sized window', () => {
     await page.getByRole('heading', { name: 'Reviews' }).waitFor();
     await page.waitForLoadState('networkidle');
     expect(await page.getByTestId('queue-item').filter({ hasText: brewName }).count()).toBe(0);
+    // ...and is found again under "Reviewed".
+    await page.getByRole('heading', { name: 'Reviewed' }).waitFor();
+    await page.getByTestId('reviewed-item').filter({ hasText: brewName }).waitFor();
 
     expect([...mentor.errors, ...brewer.errors]).toEqual([]);
     await mentor.context.close();

@@ -38,7 +38,16 @@ export const recipes = mysqlTable(
     createdAt: timestamp('created_at', { mode: 'date', fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`),
     updatedAt: timestamp('updated_at', { mode: 'date', fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`),
   },
-  (t) => [index('recipes_owner_idx').on(t.ownerId), index('recipes_name_idx').on(t.name)],
+  // Owner plus each sort column (InnoDB appends the id): a page of one brewer's recipes in any
+  // order reads just that page (server/recipes/service.ts listRecipes pages by key).
+  (t) => [
+    index('recipes_owner_idx').on(t.ownerId),
+    index('recipes_name_idx').on(t.name),
+    index('recipes_owner_updated_idx').on(t.ownerId, t.updatedAt, t.id),
+    index('recipes_owner_name_idx').on(t.ownerId, t.name, t.id),
+    index('recipes_owner_style_idx').on(t.ownerId, t.style, t.id),
+    index('recipes_owner_og_idx').on(t.ownerId, t.targetOg, t.id),
+  ],
 );
 
 export const recipeFermentables = mysqlTable(

@@ -3,7 +3,7 @@ import { Plus, Upload, X } from 'lucide-react';
 import { useCallback, useState } from 'react';
 import { useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { recipeScopes, recipeSorts, type ListRecipesQuery, type RecipeScope, type RecipeSort } from '@shared/schemas/recipes';
-import { recipesQueryOptions } from '@/features/recipes/api/list-recipes';
+import { recipePagesQueryOptions } from '@/features/recipes/api/list-recipes';
 import { ImportPanel } from '@/features/recipes/components/import-panel';
 import { RECIPES_PAGE_SIZE, RecipeList } from '@/features/recipes/components/recipe-list';
 import { Button, ButtonLink } from '@/components/ui/button';
@@ -14,13 +14,11 @@ function queryFromParams(params: URLSearchParams): ListRecipesQuery {
   const sort = params.get('sort');
   const dir = params.get('dir');
   const scope = params.get('scope');
-  const page = Number(params.get('page'));
   return {
     q: params.get('q') || undefined,
     sort: recipeSorts.includes(sort as RecipeSort) ? (sort as RecipeSort) : undefined,
     dir: dir === 'asc' || dir === 'desc' ? dir : undefined,
     scope: recipeScopes.includes(scope as RecipeScope) ? (scope as RecipeScope) : undefined,
-    page: Number.isInteger(page) && page > 1 ? page : undefined,
   };
 }
 
@@ -34,7 +32,7 @@ export function loader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
     const query = queryFromParams(new URL(request.url).searchParams);
     // Start the request early; the page shows its own loading and error states.
-    void queryClient.prefetchQuery(recipesQueryOptions({ ...query, pageSize: RECIPES_PAGE_SIZE }));
+    void queryClient.prefetchInfiniteQuery(recipePagesQueryOptions({ ...query, pageSize: RECIPES_PAGE_SIZE }));
     return null;
   };
 }

@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { queueQueryOptions, useQueue } from '@/features/reviews/api/get-queue';
+import { reviewedQueryOptions, useReviewed } from '@/features/reviews/api/get-reviewed';
 import { ReviewQueue } from '@/features/reviews/components/review-queue';
 import { useMe } from '@/lib/auth';
 import { Loading, PageHeader } from '@/components/ui/page';
@@ -8,8 +9,29 @@ import { Notice } from '@/components/ui/notice';
 export function loader(queryClient: QueryClient) {
   return async () => {
     void queryClient.prefetchQuery(queueQueryOptions());
+    void queryClient.prefetchQuery(reviewedQueryOptions());
     return null;
   };
+}
+
+/** Brew days a mentor of your clubs has commented on: they left the queue and are found again here. */
+function ReviewedSection() {
+  const reviewed = useReviewed();
+  if (reviewed.isPending) return <Loading label="Loading the brew days already reviewed…" />;
+  if (reviewed.error) return <Notice tone="error">{reviewed.error.message}</Notice>;
+  return (
+    <section aria-labelledby="reviewed-heading" className="mt-8">
+      <h2 id="reviewed-heading" className="mb-1 text-lg font-bold text-cellar-900">
+        Reviewed
+      </h2>
+      <p className="mb-3 text-sm text-ink-soft">Brew days a mentor of your club has already commented on, latest comment first.</p>
+      {reviewed.data.length > 0 ? (
+        <ReviewQueue items={reviewed.data} label="Reviewed" />
+      ) : (
+        <p className="text-ink-soft">None yet: a brew day moves here once a mentor comments on it.</p>
+      )}
+    </section>
+  );
 }
 
 export function Component() {
@@ -38,6 +60,7 @@ export function Component() {
           Every brew day shared with {mentorOf.map((c) => c.name).join(', ')} has a mentor’s comment. New ones appear here as members share them.
         </Notice>
       )}
+      {mentorOf.length > 0 && <ReviewedSection />}
     </>
   );
 }

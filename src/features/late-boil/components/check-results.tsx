@@ -1,5 +1,5 @@
 import { Check, RotateCcw } from 'lucide-react';
-import { useId, type ReactNode } from 'react';
+import { memo, useId, type ReactNode } from 'react';
 import {
   gapInWords,
   optionActionParts,
@@ -32,8 +32,12 @@ interface ResultsProps {
   beforeOptions?: ReactNode;
 }
 
-/** The answer: where the wort is heading, then one card per thing the brewer can do about it. */
-export function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions }: ResultsProps) {
+/**
+ * The answer: where the wort is heading, then one card per thing the brewer can do about it.
+ * Memoised: Formik renders the whole form again when a field is marked touched, and this panel is
+ * the costly part; it renders only when the check itself changed.
+ */
+export const CheckResults = memo(function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions }: ResultsProps) {
   const { result, currentSg, reading, warnings } = outcome;
   const ordered = orderedOptions(result);
   const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
@@ -101,7 +105,7 @@ export function CheckResults({ input, outcome, units, choice, onChoose, beforeOp
       )}
     </div>
   );
-}
+});
 
 function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
   return (

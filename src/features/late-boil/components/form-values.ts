@@ -118,9 +118,21 @@ export function toCheckInput(values: LateBoilFormValues): Record<string, unknown
 export type ParsedCheck = { ok: true; input: BoilCheckParsed } | { ok: false; missing: string[]; problems: { path: string; message: string }[] };
 
 /** Parses the form's values: the check's input, or what is missing and what is wrong. */
-export function parseCheck(values: LateBoilFormValues): ParsedCheck {
+let lastParse: { key: string; raw: ReturnType<typeof toCheckInput>; parsed: ReturnType<typeof boilCheckInputSchema.safeParse> } | null = null;
+
+/**
+ * The schema's verdict on these values, parsed once per change: Formik's validation and the
+ * answer panel both ask for the same values (as different objects) on every keystroke.
+ */
+export function safeParseCheck(values: LateBoilFormValues) {
   const raw = toCheckInput(values);
-  const parsed = boilCheckInputSchema.safeParse(raw);
+  const key = JSON.stringify(raw, (_k, v: unknown) => (typeof v === 'number' && Number.isNaN(v) ? 'NaN' : v));
+  if (lastParse?.key !== key) lastParse = { key, raw, parsed: boilCheckInputSchema.safeParse(raw) };
+  return lastParse;
+}
+
+export function parseCheck(values: LateBoilFormValues): ParsedCheck {
+  const { raw, parsed } = safeParseCheck(values);
   if (parsed.success) return { ok: true, input: parsed.data satisfies BoilCheckInput };
   const missing: string[] = [];
   const problems: { path: string; message: string }[] = [];

@@ -1,16 +1,16 @@
 import { Field, Form, Formik, useFormikContext } from 'formik';
-import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
 import { gapInWords, optionAction, runBoilCheck, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
 import { BrewMathError, EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
-import { boilCheckInputSchema, type BoilCheckParsed } from '@shared/schemas/boil-check';
+import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
-import { zodValidate } from '@/lib/form';
+import { issuesToErrors } from '@/lib/form';
 import { useUnits, type Units } from '@/lib/units';
 import { CheckResults, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-results';
-import { parseCheck, toCheckInput, toFormValues, type LateBoilFormValues, type LateBoilInitialValues } from './form-values';
+import { parseCheck, safeParseCheck, toFormValues, type LateBoilFormValues, type LateBoilInitialValues } from './form-values';
 import { NumberField } from '@/components/ui/number-field';
 
 export interface LateBoilChoice {
@@ -41,7 +41,10 @@ export interface LateBoilCheckProps {
   renderBeforeOptions?: () => ReactNode;
 }
 
-const validateForm = (values: LateBoilFormValues) => zodValidate(boilCheckInputSchema)(toCheckInput(values));
+const validateForm = (values: LateBoilFormValues) => {
+  const { parsed } = safeParseCheck(values);
+  return parsed.success ? {} : issuesToErrors<LateBoilFormValues>(parsed.error.issues);
+};
 
 const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
   dme: 'Dry malt extract',
@@ -250,17 +253,23 @@ function Answer({
     };
   }, []);
 
-  async function choose(option: FeasibleOption) {
-    if (!onChoose || !check.ok) return;
-    const key = optionKey(option);
-    setChoice({ key, state: 'saving' });
-    try {
-      await onChoose({ option, input: check.input, result: check.outcome });
-      if (mounted.current) setChoice({ key, state: 'saved' });
-    } catch (error) {
-      if (mounted.current) setChoice({ key, state: 'failed', message: (error as Error).message });
-    }
-  }
+  const choose = useCallback(
+    async (option: FeasibleOption) => {
+      if (!onChoose || !check.ok) return;
+      const key = optionKey(option);
+      setChoice({ key, state: 'saving' });
+      try {
+        await onChoose({ option, input: check.input, result: check.outcome });
+        if (mounted.current) setChoice({ key, state: 'saved' });
+      } catch (error) {
+        if (mounted.current) setChoice({ key, state: 'failed', message: (error as Error).message });
+      }
+    },
+    [onChoose, check],
+  );
+  // Stable between keystrokes that do not change the check, so the memoised results skip those renders.
+  const onPick = useMemo(() => (onChoose ? (o: FeasibleOption) => void choose(o) : undefined), [onChoose, choose]);
+  const beforeOptions = renderBeforeOptions?.();
 
   const resultsRef = useRef<HTMLDivElement>(null);
   const answerBelow = useAnswerBelowInputs(inputsRef, resultsRef);
@@ -269,9 +278,7 @@ function Answer({
     <div className="min-w-0 space-y-4">
       <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
         {check.ok ? (
-          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onChoose ? (o) => void choose(o) : undefined}
-            beforeOptions={renderBeforeOptions?.()}
-          />
+          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} />
         ) : (
           <NotReady missing={check.missing} problems={check.problems} />
         )}

@@ -1,4 +1,4 @@
-import { ArrowDown, ArrowUp, ChevronLeft, ChevronRight, Search, Users } from 'lucide-react';
+import { ArrowDown, ArrowUp, ChevronDown, Search, Users } from 'lucide-react';
 import { useEffect, useId, useState } from 'react';
 import { Link } from 'react-router';
 import type { ListRecipesQuery, RecipeListItem, RecipeScope, RecipeSort } from '@shared/schemas/recipes';
@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/page';
 import { useUnits } from '@/lib/units';
-import { useRecipes } from '../api/list-recipes';
+import { useRecipePages } from '../api/list-recipes';
 
 export const RECIPES_PAGE_SIZE = 20;
 
@@ -28,20 +28,22 @@ interface RecipeListProps {
   onQueryChange: (next: ListRecipesQuery) => void;
 }
 
-/** Search, sort and paging all happen on the server; the query lives in the page's URL. */
+/** Search, sort and paging all happen on the server; the query lives in the page's URL; "Show more" adds the next page below. */
 export function RecipeList({ query, onQueryChange }: RecipeListProps) {
   const sort = query.sort ?? 'updated';
   const dir = query.dir ?? defaultDir(sort);
-  const page = query.page ?? 1;
-  const { data, isPending, isError, error, isPlaceholderData, refetch } = useRecipes({ ...query, pageSize: RECIPES_PAGE_SIZE });
-  const set = (patch: ListRecipesQuery) => onQueryChange({ ...query, page: undefined, ...patch });
+  const { data, isPending, isError, error, isPlaceholderData, refetch, hasNextPage, fetchNextPage, isFetchingNextPage } = useRecipePages({
+    ...query,
+    pageSize: RECIPES_PAGE_SIZE,
+  });
+  const items = data?.pages.flatMap((p) => p.items) ?? [];
+  const set = (patch: ListRecipesQuery) => onQueryChange({ ...query, ...patch });
 
   function sortBy(next: RecipeSort) {
     if (next === sort) set({ sort: next, dir: dir === 'asc' ? 'desc' : 'asc' });
     else set({ sort: next, dir: undefined });
   }
 
-  const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   return (
     <div className="space-y-4">
       <Toolbar query={query} sort={sort} dir={dir} onChange={set} />
@@ -54,31 +56,25 @@ export function RecipeList({ query, onQueryChange }: RecipeListProps) {
             Try again
           </Button>
         </Notice>
-      ) : data.items.length === 0 ? (
+      ) : items.length === 0 ? (
         <p className="rounded-xl bg-white p-6 text-center text-ink-soft ring-1 ring-cellar-100">
           {query.q ? `No recipes match “${query.q}”.` : query.scope === 'shared' ? 'Nothing is shared with your clubs yet.' : 'No recipes yet. Create one, or import a Wortwise recipe file.'}
         </p>
       ) : (
         <div className={isPlaceholderData ? 'opacity-60 transition-opacity' : ''} aria-busy={isPlaceholderData || undefined}>
           <p className="mb-2 text-sm text-ink-faint" aria-live="polite">
-            {data.total === 1 ? '1 recipe' : `${data.total} recipes`}
+            {hasNextPage ? `The first ${items.length} recipes; more below.` : items.length === 1 ? '1 recipe' : `${items.length} recipes`}
           </p>
-          <RecipeCards items={data.items} />
-          <RecipeTable items={data.items} sort={sort} dir={dir} onSort={sortBy} />
+          <RecipeCards items={items} />
+          <RecipeTable items={items} sort={sort} dir={dir} onSort={sortBy} />
         </div>
       )}
-      {data && pages > 1 && (
-        <nav aria-label="Pages" className="flex items-center justify-between gap-2">
-          <Button variant="secondary" disabled={page <= 1} onClick={() => onQueryChange({ ...query, page: page - 1 })} icon={<ChevronLeft aria-hidden className="size-5" />}>
-            Previous
+      {hasNextPage && !isPlaceholderData && (
+        <div className="flex justify-center">
+          <Button variant="secondary" disabled={isFetchingNextPage} onClick={() => void fetchNextPage()} icon={<ChevronDown aria-hidden className="size-5" />}>
+            {isFetchingNextPage ? 'Loading more…' : 'Show more recipes'}
           </Button>
-          <span className="text-sm text-ink-soft">
-            Page {page} of {pages}
-          </span>
-          <Button variant="secondary" disabled={page >= pages} onClick={() => onQueryChange({ ...query, page: page + 1 })}>
-            Next <ChevronRight aria-hidden className="size-5" />
-          </Button>
-        </nav>
+        </div>
       )}
     </div>
   );

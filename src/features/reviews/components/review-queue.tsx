@@ -1,33 +1,38 @@
 import { ChevronRight } from 'lucide-react';
 import { Link } from 'react-router';
 import { brewStatusLabels } from '@shared/schemas/brews';
-import type { ReviewQueueItem } from '@shared/schemas/comments';
+import type { ReviewedItem, ReviewQueueItem } from '@shared/schemas/comments';
 import { useUnits } from '@/lib/units';
 
-function sharedAgo(iso: string): string {
+function ago(what: string, iso: string): string {
   const days = Math.floor((Date.now() - Date.parse(iso)) / 86_400_000);
-  if (days <= 0) return 'shared today';
-  if (days === 1) return 'shared yesterday';
-  return `shared ${days} days ago`;
+  if (days <= 0) return `${what} today`;
+  if (days === 1) return `${what} yesterday`;
+  return `${what} ${days} days ago`;
 }
 
-/** Brew days waiting for a mentor's first comment, newest share first: each a big link to its review. */
-export function ReviewQueue({ items }: { items: readonly ReviewQueueItem[] }) {
+const isReviewed = (q: ReviewQueueItem | ReviewedItem): q is ReviewedItem => 'reviewedAt' in q;
+
+/**
+ * Brew days as big links to their review: those waiting for a mentor's first comment (newest share
+ * first) or, with `label="Reviewed"`, those a mentor has commented on (latest comment first).
+ */
+export function ReviewQueue({ items, label = 'Waiting for a review' }: { items: readonly (ReviewQueueItem | ReviewedItem)[]; label?: string }) {
   const units = useUnits();
   return (
-    <ul className="space-y-2" aria-label="Waiting for a review">
+    <ul className="space-y-2" aria-label={label}>
       {items.map((q) => (
         <li key={q.brewId}>
           <Link
             to={`/reviews/${q.brewId}`}
             className="flex min-h-touch items-center gap-3 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100 hover:ring-cellar-300"
-            data-testid="queue-item"
+            data-testid={isReviewed(q) ? 'reviewed-item' : 'queue-item'}
           >
             <span className="min-w-0 flex-1">
               <span className="flex flex-wrap items-baseline justify-between gap-x-3">
                 <span className="text-lg font-bold text-cellar-900">{q.brewName}</span>
                 <span className="text-sm text-ink-faint">
-                  {q.brewedOn} · {sharedAgo(q.sharedAt)}
+                  {q.brewedOn} · {isReviewed(q) ? ago('commented', q.reviewedAt) : ago('shared', q.sharedAt)}
                 </span>
               </span>
               <span className="mt-1 block text-sm text-ink-soft">
