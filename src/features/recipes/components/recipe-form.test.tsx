@@ -6,9 +6,9 @@ import type { Me } from '@shared/schemas/auth';
 import { meQueryOptions } from '@/lib/auth';
 import { RecipeForm } from './recipe-form';
 
-function renderForm(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'> = { unitSystem: 'metric', gravityUnit: 'sg' }) {
+function renderForm(prefs: Partial<Pick<Me, 'unitSystem' | 'gravityUnit' | 'colourScale'>> = {}) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], ...prefs };
+  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], unitSystem: 'metric', gravityUnit: 'sg', colourScale: 'srm', ...prefs };
   queryClient.setQueryData(meQueryOptions().queryKey, me);
   const onSaved = vi.fn();
   render(
