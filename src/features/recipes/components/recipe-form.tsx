@@ -366,8 +366,8 @@ function BitternessColourFigures({ values, estimateOnly }: { values: PanelValues
   return (
     <>
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <Figure label="Estimated bitterness" value={ibu.ibu === null ? '—' : `${Math.round(ibu.ibu)} IBU`} />
-        {!estimateOnly && <Figure label="Target bitterness" value={targetIbu === null ? '—' : `${Math.round(targetIbu)} IBU`} />}
+        <Figure label="Estimated bitterness" value={ibu.ibu === null ? '—' : `${Math.round(ibu.ibu)}\u00a0IBU`} />
+        {!estimateOnly && <Figure label="Target bitterness" value={targetIbu === null ? '—' : `${Math.round(targetIbu)}\u00a0IBU`} />}
         <Figure label="BU:GU" value={buGu === null ? '—' : buGu.toFixed(2)} />
         <Figure label="Estimated colour" value={formatColour(colour.srm, scale)} />
         {!estimateOnly && <Figure label="Target colour" value={formatColour(targetSrm, scale)} />}
