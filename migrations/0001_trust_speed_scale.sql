@@ -1,3 +1,14 @@
+CREATE TABLE `recipe_versions` (
+	`id` int AUTO_INCREMENT NOT NULL,
+	`recipe_id` int NOT NULL,
+	`version` int NOT NULL,
+	`data` json NOT NULL,
+	`saved_by_id` int,
+	`saved_at` timestamp(3) NOT NULL DEFAULT CURRENT_TIMESTAMP(3),
+	CONSTRAINT `recipe_versions_id` PRIMARY KEY(`id`),
+	CONSTRAINT `recipe_versions_recipe_version_idx` UNIQUE(`recipe_id`,`version`)
+);
+--> statement-breakpoint
 CREATE TABLE `idempotency_keys` (
 	`id` int AUTO_INCREMENT NOT NULL,
 	`user_id` int NOT NULL,
@@ -18,8 +29,15 @@ CREATE TABLE `revoked_sessions` (
 );
 --> statement-breakpoint
 ALTER TABLE `packaging_records` MODIFY COLUMN `verdict_state` enum('no-reading','too-early','moving','stuck','stable') NOT NULL;--> statement-breakpoint
+ALTER TABLE `users` ADD `colour_scale` enum('srm','ebc') DEFAULT 'srm' NOT NULL;--> statement-breakpoint
+ALTER TABLE `recipe_fermentables` ADD `colour_lovibond` double;--> statement-breakpoint
+ALTER TABLE `recipes` ADD `target_ibu` double;--> statement-breakpoint
+ALTER TABLE `recipes` ADD `target_colour_srm` double;--> statement-breakpoint
+ALTER TABLE `recipes` ADD `souring_target_ph` double;--> statement-breakpoint
 ALTER TABLE `instruments` ADD `resolution_sg` double;--> statement-breakpoint
 ALTER TABLE `instruments` ADD `offset_scale` double;--> statement-breakpoint
+ALTER TABLE `recipe_versions` ADD CONSTRAINT `recipe_versions_recipe_id_recipes_id_fk` FOREIGN KEY (`recipe_id`) REFERENCES `recipes`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE `recipe_versions` ADD CONSTRAINT `recipe_versions_saved_by_id_users_id_fk` FOREIGN KEY (`saved_by_id`) REFERENCES `users`(`id`) ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE `idempotency_keys` ADD CONSTRAINT `idempotency_keys_user_id_users_id_fk` FOREIGN KEY (`user_id`) REFERENCES `users`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX `idempotency_keys_expires_idx` ON `idempotency_keys` (`expires_at`);--> statement-breakpoint
 CREATE INDEX `revoked_sessions_expires_idx` ON `revoked_sessions` (`expires_at`);--> statement-breakpoint

@@ -389,6 +389,10 @@ const cases: Case[] = [
   },
   { route: 'GET /api/recipes/:id/export', label: 'shared', call: (a) => a.get(`/api/recipes/${scene.sharedRecipe}/export`), expected: sharedRead(200) },
   { route: 'GET /api/recipes/:id/export', label: 'private', call: (a) => a.get(`/api/recipes/${scene.privateRecipe}/export?format=csv`), expected: ownerOnly(200) },
+  { route: 'GET /api/recipes/:id/versions', label: 'shared', call: (a) => a.get(`/api/recipes/${scene.sharedRecipe}/versions`), expected: sharedRead(200) },
+  { route: 'GET /api/recipes/:id/versions', label: 'private', call: (a) => a.get(`/api/recipes/${scene.privateRecipe}/versions`), expected: ownerOnly(200) },
+  { route: 'GET /api/recipes/:id/versions/:version', label: 'shared', call: (a) => a.get(`/api/recipes/${scene.sharedRecipe}/versions/1`), expected: sharedRead(200) },
+  { route: 'GET /api/recipes/:id/versions/:version', label: 'private', call: (a) => a.get(`/api/recipes/${scene.privateRecipe}/versions/1`), expected: ownerOnly(200) },
 
   // Instruments and kettles: never shared.
   { route: 'GET /api/instruments', call: (a) => a.get('/api/instruments'), expected: signedIn(200) },

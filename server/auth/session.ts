@@ -16,6 +16,7 @@ export interface SessionUser extends Actor {
   displayName: string;
   unitSystem: User['unitSystem'];
   gravityUnit: User['gravityUnit'];
+  colourScale: User['colourScale'];
   clubs: { id: number; name: string; role: Actor['memberships'][number]['role'] }[];
 }
 
@@ -113,6 +114,7 @@ function toSessionUser(rows: Awaited<ReturnType<typeof loadSessionRows>>): Sessi
     displayName: user.displayName,
     unitSystem: user.unitSystem,
     gravityUnit: user.gravityUnit,
+    colourScale: user.colourScale,
     siteRole: user.siteRole,
     clubs: clubList,
     memberships: clubList.map((c) => ({ clubId: c.id, role: c.role })),

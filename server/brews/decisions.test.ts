@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { EXTRACT_POTENTIALS_POINTS_L_PER_KG, EXTRACT_VOLUME_L_PER_KG } from '@shared/brewmath';
 import { brewDecisions } from '../db/schema';
 import { createHarness, type TestHarness } from '../../tests/support/api';
-import { makeScene, startBrewDay } from './test-scene';
+import { makeScene, startBrewDay, testRecipe } from './test-scene';
 
 let h: TestHarness;
 beforeAll(async () => {
@@ -174,5 +174,40 @@ describe('POST /api/brews/:id/decisions', () => {
     await scene.mentor.agent.post(`/api/brews/${id}/decisions`).send(body).expect(403);
     await request(h.app).post(`/api/brews/${id}/decisions`).send(body).expect(401);
     expect(await decisionCount(id)).toBe(0);
+  });
+});
+
+describe('bitterness and colour recomputed with a decision', () => {
+  /**
+   * A brew day from a recipe with 40 g of 10 % hops at 60 minutes. The sample reads 1.056 (at the
+   * hydrometer's calibration temperature), 24 L hot, 10 minutes left at 3 L/h, 4 % shrinkage.
+   * - End: 23.5 L hot, 22.56 L cold; extract 56 × 24 × 0.96 = 1290.24 points·L; as is 57.19 points.
+   * - Water to 1.050: 1290.24 / 50 = 25.805 L, i.e. 3.245 L of water.
+   * - Tinseth at boil SG (1.056 + 1.057191) / 2 = 1.056596: U(60) = 0.21739 (hand, as in
+   *   shared/boil-check/balance.test.ts); 0.10 × 40 000 / 22.56 = 177.305 mg/L → 38.54 IBU as is.
+   * - Water dilutes it by 22.56 / 25.805 = 0.87425 (= 50 / 57.19): 33.70 IBU.
+   */
+  it('stores each option\'s predicted IBU from the brew day\'s own recipe snapshot', async () => {
+    const scene = await makeScene(h);
+    const recipe = await scene.owner.agent.post('/api/recipes').send({
+      ...testRecipe,
+      name: 'Hopped',
+      targetIbu: 30,
+      hops: [{ name: 'Bittering', amountG: 40, minutes: 60, alphaAcidPercent: 10 }],
+    });
+    expect(recipe.status).toBe(201);
+    const brew = await scene.owner.agent.post('/api/brews').send({ recipeId: recipe.body.id });
+    expect(brew.status).toBe(201);
+    const input = { ...workedInput, reading: { kind: 'hydrometer', sg: 1.056, sampleTempC: 20, calibrationTempC: 20 }, targetVolumeL: undefined };
+    const res = await scene.owner.agent.post(`/api/brews/${brew.body.id}/decisions`).send({ input, choice: { kind: 'water' }, note: '' });
+    expect(res.status).toBe(201);
+    expect(res.body.chosen.litres).toBeCloseTo(3.245, 2);
+    const { balance, chosenBalance } = res.body.result;
+    expect(balance.asIs.ibu).toBeCloseTo(38.54, 1);
+    expect(chosenBalance.ibu).toBeCloseTo(33.7, 1);
+    expect(chosenBalance.ibu / balance.asIs.ibu).toBeCloseTo(22.56 / 25.8048, 6);
+    expect(chosenBalance.ibuDeviation).toBeCloseTo(3.7, 1);
+    // The malt has no colour in testRecipe: no colour figure rather than a guess.
+    expect(chosenBalance.colourSrm).toBeNull();
   });
 });

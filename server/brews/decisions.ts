@@ -5,7 +5,8 @@
  * client is never read (the schema drops it).
  */
 import { eq } from 'drizzle-orm';
-import { EXTRACT_NAMES, runBoilCheck } from '@shared/boil-check';
+import { EXTRACT_NAMES, predictBoilBalance, runBoilCheck } from '@shared/boil-check';
+import type { RecipeTargets } from '@shared/schemas/recipes';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import type { BrewDecision, DecisionChoice } from '@shared/schemas/brews';
 import type { Actor } from '../auth/permissions';
@@ -45,14 +46,17 @@ export async function addDecision(
   body: { input: BoilCheckParsed; choice: DecisionChoice; note: string },
   now = new Date(),
 ): Promise<BrewDecision> {
-  await loadBrewForActor(db, actor, brewId, 'update');
+  const brew = await loadBrewForActor(db, actor, brewId, 'update');
   const outcome = recompute(body.input);
   const chosen = chosenOption(outcome, body.input, body.choice);
+  // Bitterness and colour of each option, from the brew day's own recipe snapshot (never the client's).
+  const balance = predictBoilBalance(body.input, outcome, brew.row.targetsSnapshot as RecipeTargets);
+  const chosenBalance = chosen && balance ? balance.options[outcome.result.options.indexOf(chosen)] : null;
   const id = await db.transaction(async (tx) => {
     await lockBrewRow(tx, brewId);
     const [{ id }] = await tx
       .insert(brewDecisions)
-      .values({ brewId, input: body.input, result: { ...outcome, chosen }, choice: body.choice, note: body.note, decidedAt: now })
+      .values({ brewId, input: body.input, result: { ...outcome, chosen, balance, chosenBalance }, choice: body.choice, note: body.note, decidedAt: now })
       .$returningId();
     await touchStage(tx, brewId, 'boil', now);
     return id;

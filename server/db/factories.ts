@@ -24,6 +24,7 @@ export interface UserFactoryInput {
   siteRole?: 'user' | 'admin';
   unitSystem?: 'metric' | 'us';
   gravityUnit?: 'sg' | 'plato';
+  colourScale?: 'srm' | 'ebc';
 }
 
 export const factoryPassword = 'correct horse battery';
@@ -37,6 +38,7 @@ export async function makeUser(db: DbOrTx, input: UserFactoryInput = {}) {
     siteRole: input.siteRole ?? 'user',
     unitSystem: input.unitSystem ?? 'metric',
     gravityUnit: input.gravityUnit ?? 'sg',
+    colourScale: input.colourScale ?? 'srm',
   } as const;
   const [{ id }] = await db.insert(users).values(values).$returningId();
   return { id, ...values, password: input.password ?? factoryPassword };

@@ -6,7 +6,10 @@
 import {
   RECIPE_FILE_FORMAT,
   RECIPE_FILE_VERSION,
+  estimateRecipeColour,
+  estimateRecipeIbu,
   estimateRecipeOg,
+  recipeBuGu,
   fermentableInputSchema,
   hopInputSchema,
   mashStepInputSchema,
@@ -73,6 +76,12 @@ export function toRecipeCsv(data: RecipeData): string {
     ['recipe', null, 'estimated_og', estimate, 'SG'],
     ['recipe', null, 'abv', abv?.abvPercent ?? null, '%'],
     ['recipe', null, 'apparent_attenuation', abv ? abv.apparentAttenuation * 100 : null, '%'],
+    ['recipe', null, 'target_ibu', data.targetIbu, 'IBU'],
+    ['recipe', null, 'estimated_ibu', estimateRecipeIbu(data).ibu, 'IBU'],
+    ['recipe', null, 'bu_gu', recipeBuGu(data.targetIbu, data.targetOg), ''],
+    ['recipe', null, 'target_colour', data.targetColourSrm, 'SRM'],
+    ['recipe', null, 'estimated_colour', estimateRecipeColour(data).srm, 'SRM'],
+    ['recipe', null, 'souring_target_ph', data.souringTargetPh, 'pH'],
     ['recipe', null, 'mash_ph_target', data.mashPhTarget, 'pH'],
     ['recipe', null, 'fermentation_temp_min', data.fermentationTempMinC, '°C'],
     ['recipe', null, 'fermentation_temp_max', data.fermentationTempMaxC, '°C'],
@@ -85,6 +94,7 @@ export function toRecipeCsv(data: RecipeData): string {
       ['fermentable', i + 1, 'kind', f.kind, ''],
       ['fermentable', i + 1, 'amount', f.amountKg, 'kg'],
       ['fermentable', i + 1, 'potential', f.potentialPointsLPerKg, 'points·L/kg'],
+      ['fermentable', i + 1, 'colour', f.colourLovibond, '°L'],
     );
   });
   data.hops.forEach((h, i) => {

@@ -213,7 +213,7 @@ describe('permissions', () => {
     const copy = await member.agent.post(`/api/recipes/${id}/clone`);
     expect(copy.status).toBe(201);
     expect(copy.body).toMatchObject({ name: 'Shared Pale (copy)', ownerId: member.user.id, clonedFromId: id, version: 1, sharedWithClubIds: [] });
-    expect(copy.body.fermentables).toEqual(paleAle().fermentables);
+    expect(copy.body.fermentables).toEqual(paleAle().fermentables!.map((f) => ({ ...f, colourLovibond: null })));
     expect(copy.body.permissions.edit).toBe(true);
 
     await outsider.agent.get(`/api/recipes/${id}`).expect(404);
@@ -403,6 +403,14 @@ describe('getRecipeTargets: the snapshot a brew day keeps', () => {
       efficiency: 0.75,
       targetOg: 1.045,
       targetFg: 1.01,
+      targetIbu: null,
+      targetColourSrm: null,
+      souringTargetPh: null,
+      hops: [
+        { amountG: 25, minutes: 60, alphaAcidPercent: 8 },
+        { amountG: 30, minutes: 5, alphaAcidPercent: 5.5 },
+      ],
+      grist: [{ amountKg: 4.6, colourLovibond: null }],
       mashPhTarget: 5.3,
       mashSteps: [
         { tempC: 66, minutes: 60 },
@@ -427,7 +435,7 @@ describe('export and import', () => {
     expect(file.status).toBe(200);
     expect(file.headers['content-disposition']).toMatch(/^attachment; filename="?round-trip-olbier\.wortwise\.json"?$/);
     const json = JSON.parse(file.text);
-    expect(json).toMatchObject({ format: 'wortwise-recipe', version: 1, recipe: { ...paleAle({ name: 'Round Trip Ölbier' }) } });
+    expect(json).toMatchObject({ format: 'wortwise-recipe', version: 2, recipe: { ...paleAle({ name: 'Round Trip Ölbier' }) } });
 
     const imported = await agent.post('/api/recipes/import').attach('file', Buffer.from(file.text), 'recipe.json');
     expect(imported.status).toBe(201);

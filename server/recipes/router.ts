@@ -2,7 +2,7 @@ import { Router } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
 import { idParamSchema } from '@shared/schemas/common';
-import { listRecipesQuerySchema, recipeInputSchema, recipeUpdateSchema, sharingInputSchema, type RecipeImportResult } from '@shared/schemas/recipes';
+import { listRecipesQuerySchema, recipeInputSchema, recipeVersionParamsSchema, recipeUpdateSchema, sharingInputSchema, type RecipeImportResult } from '@shared/schemas/recipes';
 import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
 import { handle } from '../lib/handle';
@@ -12,6 +12,8 @@ import {
   createRecipe,
   deleteRecipe,
   getRecipe,
+  getRecipeVersion,
+  listRecipeVersions,
   listRecipes,
   loadRecipeForActor,
   setRecipeSharing,
@@ -83,6 +85,16 @@ export function recipesRouter(ctx: AppContext) {
       res.status(201).location(`/api/recipes/${copy.id}`);
       return copy;
     }),
+  );
+
+  router.get(
+    '/:id/versions',
+    handle({ params: idParamSchema }, ({ params }, req) => listRecipeVersions(db, currentUser(req), params.id)),
+  );
+
+  router.get(
+    '/:id/versions/:version',
+    handle({ params: recipeVersionParamsSchema }, ({ params }, req) => getRecipeVersion(db, currentUser(req), params.id, params.version)),
   );
 
   router.put(

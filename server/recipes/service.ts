@@ -6,7 +6,10 @@
  */
 import { and, asc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import {
+  estimateRecipeColour,
+  estimateRecipeIbu,
   estimateRecipeOg,
+  recipeBuGu,
   targetAbv,
   type ListRecipesQuery,
   type Recipe,
@@ -16,13 +19,15 @@ import {
   type RecipeSharing,
   type RecipeSort,
   type RecipeTargets,
+  type RecipeVersion,
+  type RecipeVersionSummary,
 } from '@shared/schemas/recipes';
 import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
 import type { z } from 'zod';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
 import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
 import type { DbOrTx, Tx } from '../db/client';
-import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, users, type RecipeRow } from '../db/schema';
+import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, recipeVersions, users, type RecipeRow } from '../db/schema';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 
 /** A recipe as stored, with its child rows and the clubs it is shared with. */
@@ -63,11 +68,14 @@ async function findStoredRecipe(db: DbOrTx, id: number): Promise<StoredRecipe | 
       efficiency: row.efficiency,
       targetOg: row.targetOg,
       targetFg: row.targetFg,
+      targetIbu: row.targetIbu,
+      targetColourSrm: row.targetColourSrm,
+      souringTargetPh: row.souringTargetPh,
       mashPhTarget: row.mashPhTarget,
       fermentationTempMinC: row.fermentationTempMinC,
       fermentationTempMaxC: row.fermentationTempMaxC,
       yeast: { name: row.yeastName, amount: row.yeastAmount },
-      fermentables: fermentables.map((f) => ({ name: f.name, kind: f.kind, amountKg: f.amountKg, potentialPointsLPerKg: f.potentialPointsLPerKg })),
+      fermentables: fermentables.map((f) => ({ name: f.name, kind: f.kind, amountKg: f.amountKg, potentialPointsLPerKg: f.potentialPointsLPerKg, colourLovibond: f.colourLovibond })),
       hops: hops.map((h) => ({ name: h.name, amountG: h.amountG, minutes: h.minutes, alphaAcidPercent: h.alphaAcidPercent })),
       mashSteps: mashSteps.map((m) => ({ tempC: m.tempC, minutes: m.minutes })),
     },
@@ -112,6 +120,9 @@ export function toRecipe(actor: Actor, stored: StoredRecipe): Recipe {
       clone: can(actor, 'clone', resource),
     },
     estimatedOg: estimateRecipeOg(data).og,
+    estimatedIbu: estimateRecipeIbu(data).ibu,
+    estimatedColourSrm: estimateRecipeColour(data).srm,
+    buToGu: recipeBuGu(data.targetIbu, data.targetOg),
     abvPercent: abv?.abvPercent ?? 0,
     apparentAttenuation: abv?.apparentAttenuation ?? 0,
   };
@@ -275,6 +286,9 @@ function columnsOf(data: RecipeData) {
     efficiency: data.efficiency,
     targetOg: data.targetOg,
     targetFg: data.targetFg,
+    targetIbu: data.targetIbu,
+    targetColourSrm: data.targetColourSrm,
+    souringTargetPh: data.souringTargetPh,
     mashPhTarget: data.mashPhTarget,
     fermentationTempMinC: data.fermentationTempMinC,
     fermentationTempMaxC: data.fermentationTempMaxC,
@@ -304,6 +318,7 @@ export async function createRecipe(db: DbOrTx, actor: Actor, data: RecipeData, c
       .values({ ...columnsOf(data), ownerId: actor.id, clonedFromId })
       .$returningId();
     await insertChildren(tx, id, data);
+    await tx.insert(recipeVersions).values({ recipeId: id, version: 1, data, savedById: actor.id });
     return id;
   });
 }
@@ -338,6 +353,8 @@ export async function updateRecipe(db: DbOrTx, actor: Actor, id: number, data: R
     await tx.delete(recipeHops).where(eq(recipeHops.recipeId, id));
     await tx.delete(recipeMashSteps).where(eq(recipeMashSteps.recipeId, id));
     await insertChildren(tx, id, data);
+    const { version: _edited, ...content } = data;
+    await tx.insert(recipeVersions).values({ recipeId: id, version: data.version + 1, data: content, savedById: actor.id });
   });
   return getRecipe(db, actor, id);
 }
@@ -375,6 +392,42 @@ export async function setRecipeSharing(db: DbOrTx, actor: Actor, id: number, clu
 }
 
 // ---------------------------------------------------------------------------------------------
+// History
+
+/**
+ * Every saved version, newest first. Recipes saved before history was kept have no rows for
+ * their earlier versions; their current version is listed from the recipe itself.
+ */
+export async function listRecipeVersions(db: DbOrTx, actor: Actor, id: number): Promise<RecipeVersionSummary[]> {
+  const stored = await loadRecipeForActor(db, actor, id, 'read');
+  const rows = await db
+    .select({ version: recipeVersions.version, savedAt: recipeVersions.savedAt, savedByName: users.displayName })
+    .from(recipeVersions)
+    .leftJoin(users, eq(users.id, recipeVersions.savedById))
+    .where(eq(recipeVersions.recipeId, id))
+    .orderBy(desc(recipeVersions.version));
+  const list = rows.map((r) => ({ version: r.version, savedAt: r.savedAt.toISOString(), savedByName: r.savedByName }));
+  if (!list.some((v) => v.version === stored.row.version)) {
+    list.unshift({ version: stored.row.version, savedAt: stored.row.updatedAt.toISOString(), savedByName: null });
+  }
+  return list;
+}
+
+export async function getRecipeVersion(db: DbOrTx, actor: Actor, id: number, version: number): Promise<RecipeVersion> {
+  const stored = await loadRecipeForActor(db, actor, id, 'read');
+  const [row] = await db
+    .select({ version: recipeVersions.version, savedAt: recipeVersions.savedAt, savedByName: users.displayName, data: recipeVersions.data })
+    .from(recipeVersions)
+    .leftJoin(users, eq(users.id, recipeVersions.savedById))
+    .where(and(eq(recipeVersions.recipeId, id), eq(recipeVersions.version, version)));
+  if (row) return { recipeId: id, version: row.version, savedAt: row.savedAt.toISOString(), savedByName: row.savedByName, data: row.data };
+  if (version === stored.row.version) {
+    return { recipeId: id, version, savedAt: stored.row.updatedAt.toISOString(), savedByName: null, data: stored.data };
+  }
+  throw new NotFound(`Version ${version} of this recipe was not kept (history starts with the versions saved since it was added).`);
+}
+
+// ---------------------------------------------------------------------------------------------
 // The brew day's snapshot
 
 /**
@@ -399,6 +452,11 @@ export async function getRecipeTargets(db: DbOrTx, recipeId: number): Promise<Re
     efficiency: data.efficiency,
     targetOg: data.targetOg,
     targetFg: data.targetFg,
+    targetIbu: data.targetIbu,
+    targetColourSrm: data.targetColourSrm,
+    souringTargetPh: data.souringTargetPh,
+    hops: data.hops.map((h) => ({ amountG: h.amountG, minutes: h.minutes, alphaAcidPercent: h.alphaAcidPercent })),
+    grist: data.fermentables.map((f) => ({ amountKg: f.amountKg, colourLovibond: f.colourLovibond })),
     mashPhTarget: data.mashPhTarget,
     mashSteps: data.mashSteps.map((m) => ({ tempC: m.tempC, minutes: m.minutes })),
     fermentationTempMinC: data.fermentationTempMinC,

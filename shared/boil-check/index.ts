@@ -152,3 +152,4 @@ export function runBoilCheck(input: BoilCheckInput): BoilCheckOutcome {
 }
 
 export * from './words';
+export * from './balance';

@@ -75,6 +75,13 @@ const calls: Record<string, (n: number[]) => unknown> = {
   deltaFToC: ([a]) => math.deltaFToC(a),
   formatGravity: ([a]) => math.formatGravity(a, 'plato'),
   formatVolume: ([a]) => math.formatVolume(a, 'us'),
+  tinsethUtilisation: ([a, b]) => math.tinsethUtilisation(a, b),
+  ibuTinseth: ([a, b, c, d, e, f]) => math.ibuTinseth({ hops: [{ alphaAcidPercent: a, massG: b, boilMinutes: c }], boilSg: d, volumeL: e, whirlpoolEquivalentMinutes: f }),
+  buToGu: ([a, b]) => math.buToGu(a, b),
+  moreyColour: ([a, b, c, d, e]) => math.moreyColour([{ massKg: a, colourLovibond: b }, { massKg: c, colourLovibond: d }], e),
+  srmToEbc: ([a]) => math.srmToEbc(a),
+  ebcToSrm: ([a]) => math.ebcToSrm(a),
+  maltEbcToLovibond: ([a]) => math.maltEbcToLovibond(a),
 };
 
 describe('no NaN or Infinity ever comes out', () => {

@@ -34,11 +34,14 @@ export const unitSystems = ['metric', 'us'] as const;
 export const gravityUnits = ['sg', 'plato'] as const;
 export type UnitSystem = (typeof unitSystems)[number];
 export type GravityUnit = (typeof gravityUnits)[number];
+export const colourScales = ['srm', 'ebc'] as const;
+export type ColourScalePreference = (typeof colourScales)[number];
 
 export const preferencesSchema = z
   .object({
     unitSystem: z.enum(unitSystems, { error: 'Choose metric or US units.' }),
     gravityUnit: z.enum(gravityUnits, { error: 'Choose SG or °Plato.' }),
+    colourScale: z.enum(colourScales, { error: 'Choose SRM or EBC.' }),
     displayName: displayNameSchema,
   })
   .partial();
@@ -54,6 +57,7 @@ export const meSchema = z.object({
   displayName: z.string(),
   unitSystem: z.enum(unitSystems),
   gravityUnit: z.enum(gravityUnits),
+  colourScale: z.enum(colourScales),
   siteRole: z.enum(['user', 'admin']),
   clubs: z.array(z.object({ id: z.number(), name: z.string(), role: clubRoleSchema })),
 });

@@ -10,6 +10,8 @@ import { boilOffRateLPerHour } from '../brewmath/boil';
 import { BrewMathError } from '../brewmath/errors';
 import { estimateOg, POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG, type FermentableKind } from '../brewmath/extract';
 import { LITRES_PER_US_GALLON } from '../brewmath/units';
+import { buToGu, ibuTinseth } from '../brewmath/bitterness';
+import { BEER_COLOUR_MAX_SRM, BEER_COLOUR_MIN_SRM, MALT_COLOUR_MAX_LOVIBOND, moreyColour, SRM_TO_EBC } from '../brewmath/colour';
 
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
@@ -39,6 +41,9 @@ export const defaultPotentialPointsLPerKg: Record<RecipeFermentableKind, number 
   other: null,
 };
 
+/** Souring target pH we accept; common practice is about 3.2 to 3.6 before the boil (no source). */
+export const SOURING_PH_LIMITS = { min: 2.8, max: 4.6, usualMin: 3.2, usualMax: 3.6 } as const;
+
 /** Mash pH target when the author gives none (common practice, no source). */
 export const DEFAULT_MASH_PH_TARGET = 5.2;
 
@@ -57,7 +62,8 @@ export const RECIPE_LIMITS = {
   boilOffLPerHour: 100,
   fermentableKg: 1000,
   hopG: 20_000,
-  alphaAcidPercent: 30,
+  alphaAcidPercent: 25,
+  targetIbu: 200,
   mashStepMinutes: 600,
   fermentables: 40,
   hops: 40,
@@ -138,6 +144,13 @@ function textField(what: string, max: number, required: boolean) {
   return required ? base.min(1, { error: `Enter ${what}.` }) : base;
 }
 
+/** A number the author may leave empty: null (or absent) means "not set". */
+function optionalNumberField(rule: NumberRule) {
+  return numberField(rule).nullable().default(null);
+}
+
+const ebc = (srmOrLovibond: number) => `${Number((srmOrLovibond * SRM_TO_EBC).toFixed(0))} EBC`;
+
 // ---------------------------------------------------------------------------------------------
 // Child rows
 
@@ -158,6 +171,14 @@ export const fermentableInputSchema = z.object({
     min: POTENTIAL_MIN_POINTS_L_PER_KG,
     max: POTENTIAL_MAX_POINTS_L_PER_KG,
     rangeMessage: `Potential must be between ${POTENTIAL_MIN_POINTS_L_PER_KG} and ${POTENTIAL_MAX_POINTS_L_PER_KG} points·L/kg (about 6 to 54 points per lb per gallon); table sugar is about 384 (46).`,
+  }),
+  /** Malt colour in °L (stored; the form shows EBC to those who prefer it). Empty: unknown. */
+  colourLovibond: optionalNumberField({
+    what: 'the malt colour',
+    label: 'Malt colour',
+    min: 0,
+    max: MALT_COLOUR_MAX_LOVIBOND,
+    rangeMessage: `Malt colour must be between 0 and ${MALT_COLOUR_MAX_LOVIBOND} °L (0 and ${ebc(MALT_COLOUR_MAX_LOVIBOND)}); black malt is about 500 °L.`,
   }),
 });
 export type FermentableInput = z.input<typeof fermentableInputSchema>;
@@ -185,7 +206,7 @@ export const hopInputSchema = z.object({
     min: 0,
     exclusiveMin: true,
     max: RECIPE_LIMITS.alphaAcidPercent,
-    rangeMessage: `Alpha acid is a percentage, at most ${RECIPE_LIMITS.alphaAcidPercent} %.`,
+    rangeMessage: `Alpha acid must be above 0 and at most ${RECIPE_LIMITS.alphaAcidPercent} %; hops are sold at about 2 to 20 %.`,
   }),
 });
 export type HopInput = z.input<typeof hopInputSchema>;
@@ -255,6 +276,30 @@ const recipeShape = {
     min: 0.98,
     max: 1.2,
     rangeMessage: 'Target FG must be between 0.980 and 1.200.',
+  }),
+  targetIbu: optionalNumberField({
+    what: 'the target bitterness',
+    label: 'Target bitterness',
+    min: 0,
+    max: RECIPE_LIMITS.targetIbu,
+    rangeMessage: `Target bitterness must be between 0 and ${RECIPE_LIMITS.targetIbu} IBU.`,
+  }),
+  targetColourSrm: optionalNumberField({
+    what: 'the target colour',
+    label: 'Target colour',
+    min: BEER_COLOUR_MIN_SRM,
+    max: BEER_COLOUR_MAX_SRM,
+    rangeOnly: true,
+    rangeMessage: `Target colour must be between ${BEER_COLOUR_MIN_SRM} and ${BEER_COLOUR_MAX_SRM} SRM (${ebc(BEER_COLOUR_MIN_SRM)} and ${ebc(BEER_COLOUR_MAX_SRM)}).`,
+  }),
+  /** Kettle souring: pH the wort is soured to before the boil (common practice about 3.2 to 3.6). */
+  souringTargetPh: optionalNumberField({
+    what: 'the souring target pH',
+    label: 'Souring target pH',
+    min: SOURING_PH_LIMITS.min,
+    max: SOURING_PH_LIMITS.max,
+    rangeOnly: true,
+    rangeMessage: `Souring target pH must be between ${SOURING_PH_LIMITS.min} and ${SOURING_PH_LIMITS.max}; kettle sours usually aim for about 3.2 to 3.6 before the boil.`,
   }),
   mashPhTarget: numberField({
     what: 'the mash pH target',
@@ -419,9 +464,32 @@ export interface Recipe extends RecipeData {
   permissions: { edit: boolean; share: boolean; delete: boolean; clone: boolean };
   /** From the fermentables, efficiency and batch volume; null when they give no estimate. */
   estimatedOg: number | null;
+  /** Tinseth from the hops; null with no hops. */
+  estimatedIbu: number | null;
+  /** Morey from the fermentables' colours; null while any colour is unknown. */
+  estimatedColourSrm: number | null;
+  /** Target IBU over target OG's gravity points; null without a target IBU. */
+  buToGu: number | null;
   abvPercent: number;
   apparentAttenuation: number;
 }
+
+/** One saved version in a recipe's history. */
+export interface RecipeVersionSummary {
+  version: number;
+  savedAt: string;
+  savedByName: string | null;
+}
+
+export interface RecipeVersion extends RecipeVersionSummary {
+  recipeId: number;
+  data: RecipeData;
+}
+
+export const recipeVersionParamsSchema = z.object({
+  id: z.coerce.number({ error: 'The recipe id must be a number.' }).int().positive({ error: 'The recipe id must be a number.' }),
+  version: z.coerce.number({ error: 'The version must be a number.' }).int().positive({ error: 'The version must be a whole number from 1.' }),
+});
 
 export const sharingInputSchema = z.object({
   clubIds: z
@@ -451,6 +519,13 @@ export const recipeTargetsSchema = z.object({
   efficiency: z.number().gt(0).max(1),
   targetOg: z.number().gt(1).max(1.2),
   targetFg: z.number().min(0.98).max(1.2),
+  /** Added with bitterness and colour; absent in brew days started before them. */
+  targetIbu: z.number().nullable().optional(),
+  targetColourSrm: z.number().nullable().optional(),
+  souringTargetPh: z.number().nullable().optional(),
+  /** What the late-boil check needs to predict bitterness and colour. */
+  hops: z.array(z.object({ amountG: z.number(), minutes: z.number(), alphaAcidPercent: z.number() })).optional(),
+  grist: z.array(z.object({ amountKg: z.number(), colourLovibond: z.number().nullable() })).optional(),
   mashPhTarget: z.number(),
   mashSteps: z.array(z.object({ tempC: z.number(), minutes: z.number() })),
   fermentationTempMinC: z.number(),
@@ -462,11 +537,13 @@ export type RecipeTargets = z.infer<typeof recipeTargetsSchema>;
 // Our file format (docs/recipe-format.md)
 
 export const RECIPE_FILE_FORMAT = 'wortwise-recipe';
-export const RECIPE_FILE_VERSION = 1;
+/** Version 2 added bitterness, colour and souring targets and each fermentable's colour; version 1 files still read. */
+export const RECIPE_FILE_VERSION = 2;
+export const RECIPE_FILE_VERSIONS_READ = [1, 2] as const;
 
 export const recipeFileHeaderSchema = z.object({
   format: z.literal(RECIPE_FILE_FORMAT, { error: `This is not a Wortwise recipe file: "format" must be "${RECIPE_FILE_FORMAT}".` }),
-  version: z.literal(RECIPE_FILE_VERSION, { error: `This file is version ${RECIPE_FILE_VERSION}'s format only: "version" must be ${RECIPE_FILE_VERSION}.` }),
+  version: z.literal(RECIPE_FILE_VERSIONS_READ, { error: `Wortwise reads recipe files of versions ${RECIPE_FILE_VERSIONS_READ.join(' and ')}: "version" must be one of them.` }),
   recipe: z.record(z.string(), z.unknown(), { error: '"recipe" must be an object with the recipe in it.' }),
 });
 
@@ -542,3 +619,92 @@ export function targetAbv(targetOg: unknown, targetFg: unknown): { abvPercent: n
 
 /** How close the estimate must be to the target to call them in agreement: 2 gravity points (common practice, no source). */
 export const OG_AGREEMENT_SG = 0.002;
+
+// ---------------------------------------------------------------------------------------------
+// Bitterness and colour estimates (shared/brewmath: Tinseth, Morey)
+
+export type IbuEstimateResult = { ibu: number; assumptions: string[]; reason?: undefined } | { ibu: null; assumptions: string[]; reason: string };
+export type ColourEstimateResult = { srm: number; beyondFit: boolean; reason?: undefined } | { srm: null; beyondFit: false; reason: string };
+
+type PartialRecipe = {
+  fermentables?: readonly Partial<Record<keyof FermentableInput, unknown>>[];
+  hops?: readonly Partial<Record<keyof HopInput, unknown>>[];
+  efficiency?: unknown;
+  batchVolumeL?: unknown;
+  preBoilVolumeL?: unknown;
+  postBoilVolumeL?: unknown;
+  targetOg?: unknown;
+};
+
+/**
+ * The average gravity the hops boil in, as Tinseth asks: midway between the pre-boil gravity and
+ * the OG, the pre-boil gravity following from the OG by conserved extract over the boil's volumes.
+ */
+export function recipeBoilSg(og: number, preBoilVolumeL: unknown, postBoilVolumeL: unknown): number {
+  if (!isNum(preBoilVolumeL) || !isNum(postBoilVolumeL) || preBoilVolumeL <= 0 || postBoilVolumeL <= 0 || postBoilVolumeL > preBoilVolumeL) return og;
+  const preBoilSg = 1 + ((og - 1) * postBoilVolumeL) / preBoilVolumeL;
+  return (preBoilSg + og) / 2;
+}
+
+/**
+ * Bitterness from the hops by Tinseth, in the batch volume (as the OG estimate), at the recipe's
+ * boil gravity from the estimated OG (the target OG while there is no estimate). No hops: no
+ * estimate, never "0 IBU".
+ */
+export function estimateRecipeIbu(recipe: PartialRecipe): IbuEstimateResult {
+  const hops = recipe.hops ?? [];
+  if (hops.length === 0) return { ibu: null, assumptions: [], reason: 'No hops, so no bitterness estimate.' };
+  if (!isNum(recipe.batchVolumeL) || recipe.batchVolumeL <= 0) return { ibu: null, assumptions: [], reason: 'Enter the batch volume to see an estimate.' };
+  const og = estimateRecipeOg(recipe).og ?? (isNum(recipe.targetOg) && recipe.targetOg > 1 && recipe.targetOg <= 1.2 ? recipe.targetOg : null);
+  if (og === null) return { ibu: null, assumptions: [], reason: 'Enter the target OG or the fermentables to see an estimate.' };
+  const mapped = [];
+  for (const h of hops) {
+    if (!isNum(h.amountG) || !isNum(h.minutes) || !isNum(h.alphaAcidPercent)) {
+      return { ibu: null, assumptions: [], reason: 'Complete every hop (amount, minutes and alpha acid) to see an estimate.' };
+    }
+    mapped.push({ massG: h.amountG, boilMinutes: h.minutes, alphaAcidPercent: h.alphaAcidPercent });
+  }
+  try {
+    const result = ibuTinseth({ hops: mapped, boilSg: recipeBoilSg(og, recipe.preBoilVolumeL, recipe.postBoilVolumeL), volumeL: recipe.batchVolumeL });
+    return { ibu: result.ibu, assumptions: result.assumptions };
+  } catch (error) {
+    if (error instanceof BrewMathError) return { ibu: null, assumptions: [], reason: error.message };
+    throw error;
+  }
+}
+
+/** Colour from the fermentables by Morey, in the batch volume. Every fermentable needs its colour. */
+export function estimateRecipeColour(recipe: PartialRecipe): ColourEstimateResult {
+  const fermentables = recipe.fermentables ?? [];
+  if (fermentables.length === 0) return { srm: null, beyondFit: false, reason: 'Add fermentables to see a colour estimate.' };
+  if (!isNum(recipe.batchVolumeL) || recipe.batchVolumeL <= 0) return { srm: null, beyondFit: false, reason: 'Enter the batch volume to see an estimate.' };
+  const grist = [];
+  for (const f of fermentables) {
+    if (!isNum(f.amountKg) || !isNum(f.colourLovibond)) {
+      return { srm: null, beyondFit: false, reason: 'Give every fermentable its colour to see a colour estimate.' };
+    }
+    grist.push({ massKg: f.amountKg, colourLovibond: f.colourLovibond });
+  }
+  try {
+    const result = moreyColour(grist, recipe.batchVolumeL);
+    return { srm: result.srm, beyondFit: result.beyondFit };
+  } catch (error) {
+    if (error instanceof BrewMathError) return { srm: null, beyondFit: false, reason: error.message };
+    throw error;
+  }
+}
+
+/** BU:GU from a bitterness and an OG, or null while either is missing. */
+export function recipeBuGu(ibu: unknown, og: unknown): number | null {
+  if (!isNum(ibu) || !isNum(og)) return null;
+  try {
+    return buToGu(ibu, og);
+  } catch (error) {
+    if (error instanceof BrewMathError) return null;
+    throw error;
+  }
+}
+
+/** How close the estimate must be to call it in agreement: 3 IBU and 1 SRM (common practice, no source). */
+export const IBU_AGREEMENT = 3;
+export const COLOUR_AGREEMENT_SRM = 1;

@@ -1,6 +1,8 @@
 import { sql } from 'drizzle-orm';
-import { double, index, int, mysqlEnum, mysqlTable, primaryKey, text, timestamp, varchar, type AnyMySqlColumn } from 'drizzle-orm/mysql-core';
+import { double, index, int, uniqueIndex, mysqlEnum, mysqlTable, primaryKey, text, timestamp, varchar, type AnyMySqlColumn } from 'drizzle-orm/mysql-core';
 import { fermentableKinds } from '../../../shared/schemas/recipes';
+import type { RecipeData } from '../../../shared/schemas/recipes';
+import { jsonDoc } from './columns';
 import { clubs } from './clubs';
 import { users } from './users';
 
@@ -29,6 +31,11 @@ export const recipes = mysqlTable(
     efficiency: double('efficiency').notNull(),
     targetOg: double('target_og').notNull(),
     targetFg: double('target_fg').notNull(),
+    /** Bitterness and colour targets; null when the author sets none. */
+    targetIbu: double('target_ibu'),
+    targetColourSrm: double('target_colour_srm'),
+    /** Kettle-soured beers: the pH the wort is soured to before the boil; null for other beers. */
+    souringTargetPh: double('souring_target_ph'),
     mashPhTarget: double('mash_ph_target').notNull().default(5.2),
     fermentationTempMinC: double('fermentation_temp_min_c').notNull(),
     fermentationTempMaxC: double('fermentation_temp_max_c').notNull(),
@@ -62,6 +69,8 @@ export const recipeFermentables = mysqlTable(
     kind: mysqlEnum('kind', fermentableKinds).notNull(),
     amountKg: double('amount_kg').notNull(),
     potentialPointsLPerKg: double('potential_points_l_per_kg').notNull(),
+    /** Malt colour in °L for Morey's equation; null when unknown (then no colour estimate). */
+    colourLovibond: double('colour_lovibond'),
   },
   (t) => [index('recipe_fermentables_recipe_idx').on(t.recipeId, t.position)],
 );
@@ -109,6 +118,25 @@ export const recipeClubShares = mysqlTable(
     sharedAt: timestamp('shared_at', { mode: 'date' }).notNull().default(sql`CURRENT_TIMESTAMP`),
   },
   (t) => [primaryKey({ columns: [t.recipeId, t.clubId] }), index('recipe_club_shares_club_idx').on(t.clubId)],
+);
+
+/**
+ * Every saved version of a recipe, as the author saved it (docs/decisions/0011-bitterness-colour-and-recipe-history.md).
+ * Written in the same transaction as the save, so the latest row always equals the recipe.
+ */
+export const recipeVersions = mysqlTable(
+  'recipe_versions',
+  {
+    id: int('id').autoincrement().primaryKey(),
+    recipeId: int('recipe_id')
+      .notNull()
+      .references(() => recipes.id, { onDelete: 'cascade' }),
+    version: int('version').notNull(),
+    data: jsonDoc<RecipeData>('data').notNull(),
+    savedById: int('saved_by_id').references(() => users.id, { onDelete: 'set null' }),
+    savedAt: timestamp('saved_at', { mode: 'date', fsp: 3 }).notNull().default(sql`CURRENT_TIMESTAMP(3)`),
+  },
+  (t) => [uniqueIndex('recipe_versions_recipe_version_idx').on(t.recipeId, t.version)],
 );
 
 export type RecipeRow = typeof recipes.$inferSelect;

@@ -8,6 +8,7 @@ export const users = mysqlTable('users', {
   displayName: varchar('display_name', { length: 80 }).notNull(),
   unitSystem: mysqlEnum('unit_system', ['metric', 'us']).notNull().default('metric'),
   gravityUnit: mysqlEnum('gravity_unit', ['sg', 'plato']).notNull().default('sg'),
+  colourScale: mysqlEnum('colour_scale', ['srm', 'ebc']).notNull().default('srm'),
   siteRole: mysqlEnum('site_role', ['user', 'admin']).notNull().default('user'),
   /** Bumped to revoke every token issued before (password change or reset). */
   tokenVersion: int('token_version').notNull().default(0),

@@ -1,6 +1,6 @@
 import { Check, CircleUser, LogOut } from 'lucide-react';
 import { useEffect, useRef, useState } from 'react';
-import type { GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
+import type { ColourScalePreference, GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
 import { useLogout } from '../api/logout';
 import { useUpdatePreferences } from '../api/update-preferences';
 
@@ -8,6 +8,11 @@ const unitOptions: { value: UnitSystem; label: string }[] = [
   { value: 'metric', label: 'Metric (L, kg, °C)' },
   { value: 'us', label: 'US (gal, lb, °F)' },
 ];
+const colourOptions: { value: ColourScalePreference; label: string }[] = [
+  { value: 'srm', label: 'SRM (US)' },
+  { value: 'ebc', label: 'EBC (European)' },
+];
+
 const gravityOptions: { value: GravityUnit; label: string }[] = [
   { value: 'sg', label: 'Specific gravity (1.050)' },
   { value: 'plato', label: 'Degrees Plato (12.4 °P)' },
@@ -64,6 +69,13 @@ export function PreferencesMenu({ me, onSignedOut }: { me: Me; onSignedOut: () =
           <MenuGroup label="Gravity">
             {gravityOptions.map((o) => (
               <MenuChoice key={o.value} checked={me.gravityUnit === o.value} onSelect={() => update.mutate({ gravityUnit: o.value })}>
+                {o.label}
+              </MenuChoice>
+            ))}
+          </MenuGroup>
+          <MenuGroup label="Beer colour">
+            {colourOptions.map((o) => (
+              <MenuChoice key={o.value} checked={me.colourScale === o.value} onSelect={() => update.mutate({ colourScale: o.value })}>
                 {o.label}
               </MenuChoice>
             ))}

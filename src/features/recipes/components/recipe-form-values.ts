@@ -8,6 +8,7 @@ export interface FermentableValues {
   kind: RecipeFermentableKind;
   amountKg: Num;
   potentialPointsLPerKg: Num;
+  colourLovibond: Num;
 }
 export interface HopValues {
   name: string;
@@ -32,6 +33,9 @@ export interface RecipeFormValues {
   efficiency: Num;
   targetOg: Num;
   targetFg: Num;
+  targetIbu: Num;
+  targetColourSrm: Num;
+  souringTargetPh: Num;
   mashPhTarget: Num;
   fermentationTempMinC: Num;
   fermentationTempMaxC: Num;
@@ -41,7 +45,7 @@ export interface RecipeFormValues {
   mashSteps: MashStepValues[];
 }
 
-export const emptyFermentable = (): FermentableValues => ({ name: '', kind: 'grain', amountKg: '', potentialPointsLPerKg: 300 });
+export const emptyFermentable = (): FermentableValues => ({ name: '', kind: 'grain', amountKg: '', potentialPointsLPerKg: 300, colourLovibond: '' });
 export const emptyHop = (): HopValues => ({ name: '', amountG: '', minutes: '', alphaAcidPercent: '' });
 export const emptyMashStep = (): MashStepValues => ({ tempC: '', minutes: '' });
 
@@ -63,6 +67,9 @@ export function newRecipeValues(): RecipeFormValues {
     efficiency: 0.72,
     targetOg: '',
     targetFg: '',
+    targetIbu: '',
+    targetColourSrm: '',
+    souringTargetPh: '',
     mashPhTarget: DEFAULT_MASH_PH_TARGET,
     fermentationTempMinC: '',
     fermentationTempMaxC: '',
@@ -86,12 +93,30 @@ export function toFormValues(recipe: RecipeData): RecipeFormValues {
     efficiency: recipe.efficiency,
     targetOg: recipe.targetOg,
     targetFg: recipe.targetFg,
+    targetIbu: recipe.targetIbu ?? '',
+    targetColourSrm: recipe.targetColourSrm ?? '',
+    souringTargetPh: recipe.souringTargetPh ?? '',
     mashPhTarget: recipe.mashPhTarget,
     fermentationTempMinC: recipe.fermentationTempMinC,
     fermentationTempMaxC: recipe.fermentationTempMaxC,
     yeast: { ...recipe.yeast },
-    fermentables: recipe.fermentables.map((f) => ({ ...f })),
+    fermentables: recipe.fermentables.map((f) => ({ ...f, colourLovibond: f.colourLovibond ?? '' })),
     hops: recipe.hops.map((h) => ({ ...h })),
     mashSteps: recipe.mashSteps.map((m) => ({ ...m })),
+  };
+}
+
+/**
+ * The optional numbers (bitterness, colour and souring targets, malt colours) are '' in the form
+ * while empty and null in the API: "not set".
+ */
+export function toRecipeInput(values: RecipeFormValues): unknown {
+  const blank = (v: Num) => (v === '' ? null : v);
+  return {
+    ...values,
+    targetIbu: blank(values.targetIbu),
+    targetColourSrm: blank(values.targetColourSrm),
+    souringTargetPh: blank(values.souringTargetPh),
+    fermentables: values.fermentables.map((f) => ({ ...f, colourLovibond: blank(f.colourLovibond) })),
   };
 }

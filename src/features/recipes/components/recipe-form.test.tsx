@@ -1,14 +1,14 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { cleanup, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Me } from '@shared/schemas/auth';
 import { meQueryOptions } from '@/lib/auth';
 import { RecipeForm } from './recipe-form';
 
-function renderForm(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'> = { unitSystem: 'metric', gravityUnit: 'sg' }) {
+function renderForm(prefs: Partial<Pick<Me, 'unitSystem' | 'gravityUnit' | 'colourScale'>> = {}) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], ...prefs };
+  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], unitSystem: 'metric', gravityUnit: 'sg', colourScale: 'srm', ...prefs };
   queryClient.setQueryData(meQueryOptions().queryKey, me);
   const onSaved = vi.fn();
   render(
@@ -32,7 +32,10 @@ async function fill(label: string | RegExp, text: string, container: HTMLElement
   await userEvent.type(input, text);
 }
 
-afterEach(() => vi.unstubAllGlobals());
+afterEach(() => {
+  vi.unstubAllGlobals();
+  localStorage.clear();
+});
 
 // Typing into a long form in jsdom is slow; a test's budget is about the form, not the machine.
 describe('RecipeForm validation', { timeout: 30_000 }, () => {
@@ -97,6 +100,51 @@ describe('RecipeForm validation', { timeout: 30_000 }, () => {
     // (1.050 − 1.010) × 131.25 = 5.25 %, shown to one decimal.
     expect(within(panel).getByText('5.3 %')).toBeInTheDocument();
     expect(screen.getByText(/The fermentables give 5 points less than the target/)).toBeInTheDocument();
+  });
+
+  it('shows estimated bitterness (Tinseth) and colour (Morey) live, colour in the brewer’s EBC', async () => {
+    vi.stubGlobal('fetch', vi.fn());
+    renderForm({ colourScale: 'ebc' });
+    await fill('Batch volume into the fermenter', '23');
+    await fill('Brewhouse efficiency', '75');
+    const fermentable = screen.getByRole('group', { name: 'Fermentable 1' });
+    await fill('Amount', '4.6', fermentable);
+    const panel = () => screen.getByText('Estimated bitterness').closest('dl')!;
+    // No hops: no bitterness estimate at all, never "0 IBU".
+    expect(within(panel()).getAllByText('—').length).toBeGreaterThan(0);
+    expect(screen.getByText(/No hops, so no bitterness estimate/)).toBeInTheDocument();
+    // Pale malt at 6 EBC = 3.046 °L (EBC = 1.97 × °L). Morey: 4.6 kg = 10.1413 lb × 3.046 = 30.890;
+    // 23 L = 6.07596 gal; MCU 5.0840; 5.0840^0.6859 = 3.0505; × 1.4922 = 4.552 SRM × 1.97 = 8.97 → "9 EBC".
+    await fill('Colour', '6', fermentable);
+    expect(within(panel()).getByText('9 EBC')).toBeInTheDocument();
+    // 25 g of 8 % hops for 60 minutes. OG estimate 1.045; no boil volumes yet, so boil SG 1.045.
+    // Tinseth: 1.65 × 0.000125^0.045 = 1.65 × 0.667361 = 1.101146; × (1 − e^−2.4)/4.15 = × 0.219104 → 0.241266;
+    // 0.08 × 25 000 / 23 = 86.957 mg/L × 0.241266 = 20.98 → "21 IBU".
+    await userEvent.click(screen.getByRole('button', { name: 'Add a hop' }));
+    const hop = screen.getByRole('group', { name: 'Hop 1' });
+    await fill('Amount', '25', hop);
+    await fill('Minutes', '60', hop);
+    await fill('Alpha acid', '8', hop);
+    expect(within(panel()).getByText('21 IBU')).toBeInTheDocument();
+    await fill('Target OG', '1.045');
+    await fill('Target bitterness', '40');
+    // BU:GU: 40 IBU over the target OG's 45 points = 0.89
+    expect(within(panel()).getByText('0.89')).toBeInTheDocument();
+    expect(screen.getByText(/The hops give 21 IBU, below the 40 IBU target/)).toBeInTheDocument();
+  });
+
+  it('keeps a draft of a new recipe through a reload, until it is discarded', async () => {
+    vi.stubGlobal('fetch', vi.fn());
+    renderForm();
+    await fill('Recipe name', 'Half-typed porter');
+    await waitFor(() => expect(localStorage.getItem('wortwise:recipe-draft:new')).toContain('Half-typed porter'));
+    cleanup();
+    renderForm();
+    expect(screen.getByLabelText('Recipe name')).toHaveValue('Half-typed porter');
+    expect(screen.getByText('Your unsaved changes are back')).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Discard them' }));
+    expect(screen.getByLabelText('Recipe name')).toHaveValue('');
+    expect(localStorage.getItem('wortwise:recipe-draft:new')).toBeNull();
   });
 
   it('takes a US brewer’s gallons, pounds and °F and validates them the same way', async () => {

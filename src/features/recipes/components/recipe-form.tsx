@@ -6,7 +6,12 @@ import { KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
 import {
   boilOffMismatch,
   defaultPotentialPointsLPerKg,
+  COLOUR_AGREEMENT_SRM,
+  estimateRecipeColour,
+  estimateRecipeIbu,
   estimateRecipeOg,
+  IBU_AGREEMENT,
+  recipeBuGu,
   fermentableKindLabels,
   fermentableKinds,
   impliedBoilOffLPerHour,
@@ -31,7 +36,9 @@ import { recipeQueryOptions } from '../api/get-recipe';
 import { useUpdateRecipe } from '../api/update-recipe';
 import { NumberField } from '@/components/ui/number-field';
 import { TextAreaField } from '@/components/ui/text-area-field';
-import { emptyFermentable, emptyHop, emptyMashStep, newRecipeValues, toFormValues, type RecipeFormValues } from './recipe-form-values';
+import { emptyFermentable, emptyHop, emptyMashStep, newRecipeValues, toFormValues, toRecipeInput, type RecipeFormValues } from './recipe-form-values';
+import { clearRecipeDraft, readRecipeDraft, RecipeDraftKeeper } from './recipe-draft';
+import { colourFieldProps, formatColour, useColourScale } from '@/lib/colour';
 
 /** 1 point per pound per US gallon in points·L/kg: from the exact gallon and pound. */
 const PPG = LITRES_PER_US_GALLON / KG_PER_LB;
@@ -43,7 +50,8 @@ interface RecipeFormProps {
   onSaved: (recipe: Recipe) => void;
 }
 
-const validate = zodValidate(recipeInputSchema) as (values: RecipeFormValues) => FormikErrors<RecipeFormValues>;
+const validateInput = zodValidate(recipeInputSchema);
+const validate = (values: RecipeFormValues) => validateInput(toRecipeInput(values)) as FormikErrors<RecipeFormValues>;
 
 /**
  * The recipe form: every number in the brewer's units (stored SI), errors inline beside their
@@ -55,21 +63,24 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
   const update = useUpdateRecipe(recipe?.id ?? 0);
   const queryClient = useQueryClient();
   const [version, setVersion] = useState(recipe?.version ?? 0);
+  const [draft, setDraft] = useState(() => readRecipeDraft(recipe?.id, recipe?.version ?? 0));
 
   async function save(values: RecipeFormValues, asNew = false) {
-    const data = recipeInputSchema.parse(values) as RecipeData;
+    const data = recipeInputSchema.parse(toRecipeInput(values)) as RecipeData;
     if (recipe && !asNew) return update.mutateAsync({ ...data, version });
     return create.mutateAsync(data);
   }
 
   return (
     <Formik<RecipeFormValues>
-      initialValues={recipe ? toFormValues(recipe) : newRecipeValues()}
+      initialValues={draft?.values ?? (recipe ? toFormValues(recipe) : newRecipeValues())}
       validate={validate}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
         try {
-          onSaved(await save(values));
+          const saved = await save(values);
+          clearRecipeDraft(recipe?.id);
+          onSaved(saved);
         } catch (error) {
           // Field messages under the inputs, and one SaveFailure (offline, conflict or error) in the status.
           applyApiError(error, helpers);
@@ -85,13 +96,33 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
         async function saveAsNew() {
           setStatus(undefined);
           try {
-            onSaved(await save(values, true));
+            const saved = await save(values, true);
+            clearRecipeDraft(recipe?.id);
+            onSaved(saved);
           } catch (error) {
             setStatus(toSaveFailure(error));
           }
         }
         return (
           <Form noValidate className="space-y-4 pb-24" aria-label={recipe ? `Edit ${recipe.name}` : 'New recipe'}>
+            <RecipeDraftKeeper recipeId={recipe?.id} version={version} />
+            {draft && (
+              <Notice tone="info" title="Your unsaved changes are back">
+                <p>Kept in this browser since {new Date(draft.savedAt).toLocaleString()}. Save to keep them for good.</p>
+                <Button
+                  variant="secondary"
+                  className="mt-2"
+                  icon={<Trash2 aria-hidden className="size-5" />}
+                  onClick={() => {
+                    clearRecipeDraft(recipe?.id);
+                    setDraft(null);
+                    resetForm({ values: recipe ? toFormValues(recipe) : newRecipeValues(), status: undefined });
+                  }}
+                >
+                  Discard them
+                </Button>
+              </Notice>
+            )}
             <BasicsSection />
             <BoilSection />
             <GravitySection />
@@ -237,13 +268,27 @@ function formatGap(units: Units, estimate: number, target: number) {
   return points === 1 ? '1 point' : `${points} points`;
 }
 
+/** What the targets panel reads: the form's values or a saved recipe. */
+interface PanelValues {
+  fermentables: readonly { amountKg?: unknown; kind?: unknown; potentialPointsLPerKg?: unknown; colourLovibond?: unknown }[];
+  hops?: readonly { amountG?: unknown; minutes?: unknown; alphaAcidPercent?: unknown }[];
+  efficiency: unknown;
+  batchVolumeL: unknown;
+  preBoilVolumeL?: unknown;
+  postBoilVolumeL?: unknown;
+  targetOg: unknown;
+  targetFg: unknown;
+  targetIbu?: unknown;
+  targetColourSrm?: unknown;
+}
+
 /** Estimated OG from the fermentables beside the target, and what the target pair means. */
 export function TargetsPanel({
   values,
   units,
   estimateOnly = false,
 }: {
-  values: Pick<RecipeFormValues, 'fermentables' | 'efficiency' | 'batchVolumeL' | 'targetOg' | 'targetFg'>;
+  values: PanelValues;
   units: Units;
   /** Where the targets are already shown large (the read view): only what the fermentables give. */
   estimateOnly?: boolean;
@@ -277,7 +322,45 @@ export function TargetsPanel({
       </dl>
       {estimate.og === null && <p className="text-sm text-ink-faint">{estimate.reason}</p>}
       {agreement}
+      <BitternessColourFigures values={values} estimateOnly={estimateOnly} />
     </div>
+  );
+}
+
+/** Estimated bitterness (Tinseth) and colour (Morey) beside their targets, and BU:GU. */
+function BitternessColourFigures({ values, estimateOnly }: { values: PanelValues; estimateOnly: boolean }) {
+  const scale = useColourScale();
+  const ibu = estimateRecipeIbu(values);
+  const colour = estimateRecipeColour(values);
+  const targetIbu = typeof values.targetIbu === 'number' ? values.targetIbu : null;
+  const targetSrm = typeof values.targetColourSrm === 'number' ? values.targetColourSrm : null;
+  const targetOg = typeof values.targetOg === 'number' ? values.targetOg : null;
+  const buGu = recipeBuGu(targetIbu ?? ibu.ibu, targetOg);
+  const notes: ReactNode[] = [];
+  if (ibu.ibu !== null && targetIbu !== null && Math.abs(ibu.ibu - targetIbu) > IBU_AGREEMENT) {
+    notes.push(`The hops give ${Math.round(ibu.ibu)} IBU, ${ibu.ibu < targetIbu ? 'below' : 'above'} the ${Math.round(targetIbu)} IBU target.`);
+  }
+  if (colour.srm !== null && targetSrm !== null && Math.abs(colour.srm - targetSrm) > COLOUR_AGREEMENT_SRM) {
+    notes.push(`The grist gives ${formatColour(colour.srm, scale)}, ${colour.srm < targetSrm ? 'paler' : 'darker'} than the ${formatColour(targetSrm, scale)} target.`);
+  }
+  return (
+    <>
+      <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        <Figure label="Estimated bitterness" value={ibu.ibu === null ? '—' : `${Math.round(ibu.ibu)}\u00a0IBU`} />
+        {!estimateOnly && <Figure label="Target bitterness" value={targetIbu === null ? '—' : `${Math.round(targetIbu)}\u00a0IBU`} />}
+        <Figure label="BU:GU" value={buGu === null ? '—' : buGu.toFixed(2)} />
+        <Figure label="Estimated colour" value={formatColour(colour.srm, scale)} />
+        {!estimateOnly && <Figure label="Target colour" value={formatColour(targetSrm, scale)} />}
+      </dl>
+      <p className="text-sm text-ink-faint">
+        Bitterness by Tinseth&apos;s formula, colour by Morey&apos;s equation; BU:GU is bitterness over the OG&apos;s gravity points (about 0.5 is balanced, common practice).
+        {ibu.reason ? ` ${ibu.reason}` : ''}
+        {colour.reason ? ` ${colour.reason}` : ''}
+        {ibu.assumptions.length > 0 ? ` ${ibu.assumptions.join(' ')}` : ''}
+        {colour.beyondFit ? ' Beyond about 50 SRM Morey\'s equation is a rough figure only.' : ''}
+      </p>
+      {notes.length > 0 && <Notice tone="caution">{notes.map((n, i) => <p key={i}>{n}</p>)}</Notice>}
+    </>
   );
 }
 
@@ -293,11 +376,14 @@ function Figure({ label, value }: { label: string; value: string }) {
 function GravitySection() {
   const { values } = useFormikContext<RecipeFormValues>();
   const units = useUnits();
+  const scale = useColourScale();
   return (
-    <Section title="Gravity targets" description="What the brew day is judged against. ABV by (OG − FG) × 131.25.">
+    <Section title="Targets" description="What the brew day is judged against. ABV by (OG − FG) × 131.25. Bitterness and colour are optional.">
       <div className="grid gap-4 sm:grid-cols-2">
         <QuantityField name="targetOg" kind="gravity" label="Target OG" />
         <QuantityField name="targetFg" kind="gravity" label="Target FG" />
+        <NumberField name="targetIbu" label="Target bitterness" unit="IBU" decimals={0} />
+        <NumberField name="targetColourSrm" label="Target colour" {...colourFieldProps(scale)} />
       </div>
       <div className="mt-4">
         <TargetsPanel values={values} units={units} />
@@ -361,14 +447,16 @@ function KindSelect({ index }: { index: number }) {
 function FermentablesSection() {
   const { values } = useFormikContext<RecipeFormValues>();
   const units = useUnits();
+  const scale = useColourScale();
   const us = units.unitSystem === 'us';
   return (
     <Section
       title="Fermentables"
       description={
-        us
+        (us
           ? 'Potential in gravity points per pound per gallon (ppg): pale malt about 36, dry malt extract 44, table sugar 46. Efficiency applies to grain only.'
-          : 'Potential in gravity points × litres per kilogram: pale malt about 300, dry malt extract 367, table sugar 384. Efficiency applies to grain only.'
+          : 'Potential in gravity points × litres per kilogram: pale malt about 300, dry malt extract 367, table sugar 384. Efficiency applies to grain only.') +
+        (scale === 'ebc' ? ' Colour in EBC from the maltster (pale malt about 6, crystal 60 to 300); leave it empty if unknown.' : ' Colour in °L from the maltster (pale malt about 3, crystal 30 to 150); leave it empty if unknown.')
       }
     >
       <FieldArray name="fermentables">
@@ -377,10 +465,11 @@ function FermentablesSection() {
             {values.fermentables.map((_f, i) => (
               <fieldset key={i} className="rounded-lg border border-cellar-100 p-3">
                 <legend className="px-1 text-sm font-semibold text-ink-soft">Fermentable {i + 1}</legend>
-                <div className="grid gap-3 sm:grid-cols-[2fr_1.4fr_1fr_1fr_auto] sm:items-start">
+                <div className="grid gap-3 sm:grid-cols-[2fr_1.4fr_1fr_1fr_1fr_auto] sm:items-start">
                   <TextField name={`fermentables.${i}.name`} label="Name" autoComplete="off" />
                   <KindSelect index={i} />
                   <QuantityField name={`fermentables.${i}.amountKg`} kind="mass" label="Amount" />
+                  <NumberField name={`fermentables.${i}.colourLovibond`} label="Colour" {...colourFieldProps(scale, true)} />
                   <NumberField
                     name={`fermentables.${i}.potentialPointsLPerKg`}
                     label="Potential"
@@ -450,6 +539,14 @@ function MashAndFermentationSection() {
     <>
       <Section title="Mash" description="Read mash pH on a cooled sample; about 5.2 to 5.6 is the usual band.">
         <NumberField name="mashPhTarget" label="Target mash pH" unit="pH" className="max-w-xs" decimals={2} />
+        <NumberField
+          name="souringTargetPh"
+          label="Souring target pH (kettle sours only)"
+          unit="pH"
+          className="mt-4 max-w-xs"
+          decimals={2}
+          hint="Leave empty unless the wort is soured before the boil; about 3.2 to 3.6 is usual."
+        />
         <FieldArray name="mashSteps">
           {(helpers) => (
             <div className="mt-4 space-y-3">

@@ -1,8 +1,10 @@
 import { Flame, Thermometer, Wheat } from 'lucide-react';
 import type { ReactNode } from 'react';
+import { SRM_TO_EBC } from '@shared/brewmath';
 import { fermentableKindLabels, type Recipe } from '@shared/schemas/recipes';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
+import { formatColour, useColourScale } from '@/lib/colour';
 import { useUnits } from '@/lib/units';
 import { TargetsPanel } from './recipe-form';
 
@@ -13,6 +15,7 @@ import { TargetsPanel } from './recipe-form';
  */
 export function RecipeView({ recipe }: { recipe: Recipe }) {
   const units = useUnits();
+  const scale = useColourScale();
   const hopsInOrder = [...recipe.hops].sort((a, b) => b.minutes - a.minutes);
   const totalKg = recipe.fermentables.reduce((n, f) => n + f.amountKg, 0);
   return (
@@ -22,6 +25,9 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
         <BigFigure label="Target FG" value={units.format('gravity', recipe.targetFg)} />
         <BigFigure label="ABV (simple)" value={`${recipe.abvPercent.toFixed(1)}\u00a0%`} />
         <BigFigure label="Into the fermenter" value={units.format('volume', recipe.batchVolumeL)} />
+        {recipe.targetIbu !== null && <BigFigure label="Target bitterness" value={`${Math.round(recipe.targetIbu)}\u00a0IBU`} />}
+        {recipe.targetColourSrm !== null && <BigFigure label="Target colour" value={formatColour(recipe.targetColourSrm, scale)} />}
+        {recipe.souringTargetPh !== null && <BigFigure label="Sour to pH" value={recipe.souringTargetPh.toFixed(2)} />}
       </section>
 
       <Card>
@@ -39,6 +45,9 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
               <li key={i} className="flex items-baseline justify-between gap-3 py-2">
                 <span className="min-w-0">
                   <span className="font-semibold">{f.name}</span> <span className="text-sm text-ink-faint">{fermentableKindLabels[f.kind]}</span>
+                  {f.colourLovibond !== null && (
+                    <span className="ml-2 text-sm text-ink-faint">{scale === 'ebc' ? `${Math.round(f.colourLovibond * SRM_TO_EBC)}\u00a0EBC` : `${f.colourLovibond}\u00a0°L`}</span>
+                  )}
                 </span>
                 <span className="shrink-0 text-right tabular-nums">
                   <span className="font-semibold">{units.format('mass', f.amountKg)}</span>
