@@ -55,11 +55,10 @@ export function createApp(ctx: AppContext) {
     // The service worker and the manifest are checked for a new version on every visit: never
     // cached for long, or a fixed release would reach installed apps only an hour (or a year) later.
     app.get(['/sw.js', '/registerSW.js', '/manifest.webmanifest'], (req, res, next) => {
-      const file = path.join(clientDist, req.path);
-      if (!existsSync(file)) return next();
+      if (!existsSync(path.join(clientDist, req.path))) return next();
       if (req.path.endsWith('.webmanifest')) res.type('application/manifest+json');
       else res.type('text/javascript');
-      res.set('Cache-Control', 'no-cache').sendFile(file);
+      res.set('Cache-Control', 'no-cache').sendFile(req.path.slice(1), { root: clientDist });
     });
     app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
     app.use('/assets', express.static(path.join(clientDist, 'assets'), { immutable: true, maxAge: '1y' }));
