@@ -30,6 +30,8 @@ export async function getMe(): Promise<Me | null> {
         owns(copy);
         return copy;
       }
+      // Nobody has signed in on this device yet: the public pages (the late-boil check) still open.
+      return null;
     }
     throw error;
   }

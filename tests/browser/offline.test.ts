@@ -171,6 +171,7 @@ describe('the brew day without a connection', () => {
     await page.getByLabel('Password').fill(brewer.password);
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();
     await page.waitForURL(new RegExp(`/brews/${brewId}`));
+    await page.getByRole('heading', { name: 'Harvest Pale, session test' }).waitFor();
     await expect.poll(() => page.getByTestId('queued-item').count(), { timeout: 15_000 }).toBe(0);
     expectStoredOnce(await storedBrew(page, brewId), logged, sentAfter);
     expect(errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to load resource/.test(e))).toEqual([]);

@@ -19,7 +19,8 @@ export function useOfflineSync(me: { id: number } | null | undefined) {
   }, [me]);
   // After each accepted item the pages show the server's version of the log.
   const onAccepted = useCallback(() => void queryClient.invalidateQueries(), [queryClient]);
-  useCatchUp(me?.id ?? null, onAccepted);
+  // Keyed on the object, not the id: signing in again as the same brewer must send what waited.
+  useCatchUp(me ?? null, onAccepted);
 }
 
 /** How many entries of this brewer have not reached the server (0 where IndexedDB is missing). */
