@@ -1,3 +1,4 @@
+// @vitest-environment node
 /**
  * The device queue against an in-memory IndexedDB (fake-indexeddb) and a stand-in fetch that
  * plays the server's part: order, idempotency keys, refusals kept with their reason, a lost
@@ -185,5 +186,20 @@ describe('sendOrQueue, the way the brew day writes', () => {
     const outcome = await sendOrQueue(reading(1), { fetchImpl: server.fetchImpl, isOnline: () => true });
     expect(outcome.status).toBe('queued');
     expect(await allItems()).toHaveLength(1);
+  });
+});
+
+describe('a photo in the queue', () => {
+  it('is sent as the form field the server reads, with its idempotency key', async () => {
+    const photo = new Blob([new Uint8Array([0x89, 0x50, 0x4e, 0x47])], { type: 'image/png' });
+    const item = await addToQueue({ userId: 7, brewId: 3, kind: 'photo', url: '/api/brews/3/readings/9/photos', body: { fileName: 'probe.png' }, photo, label: 'Photo', takenAt: '2026-12-05T03:00:00.000Z' });
+    const server = fakeServer(() => json(201, {}));
+    await flushQueue(7, { fetchImpl: server.fetchImpl });
+    expect(server.calls).toHaveLength(1);
+    expect(server.calls[0].key).toBe(item.id);
+    const form = server.calls[0].body as FormData;
+    expect(form).toBeInstanceOf(FormData);
+    expect((form.get('photo') as File).size).toBe(4);
+    expect(await allItems()).toEqual([]);
   });
 });
