@@ -73,8 +73,12 @@ export function QueueCount() {
   const refused = items.length - waiting;
   if (items.length === 0) return null;
   return (
-    <span role="status" data-testid="queue-count" className="rounded-full bg-malt-300 px-2 py-0.5 text-sm font-semibold text-ink">
-      {waiting > 0 ? `${waiting} waiting to send` : ''}
+    <span role="status" data-testid="queue-count" className="whitespace-nowrap rounded-full bg-malt-300 px-2 py-0.5 text-sm font-semibold text-ink">
+      {waiting > 0 && (
+        <>
+          {waiting} waiting<span className="sr-only"> to send</span>
+        </>
+      )}
       {waiting > 0 && refused > 0 ? ', ' : ''}
       {refused > 0 ? `${refused} refused` : ''}
     </span>

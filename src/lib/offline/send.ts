@@ -87,6 +87,12 @@ async function exclusively<T>(work: () => Promise<T>): Promise<T> {
   return run;
 }
 
+let acceptedHandler: FlushOptions['onAccepted'] | null = null;
+/** The app's way to show the server's version once an item is accepted (set once, app-wide). */
+export function setAcceptedHandler(handler: FlushOptions['onAccepted'] | null) {
+  acceptedHandler = handler;
+}
+
 export interface FlushOptions {
   fetchImpl?: typeof fetch;
   /** Called after each accepted item, e.g. to refresh the page's data. */
@@ -112,7 +118,7 @@ export async function flushQueue(userId: number, options: FlushOptions = {}): Pr
         outcomes.set(item.id, outcome);
         if (outcome.kind === 'accepted') {
           await removeItem(item.id);
-          options.onAccepted?.(item, outcome.data);
+          (options.onAccepted ?? acceptedHandler)?.(item, outcome.data);
           setSendState({ problem: null, needsSignIn: false });
         } else if (outcome.kind === 'refused') {
           await markRefused(item, { status: outcome.status, message: outcome.body.message, fields: outcome.body.fields });

@@ -3,7 +3,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect } from 'react';
 import { clearCopiesOf, saveMeCopy, setCopyOwner } from './device-copy';
 import { clearQueueOf, itemsOf } from './queue';
-import { queueOwner, setQueueOwner, signedInAgain } from './send';
+import { queueOwner, setAcceptedHandler, setQueueOwner, signedInAgain } from './send';
 import { hasIndexedDb } from './storage';
 import { useCatchUp } from './use-offline-queue';
 
@@ -19,6 +19,10 @@ export function useOfflineSync(me: { id: number } | null | undefined) {
   }, [me]);
   // After each accepted item the pages show the server's version of the log.
   const onAccepted = useCallback(() => void queryClient.invalidateQueries(), [queryClient]);
+  useEffect(() => {
+    setAcceptedHandler(onAccepted);
+    return () => setAcceptedHandler(null);
+  }, [onAccepted]);
   // Keyed on the object, not the id: signing in again as the same brewer must send what waited.
   useCatchUp(me ?? null, onAccepted);
 }
