@@ -179,6 +179,39 @@ describe('the brew day without a connection', () => {
   });
 });
 
+describe('two tabs on one brew day', () => {
+  it('send each waiting entry once when the connection returns to both at the same moment', async () => {
+    const { page, context } = await newPage(b.browser);
+    await signInViaApi(context, brewer.email, brewer.password);
+    const brewId = await startBrew(context, 'Harvest Pale, two tabs');
+    await page.goto(`/brews/${brewId}`);
+    await page.getByRole('heading', { name: 'Harvest Pale, two tabs' }).waitFor();
+    await waitForServiceWorker(page);
+    const other = await context.newPage();
+    await other.goto(`/brews/${brewId}`);
+    await other.getByRole('heading', { name: 'Harvest Pale, two tabs' }).waitFor();
+
+    await context.setOffline(true);
+    const mashTemp = page.getByRole('form', { name: 'New reading' }).filter({ has: page.getByLabel('Mash temperature, as read') });
+    for (const value of ['66.1', '66.4', '66.9']) {
+      await mashTemp.getByLabel('Mash temperature, as read').fill(value);
+      await mashTemp.getByRole('button', { name: 'Save reading' }).click();
+      await mashTemp.getByText('kept on this device: waiting to send.').waitFor();
+    }
+    // The other tab hears of the queue through the BroadcastChannel.
+    await expect.poll(() => other.getByTestId('queued-item').count()).toBe(3);
+
+    // Both tabs hear "online" and both start catching up; the Web Lock lets one send.
+    await context.setOffline(false);
+    await expect.poll(() => page.getByTestId('queued-item').count(), { timeout: 15_000 }).toBe(0);
+    await expect.poll(() => other.getByTestId('queued-item').count(), { timeout: 15_000 }).toBe(0);
+    await page.waitForTimeout(500);
+    const stored = await storedBrew(page, brewId);
+    expect(stored.readings).toHaveLength(3);
+    await context.close();
+  });
+});
+
 describe('the public late-boil check without a connection', () => {
   it('answers the worked example offline after a reload', async () => {
     const { page, context } = await newPage(b.browser);
