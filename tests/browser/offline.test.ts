@@ -88,6 +88,8 @@ async function logOffline(page: Page): Promise<{ readings: Logged[]; decision: L
   await expect.poll(() => queued.count()).toBe(4);
   await expect.poll(() => page.getByTestId('queue-count').textContent()).toContain('4 waiting');
   await expect.poll(() => page.getByTestId('offline-status').textContent()).toContain('Offline');
+  // The count in the header and the waiting list fit a 375 px phone: no sideways scroll.
+  expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
   return { readings, decision };
 }
 

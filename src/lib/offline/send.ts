@@ -5,7 +5,7 @@
 import type { ApiErrorBody } from '@shared/schemas/common';
 import { ApiError, NetworkError } from '../api-client';
 import { addToQueue, getItem, itemsOf, markRefused, queueChanged, removeItem, type NewQueuedItem, type QueuedItem } from './queue';
-import { StorageFullError } from './storage';
+import { hasIndexedDb, StorageFullError } from './storage';
 
 export type SendOutcome =
   | { kind: 'accepted'; data: unknown }
@@ -162,7 +162,8 @@ export async function sendOrQueue<T>(input: Omit<NewQueuedItem, 'userId'>, optio
   const userId = owner;
   const online = options.isOnline ?? (() => typeof navigator === 'undefined' || navigator.onLine !== false);
   let item: QueuedItem;
-  if (userId === null) return { status: 'sent', data: await sendDirect<T>({ ...input, userId: -1 }, options.fetchImpl) };
+  // Nobody known to be signed in, or a browser without IndexedDB: one plain attempt, as before.
+  if (userId === null || !hasIndexedDb()) return { status: 'sent', data: await sendDirect<T>({ ...input, userId: userId ?? -1 }, options.fetchImpl) };
   try {
     item = await addToQueue({ ...input, userId });
     if (state.storageFull) setSendState({ storageFull: false });
