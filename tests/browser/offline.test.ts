@@ -181,6 +181,45 @@ describe('the brew day without a connection', () => {
   });
 });
 
+describe('the fermentation log without a connection', () => {
+  it('opens offline after a reload, keeps a hydrometer reading on the device with the time typed, and stores it once when back online', async () => {
+    const { page, context } = await newPage(b.browser);
+    await signInViaApi(context, brewer.email, brewer.password);
+    const brewId = await startBrew(context, 'Harvest Pale, offline fermentation');
+    const pitchedAt = new Date(Math.floor((Date.now() - 13 * 86_400_000) / 60_000) * 60_000);
+    const pitched = await context.request.post(`/api/brews/${brewId}/readings`, { data: { kind: 'pitch_temp', tempC: 19, takenAt: pitchedAt.toISOString(), pitched: true } });
+    expect(pitched.status()).toBe(201);
+    await page.goto(`/brews/${brewId}/fermentation`);
+    await page.getByLabel('Hydrometer reading').waitFor();
+    await waitForServiceWorker(page);
+
+    await context.setOffline(true);
+    await page.reload();
+    await page.getByLabel('Hydrometer reading').waitFor();
+    // Day 12 after pitching, typed in the brewer's local time.
+    const takenAt = new Date(pitchedAt.getTime() + 12 * 86_400_000);
+    const local = await page.evaluate((ms) => {
+      const d = new Date(ms);
+      const pad = (n: number) => String(n).padStart(2, '0');
+      return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
+    }, takenAt.getTime());
+    await page.getByLabel('Hydrometer reading').fill('1.012');
+    await page.getByLabel('Sample temperature').fill('20');
+    await page.getByLabel('Taken at').fill(local);
+    await page.getByRole('button', { name: 'Save reading' }).click();
+    await page.getByText(/Kept on this device: waiting to send/).waitFor();
+    await expect.poll(() => page.getByTestId('queued-item').count()).toBe(1);
+
+    await context.setOffline(false);
+    await expect.poll(() => page.getByTestId('queued-item').count(), { timeout: 15_000 }).toBe(0);
+    const res = await context.request.get(`/api/brews/${brewId}/fermentation`);
+    const log = (await res.json()) as { readings: { takenAt: string }[] };
+    expect(log.readings).toHaveLength(1);
+    expect(Date.parse(log.readings[0].takenAt)).toBe(takenAt.getTime());
+    await context.close();
+  });
+});
+
 describe('two tabs on one brew day', () => {
   it('send each waiting entry once when the connection returns to both at the same moment', async () => {
     const { page, context } = await newPage(b.browser);
