@@ -62,6 +62,14 @@ export function createApp(ctx: AppContext) {
   if (existsSync(path.join(clientDist, 'index.html'))) {
     // Source maps are built for us, not published.
     app.use((req, res, next) => (req.path.endsWith('.map') ? res.status(404).end() : next()));
+    // The service worker and the manifest are checked for a new version on every visit: never
+    // cached for long, or a fixed release would reach installed apps only an hour (or a year) later.
+    app.get(['/sw.js', '/registerSW.js', '/manifest.webmanifest'], (req, res, next) => {
+      if (!existsSync(path.join(clientDist, req.path))) return next();
+      if (req.path.endsWith('.webmanifest')) res.type('application/manifest+json');
+      else res.type('text/javascript');
+      res.set('Cache-Control', 'no-cache').sendFile(req.path.slice(1), { root: clientDist });
+    });
     // Hashed file names never change content: cached for a year. Answered before the general
     // handler below, whose hour would otherwise win; a missing asset is a 404, not the app's page.
     const precompressed = { enableBrotli: true, orderPreference: ['br', 'gzip'], index: false };

@@ -22,6 +22,9 @@ import { addPhoto, deletePhoto, receivePhoto, sendPhoto } from './photos';
 import { addReading, deleteReading, recomputeReading } from './readings';
 import { addNote, deleteBrew, deleteNote, getBrew, listBrews, setBrewSharing, setStage, startBrew, updateBrew } from './service';
 
+/** An entry made offline keeps the time it was made on the device; otherwise the server's clock. */
+const at = (iso: string | undefined) => (iso ? new Date(iso) : undefined);
+
 /** `/api/brews`: brew days with their stages, readings, photos, late-boil decisions and notes. */
 export function brewsRouter(ctx: AppContext) {
   const { db } = ctx;
@@ -71,7 +74,7 @@ export function brewsRouter(ctx: AppContext) {
   router.post(
     '/:id/stages/:stage',
     handle({ params: stageParamsSchema, body: stageActionSchema }, async ({ params, body }, req) => {
-      await setStage(db, currentUser(req), params.id, params.stage, body.action);
+      await setStage(db, currentUser(req), params.id, params.stage, body.action, at(body.at));
       return getBrew(db, currentUser(req), params.id);
     }),
   );
@@ -124,7 +127,7 @@ export function brewsRouter(ctx: AppContext) {
   router.post(
     '/:id/decisions',
     handle({ params: idParamSchema, body: decisionInputSchema }, async ({ params, body }, req, res) => {
-      const decision = await addDecision(db, currentUser(req), params.id, body);
+      const decision = await addDecision(db, currentUser(req), params.id, body, at(body.decidedAt));
       res.status(201);
       return decision;
     }),
@@ -133,7 +136,7 @@ export function brewsRouter(ctx: AppContext) {
   router.post(
     '/:id/notes',
     handle({ params: idParamSchema, body: brewNoteInputSchema }, async ({ params, body }, req, res) => {
-      const note = await addNote(db, currentUser(req), params.id, body);
+      const note = await addNote(db, currentUser(req), params.id, body, at(body.writtenAt));
       res.status(201);
       return note;
     }),

@@ -165,11 +165,16 @@ const instrumentIdSchema = z
   .positive({ error: 'Pick an instrument.' })
   .nullable()
   .default(null);
-/** When the reading was taken; the server's clock when left out. Not in the future. */
-const takenAtSchema = z.iso
-  .datetime({ offset: true, error: 'Give the time as an ISO date and time.' })
-  .refine((s) => Date.parse(s) <= Date.now() + 5 * 60_000, { error: 'The reading cannot be taken in the future.' })
-  .optional();
+/**
+ * When something happened on the brewer's device (read, decided, written, a stage changed): an
+ * entry kept offline is sent later with its own time. The server's clock when left out. Not in the future.
+ */
+const pastInstantSchema = (what: string) =>
+  z.iso
+    .datetime({ offset: true, error: 'Give the time as an ISO date and time.' })
+    .refine((s) => Date.parse(s) <= Date.now() + 5 * 60_000, { error: `${what} cannot be in the future.` })
+    .optional();
+const takenAtSchema = pastInstantSchema('The time of the reading');
 
 // ---------------------------------------------------------------------------------------------
 // Readings
@@ -263,6 +268,7 @@ export const brewStageActions = ['start', 'complete', 'skip'] as const;
 export type BrewStageAction = (typeof brewStageActions)[number];
 export const stageActionSchema = z.object({
   action: z.enum(brewStageActions, { error: 'Choose start, complete or skip.' }),
+  at: pastInstantSchema('The time of the stage change'),
 });
 export const stageParamsSchema = z.object({
   id: z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' }),
@@ -276,6 +282,7 @@ export const listBrewsQuerySchema = z.object({
 export const brewNoteInputSchema = z.object({
   body: z.string({ error: 'Write the note.' }).trim().min(1, { error: 'Write the note.' }).max(2000, { error: 'Use at most 2000 characters.' }),
   stage: z.enum(brewStages, { error: 'Unknown stage.' }).nullable().default(null),
+  writtenAt: pastInstantSchema('The time of the note'),
 });
 export type BrewNoteInput = z.input<typeof brewNoteInputSchema>;
 
@@ -319,6 +326,7 @@ export const decisionInputSchema = z.object({
   input: boilCheckInputSchema,
   choice: decisionChoiceSchema,
   note: noteSchema,
+  decidedAt: pastInstantSchema('The time of the decision'),
 });
 export type DecisionInput = z.input<typeof decisionInputSchema>;
 

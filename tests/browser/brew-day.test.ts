@@ -75,16 +75,15 @@ describe('a brew day on a phone-sized window', () => {
     await expect.poll(async () => nbsp(await mashTemp.getByTestId('corrected-value').textContent())).toBe('66.2 °C');
     expect(nbsp(await mashTemp.getByTestId('raw-value').textContent())).toBe('66.6 °C');
 
-    // The connection drops while saving: nothing is lost, and a retry saves it.
+    // The connection drops while saving: the reading waits on the phone and is sent when it returns.
     await context.setOffline(true);
     await mashTemp.getByRole('button', { name: 'Save reading' }).click();
-    await mashTemp.getByText('Not saved — no connection').waitFor();
-    expect(await mashTemp.getByLabel('Mash temperature, as read').inputValue()).toBe('66.6');
+    await mashTemp.getByText('Mash temperature kept on this device: waiting to send.').waitFor();
+    await page.getByTestId('queued-item').filter({ hasText: 'Mash temperature' }).getByText('Waiting to send').waitFor();
     await context.setOffline(false);
-    await mashTemp.getByRole('button', { name: 'Retry' }).click();
-    await mashTemp.getByText('Mash temperature saved.').waitFor();
     const card = page.getByRole('article', { name: 'Mash temperature' });
     await card.waitFor();
+    await expect.poll(() => page.getByTestId('queued-item').count()).toBe(0);
 
     // A photo of the reading: a text file named .png is refused by its bytes; a real PNG is kept and shown.
     await card.getByLabel('Add a photo').setInputFiles({ name: 'thermometer.png', mimeType: 'image/png', buffer: Buffer.from('not really a picture') });
@@ -109,14 +108,12 @@ describe('a brew day on a phone-sized window', () => {
     const dme = check.getByRole('article').filter({ hasText: 'dry malt extract' });
     await expect.poll(async () => nbsp(await dme.getByRole('heading', { level: 3 }).textContent())).toBe(`Add ${grams} g dry malt extract`);
 
-    // Saving the choice fails once on a dropped connection, then goes through on retry.
+    // Chosen on a dropped connection: kept on the phone, sent when the connection returns.
     await context.setOffline(true);
     await dme.getByRole('button', { name: 'Choose this' }).click();
-    await dme.getByText('Not saved').waitFor();
+    await dme.getByText('Kept on this device: waiting to send.').waitFor();
     expect(await check.getByLabel('Brix').inputValue()).toBe('11.6');
     await context.setOffline(false);
-    await dme.getByRole('button', { name: 'Try again' }).click();
-    await dme.getByText('Saved to the brew-day log.').waitFor();
     const decisions = page.getByTestId('decision');
     await expect.poll(() => decisions.count()).toBe(1);
     expect(nbsp(await decisions.first().getByRole('heading').textContent())).toBe(`Add ${grams} g dry malt extract`);

@@ -15,6 +15,8 @@ import { BrewSharingPanel } from '@/features/brews/components/sharing-panel';
 import { instrumentsQueryOptions } from '@/features/instruments/api/list-instruments';
 import type { LateBoilInitialValues } from '@/features/late-boil/components/form-values';
 import { LateBoilCheck, type LateBoilChoice } from '@/features/late-boil/components/late-boil-check';
+import { OfflineStatus } from '@/components/offline/offline-status';
+import { QueuedList } from '@/components/offline/queued-list';
 import { ButtonLink } from '@/components/ui/button';
 import { Loading, PageHeader } from '@/components/ui/page';
 
@@ -117,6 +119,12 @@ export function Component() {
           </>
         }
       />
+      {brew.permissions.edit && (
+        <div className="mb-4 space-y-3">
+          <OfflineStatus brewId={brew.id} />
+          <QueuedList brewId={brew.id} title="Waiting to send" />
+        </div>
+      )}
       <BrewDay brew={brew} instruments={instruments.data ?? []} selected={selected} onSelect={select} boilCheck={boilCheck} />
       {brew.permissions.edit && (
         <details className="no-print mt-6 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">

@@ -5,6 +5,7 @@ import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
 import { BrewLog } from '@/features/brews/components/brew-log';
 import { BrewMissing } from '@/features/brews/components/brew-missing';
 import { BrewComments } from '@/features/reviews/components/brew-comments';
+import { QueuedList } from '@/components/offline/queued-list';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { Loading, PageHeader } from '@/components/ui/page';
 
@@ -42,6 +43,11 @@ export function Component() {
           </div>
         }
       />
+      {brew.permissions.edit && (
+        <div className="no-print mb-4">
+          <QueuedList brewId={brew.id} title="Waiting to send" />
+        </div>
+      )}
       <BrewLog brew={brew} />
       <div className="mt-8">
         <BrewComments brewId={brew.id} canComment={brew.permissions.comment} />

@@ -9,6 +9,8 @@ import { FermentationChart } from '@/features/fermentation/components/fermentati
 import { PackagingForm } from '@/features/fermentation/components/packaging-form';
 import { PackagingRecordView } from '@/features/fermentation/components/packaging-record';
 import { ProgressPanel } from '@/features/fermentation/components/progress-panel';
+import { OfflineStatus } from '@/components/offline/offline-status';
+import { QueuedList } from '@/components/offline/queued-list';
 import { ReadingForm } from '@/features/fermentation/components/reading-form';
 import { ReadingsList } from '@/features/fermentation/components/readings-list';
 import { RemindersToggle } from '@/features/fermentation/components/reminders-toggle';
@@ -83,6 +85,12 @@ export function Component() {
         <>
           {log.verdict && <VerdictBanner verdict={log.verdict} now={log.now} />}
           <BottleCaution />
+          {canEdit && (
+            <>
+              <OfflineStatus brewId={brew.id} />
+              <QueuedList brewId={brew.id} kinds={['fermentation-reading']} title="Readings waiting to send" />
+            </>
+          )}
           {canEdit && (
             <Card>
               <h2 className="mb-3 text-lg font-semibold text-cellar-900">Add a reading</h2>

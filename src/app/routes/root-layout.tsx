@@ -2,6 +2,9 @@ import { Menu, X } from 'lucide-react';
 import { Suspense, useEffect, useRef, useState } from 'react';
 import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
 import { useMe } from '@/lib/auth';
+import { useOfflineSync } from '@/lib/offline/use-offline-sync';
+import { QueueCount } from '@/components/offline/queued-list';
+import { UpdatePrompt } from '@/components/offline/update-prompt';
 import { PreferencesMenu } from '@/features/auth/components/preferences-menu';
 import { buttonClass } from '@/components/ui/button';
 import { Loading } from '@/components/ui/page';
@@ -9,6 +12,7 @@ import { navItems } from '../nav';
 
 export function RootLayout() {
   const { data: me } = useMe();
+  useOfflineSync(me);
   const navigate = useNavigate();
   const navigation = useNavigation();
   const items = navItems.filter((i) => (me || i.public) && (!i.admin || me?.siteRole === 'admin'));
@@ -38,6 +42,7 @@ export function RootLayout() {
             Wortwise
           </Link>
           <div className="ml-auto flex items-center gap-1">
+            {me && <QueueCount />}
             {items.length > 1 && (
               <button
                 ref={menuButton}
@@ -86,6 +91,7 @@ export function RootLayout() {
           </nav>
         )}
       </header>
+      <UpdatePrompt />
       <main className="mx-auto w-full max-w-5xl flex-1 px-3 py-6 sm:px-6" aria-busy={navigation.state === 'loading'}>
         <Suspense fallback={<Loading />}>
           <Outlet />

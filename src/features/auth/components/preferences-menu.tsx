@@ -1,7 +1,7 @@
 import { Check, CircleUser, LogOut } from 'lucide-react';
 import { useEffect, useRef, useState } from 'react';
 import type { ColourScalePreference, GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
-import { useLogout } from '../api/logout';
+import { confirmSignOut, useLogout } from '../api/logout';
 import { useUpdatePreferences } from '../api/update-preferences';
 
 const unitOptions: { value: UnitSystem; label: string }[] = [
@@ -85,7 +85,7 @@ export function PreferencesMenu({ me, onSignedOut }: { me: Me; onSignedOut: () =
             type="button"
             role="menuitem"
             className="mt-1 flex min-h-touch w-full items-center gap-2 rounded-lg px-3 text-left hover:bg-cellar-50"
-            onClick={() => logout.mutate(undefined, { onSuccess: onSignedOut })}
+            onClick={() => void confirmSignOut(me.id).then((go) => go && logout.mutate(undefined, { onSuccess: onSignedOut }))}
           >
             <LogOut aria-hidden className="size-5" /> Sign out
           </button>

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ReadingPhoto } from '@shared/schemas/brews';
-import { api } from '@/lib/api-client';
+import { PHOTO_MAX_BYTES, photoMimeTypes, type ReadingPhoto } from '@shared/schemas/brews';
+import { api, ApiError } from '@/lib/api-client';
+import { sendOrQueue } from '@/lib/offline/send';
 import { brewKeys } from './keys';
 
 /** The server decides the type from the file's bytes; the name and type sent here are not trusted. */
@@ -10,12 +11,35 @@ export const uploadPhoto = (brewId: number, readingId: number, file: File) => {
   return api.post<ReadingPhoto>(`/api/brews/${brewId}/readings/${readingId}/photos`, form);
 };
 
+/**
+ * The limits the server applies, checked on the device first, so a photo kept offline is not
+ * refused hours later for something the phone could have said at once.
+ */
+export function photoProblem(file: Blob): string | null {
+  if (file.size > PHOTO_MAX_BYTES) return `The photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB. Take it at a lower resolution or crop it, then try again.`;
+  if (file.type && !(photoMimeTypes as readonly string[]).includes(file.type)) return 'That file is not a JPEG, PNG or WebP image. Choose a photo taken with your camera.';
+  return null;
+}
+
 export function useUploadPhoto(brewId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    // Send even when the browser says it is offline: a failed save must say so and offer a retry, not wait silently.
+    // Run even when the browser says it is offline: the photo waits on the device with the queue.
     networkMode: 'always',
-    mutationFn: ({ readingId, file }: { readingId: number; file: File }) => uploadPhoto(brewId, readingId, file),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) }),
+    mutationFn: ({ readingId, file }: { readingId: number; file: File }) => {
+      const problem = photoProblem(file);
+      if (problem) throw new ApiError(413, { error: 'photo_rejected', message: problem });
+      const takenAt = new Date().toISOString();
+      return sendOrQueue<ReadingPhoto>({
+        brewId,
+        kind: 'photo',
+        url: `/api/brews/${brewId}/readings/${readingId}/photos`,
+        body: { fileName: file.name },
+        photo: file,
+        label: 'Photo of a reading',
+        takenAt,
+      });
+    },
+    onSuccess: (outcome) => outcome.status === 'sent' && queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) }),
   });
 }

@@ -13,7 +13,7 @@ import { SaveNotice } from '@/components/ui/save-notice';
 export function NoteForm({ brewId, stage }: { brewId: number; stage: BrewStage | null }) {
   const add = useAddNote(brewId);
   const [offline, setOffline] = useState(false);
-  const [saved, setSaved] = useState(false);
+  const [saved, setSaved] = useState<'sent' | 'queued' | null>(null);
   return (
     <Formik<BrewNoteInput>
       initialValues={{ body: '', stage }}
@@ -22,11 +22,11 @@ export function NoteForm({ brewId, stage }: { brewId: number; stage: BrewStage |
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
         setOffline(false);
-        setSaved(false);
+        setSaved(null);
         try {
-          await add.mutateAsync({ ...values, stage });
+          const outcome = await add.mutateAsync({ ...values, stage });
           helpers.resetForm({ values: { body: '', stage } });
-          setSaved(true);
+          setSaved(outcome.status === 'queued' ? 'queued' : 'sent');
         } catch (error) {
           if (error instanceof NetworkError) setOffline(true);
           else applyApiError(error, helpers);
@@ -58,7 +58,7 @@ export function NoteForm({ brewId, stage }: { brewId: number; stage: BrewStage |
               Save note
             </Button>
           )}
-          {saved && <Notice tone="success">Note saved.</Notice>}
+          {saved && <Notice tone="success">{saved === 'queued' ? 'Note kept on this device: waiting to send.' : 'Note saved.'}</Notice>}
         </Form>
       )}
     </Formik>

@@ -136,17 +136,20 @@ function PhotoUpload({ brewId, readingId }: { brewId: number; readingId: number 
   const [file, setFile] = useState<File | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const [offline, setOffline] = useState(false);
+  const [queued, setQueued] = useState(false);
   const id = useId();
 
   async function send(chosen: File) {
     setProblem(null);
     setOffline(false);
+    setQueued(false);
     if (chosen.size > PHOTO_MAX_BYTES) {
       setProblem(`The photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB. Take it at a lower resolution or crop it, then try again.`);
       return;
     }
     try {
-      await upload.mutateAsync({ readingId, file: chosen });
+      const outcome = await upload.mutateAsync({ readingId, file: chosen });
+      setQueued(outcome.status === 'queued');
       setFile(null);
       if (input.current) input.current.value = '';
     } catch (error) {
@@ -176,6 +179,7 @@ function PhotoUpload({ brewId, readingId }: { brewId: number; readingId: number 
         }}
       />
       {problem && <Notice tone="error">{problem}</Notice>}
+      {queued && <Notice tone="success">Photo kept on this device: waiting to send.</Notice>}
       {offline && file && <NotSaved busy={upload.isPending} onRetry={() => void send(file)} />}
     </div>
   );

@@ -130,9 +130,9 @@ export function ReadingForm({ brewId, kinds, instruments, onSaved }: ReadingForm
     setSaved(null);
     firstAttempt.current ??= new Date().toISOString();
     try {
-      await add.mutateAsync({ ...(toReadingInput(values) as ReadingInput), takenAt: firstAttempt.current });
+      const outcome = await add.mutateAsync({ ...(toReadingInput(values) as ReadingInput), takenAt: firstAttempt.current });
       firstAttempt.current = null;
-      setSaved(`${readingKindLabels[values.kind]} saved.`);
+      setSaved(outcome.status === 'queued' ? `${readingKindLabels[values.kind]} kept on this device: waiting to send.` : `${readingKindLabels[values.kind]} saved.`);
       helpers.resetForm({ values: { ...startValues(values.kind, instruments, values.method), instrumentId: values.instrumentId } });
       onSaved?.();
     } catch (error) {

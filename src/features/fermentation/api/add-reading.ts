@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { FermentationLog, FermentationReading, FermentationReadingInput } from '@shared/schemas/fermentation';
 import { api } from '@/lib/api-client';
+import { sendOrQueue } from '@/lib/offline/send';
 import { fermentationKeys } from './keys';
 
 export interface AddReadingResult {
@@ -16,7 +17,19 @@ export const addFermentationReading = (brewId: number, input: FermentationReadin
 export function useAddFermentationReading(brewId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: FermentationReadingInput) => addFermentationReading(brewId, input),
-    onSuccess: (result) => queryClient.setQueryData(fermentationKeys.log(brewId), result.log),
+    // Run even when the browser says it is offline: the reading is kept on the device at once.
+    networkMode: 'always',
+    mutationFn: (input: FermentationReadingInput) => {
+      const takenAt = input.takenAt ?? new Date().toISOString();
+      return sendOrQueue<AddReadingResult>({
+        brewId,
+        kind: 'fermentation-reading',
+        url: `/api/brews/${brewId}/fermentation/readings`,
+        body: { ...input, takenAt },
+        label: `Fermentation reading (${input.method})`,
+        takenAt,
+      });
+    },
+    onSuccess: (outcome) => outcome.status === 'sent' && queryClient.setQueryData(fermentationKeys.log(brewId), outcome.data.log),
   });
 }

@@ -78,7 +78,14 @@ export function ReadingForm({ brewId, og, pitchedAt }: { brewId: number; og: num
         helpers.setStatus(undefined);
         setSaved(null);
         try {
-          const result = await add.mutateAsync(toReadingInput(values));
+          const outcome = await add.mutateAsync(toReadingInput(values));
+          const resetValues = { ...values, sg: '' as const, sampleTempC: values.sampleTempC, brix: '', tempC: '' as const, note: '', takenAt: toLocalInput(new Date()) };
+          if (outcome.status === 'queued') {
+            setSaved(`Kept on this device: waiting to send (${dayLabel(outcome.item.takenAt, pitchedAt)}).`);
+            helpers.resetForm({ values: resetValues });
+            return;
+          }
+          const result = outcome.data;
           const r = result.reading;
           const value = r.kind === 'gravity' ? units.format('gravity', r.corrected) : units.format('temperature', r.corrected);
           setSaved(`${result.duplicate ? 'Already in the log' : 'Saved'}: ${dayLabel(r.takenAt, pitchedAt)}, ${value}${r.estimate ? ' (estimate)' : ''}.`);

@@ -212,7 +212,7 @@ function OptionCard({
               </Button>
             </>
           ) : choice?.state === 'saved' ? (
-            <Notice tone="success">Saved to the brew-day log.</Notice>
+            <Notice tone="success">{choice.message ?? 'Saved to the brew-day log.'}</Notice>
           ) : (
             <Button
               variant="primary"

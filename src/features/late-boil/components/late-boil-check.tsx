@@ -259,8 +259,10 @@ function Answer({
       const key = optionKey(option);
       setChoice({ key, state: 'saving' });
       try {
-        await onChoose({ option, input: check.input, result: check.outcome });
-        if (mounted.current) setChoice({ key, state: 'saved' });
+        const saved = await onChoose({ option, input: check.input, result: check.outcome });
+        // A brew day without a connection keeps the decision on the device until it can be sent.
+        const queued = typeof saved === 'object' && saved !== null && (saved as { status?: unknown }).status === 'queued';
+        if (mounted.current) setChoice({ key, state: 'saved', message: queued ? 'Kept on this device: waiting to send.' : undefined });
       } catch (error) {
         if (mounted.current) setChoice({ key, state: 'failed', message: (error as Error).message });
       }
