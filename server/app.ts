@@ -15,6 +15,7 @@ import { fermentationRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
+import { createRateLimits } from './lib/rate-limit';
 import { passwordResetRouter } from './password-reset/router';
 import { recipesRouter } from './recipes/router';
 import { reviewsRouter } from './reviews/router';
@@ -32,14 +33,15 @@ export function createApp(ctx: AppContext) {
   app.use(express.json({ limit: '100kb' }));
   app.use(cookieParser());
 
+  const limits = createRateLimits(env, ctx.redis);
   const api = express.Router();
   api.use('/health', healthRouter(pool));
-  api.use('/calc', calcRouter(env));
+  api.use('/calc', calcRouter(limits.calc));
   api.use(loadUser(db, env));
-  api.use('/auth/password-reset', passwordResetRouter(ctx));
-  api.use('/auth', authRouter(db, env));
-  api.use('/clubs', clubsRouter(ctx));
-  api.use('/invitations', invitationsRouter(ctx));
+  api.use('/auth/password-reset', passwordResetRouter(ctx, limits.passwordReset));
+  api.use('/auth', authRouter(db, env, limits.auth));
+  api.use('/clubs', clubsRouter(ctx, limits.clubInvite));
+  api.use('/invitations', invitationsRouter(ctx, limits.invitationAccept));
   api.use('/admin', adminRouter(ctx));
   api.use('/recipes', recipesRouter(ctx));
   api.use('/instruments', instrumentsRouter(db));
