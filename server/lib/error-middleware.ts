@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { isDatabaseUnavailable } from '../db/unavailable';
 import { HttpError, NotFound } from './errors';
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
@@ -33,6 +34,11 @@ export const errorMiddleware: ErrorRequestHandler = (err: unknown, _req, res, _n
   }
   if (typeof parserError?.status === 'number' && parserError.status >= 400 && parserError.status < 500) {
     res.status(parserError.status).json({ error: 'bad_request', message: 'The request could not be read.' });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    console.warn(`Database unavailable: ${(err as Error).message}`);
+    res.status(503).set('Retry-After', '2').json({ error: 'unavailable', message: 'Wortwise cannot reach its database just now. Please try again in a moment.' });
     return;
   }
   console.error('Unhandled error', err);
