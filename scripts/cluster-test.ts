@@ -11,7 +11,7 @@ import { migrateDatabase } from '../server/db/migrate';
 import { seedDemo } from '../server/db/seed';
 import '../server/demo-seeds';
 import { startFakeSmtp } from '../server/mail/fake-smtp';
-import { clusterSize, nodeSynced, ports, startCluster, stopEverything, waitFor, type Supervised } from './lib/cluster';
+import { clusterSize, nodeSynced, portAnswers, ports, startCluster, stopEverything, waitFor, type Supervised } from './lib/cluster';
 import { ensureLocalS3 } from './lib/s3';
 
 const workers = Number(process.env.LOAD_WORKERS ?? 4);
@@ -136,7 +136,7 @@ try {
   // node1 is the one HAProxy sends writes to; losing it moves them to the next node.
   await faultAndRecover(cluster.nodes[0], async () => (await nodeSynced(0)) && (await clusterSize(0)) === 3);
   await faultAndRecover(cluster.apps[0], async () => (await fetch(`http://127.0.0.1:${ports.apps[0]}/api/health`)).ok);
-  await faultAndRecover(cluster.redis, async () => (await fetch(`${base}/api/health`)).ok);
+  await faultAndRecover(cluster.redis, () => portAnswers(ports.redis));
   running = false;
   await Promise.all(load);
   mark('load stopped');

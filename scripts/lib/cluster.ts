@@ -36,7 +36,7 @@ function log(message: string) {
   console.log(`[cluster] ${message}`);
 }
 
-function portAnswers(port: number): Promise<boolean> {
+export function portAnswers(port: number): Promise<boolean> {
   return new Promise((resolve) => {
     const socket = net.connect({ host: '127.0.0.1', port }, () => {
       socket.destroy();
