@@ -5,8 +5,12 @@
  */
 const connectionCodes = new Set(['ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', 'PROTOCOL_CONNECTION_LOST', 'PROTOCOL_SEQUENCE_TIMEOUT', 'ER_CON_COUNT_ERROR']);
 
-/** MariaDB error numbers: 1047 WSREP not ready (ER_UNKNOWN_COM_ERROR), 1053 server shutdown, 1927 connection killed, 2002/2003/2006/2013 connection gone. */
-const unavailableErrnos = new Set([1047, 1053, 1927, 2002, 2003, 2006, 2013]);
+/**
+ * MariaDB error numbers: 1047 WSREP not ready (ER_UNKNOWN_COM_ERROR), 1053 server shutdown, 1927
+ * connection killed, 2002/2003/2006/2013 connection gone; 1205 lock wait timeout and 1213 deadlock
+ * (also Galera's certification failure) once the transaction retry in server/db has given up.
+ */
+const unavailableErrnos = new Set([1047, 1053, 1205, 1213, 1927, 2002, 2003, 2006, 2013]);
 
 export function isDatabaseUnavailable(error: unknown): boolean {
   for (let e = error as { code?: unknown; errno?: unknown; cause?: unknown } | undefined, depth = 0; e && depth < 4; e = e.cause as typeof e, depth++) {
