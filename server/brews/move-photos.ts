@@ -8,7 +8,7 @@ import { createHash } from 'node:crypto';
 import { and, asc, eq, gt, isNotNull, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { readingPhotos } from '../db/schema';
-import type { PhotoStore } from './photo-store';
+import { photoKeyPrefix, type PhotoStore } from './photo-store';
 
 export interface PhotoMove {
   moved: number;
@@ -16,7 +16,7 @@ export interface PhotoMove {
   damaged: number[];
 }
 
-export const movedPhotoKey = (brewId: number, photoId: number) => `reading-photos/brew-${brewId}/moved-${photoId}`;
+export const movedPhotoKey = (brewId: number, photoId: number) => `${photoKeyPrefix}brew-${brewId}/moved-${photoId}`;
 
 export async function movePhotosToStore(db: Db, store: PhotoStore, { batchSize = 20, log = (_: string) => {} } = {}): Promise<PhotoMove> {
   const result: PhotoMove = { moved: 0, damaged: [] };
@@ -47,4 +47,25 @@ export async function movePhotosToStore(db: Db, store: PhotoStore, { batchSize =
     }
     log(`moved ${result.moved} so far (last id ${afterId})`);
   }
+}
+
+/**
+ * Removes objects no row points to: left by a deleted reading, brew day or account (MariaDB
+ * cascades, the store has no foreign keys) or by an upload cut off between its two steps. Only
+ * objects older than `olderThanMs` go, so an upload in progress (bytes stored, row not yet
+ * inserted) is never touched.
+ */
+export async function sweepUnreferencedPhotos(db: Db, store: PhotoStore, { olderThanMs = 60 * 60 * 1000, now = new Date() } = {}): Promise<{ checked: number; removed: string[] }> {
+  const referenced = new Set((await db.select({ key: readingPhotos.storageKey }).from(readingPhotos).where(isNotNull(readingPhotos.storageKey))).map((r) => r.key));
+  const result = { checked: 0, removed: [] as string[] };
+  for await (const object of store.list()) {
+    result.checked += 1;
+    if (referenced.has(object.key) || now.getTime() - object.lastModified.getTime() < olderThanMs) continue;
+    // Read the rows again for this key: a photo moved or uploaded since the first read keeps its bytes.
+    const [row] = await db.select({ id: readingPhotos.id }).from(readingPhotos).where(eq(readingPhotos.storageKey, object.key));
+    if (row) continue;
+    await store.remove(object.key);
+    result.removed.push(object.key);
+  }
+  return result;
 }

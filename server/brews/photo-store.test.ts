@@ -5,7 +5,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { GetObjectCommand, HeadObjectCommand } from '@aws-sdk/client-s3';
 import { createHarness, type TestHarness } from '../../tests/support/api';
 import { readingPhotos } from '../db/schema';
-import { movePhotosToStore, movedPhotoKey } from './move-photos';
+import { movePhotosToStore, movedPhotoKey, sweepUnreferencedPhotos } from './move-photos';
 import { createPhotoStore, s3ClientFromEnv, type PhotoStore } from './photo-store';
 import { makeScene, startBrewDay } from './test-scene';
 
@@ -127,5 +127,25 @@ describe('moving photos out of MariaDB', () => {
     const [row] = await h.ctx.db.select().from(readingPhotos).where(eq(readingPhotos.id, id));
     expect(row).toMatchObject({ storageKey: movedPhotoKey(brewId, id), data: null });
     expect(sha(await readAll(await store.get(row.storageKey!)))).toBe(sha(bytes));
+  });
+});
+
+describe('sweeping objects no photo points to', () => {
+  it('removes an old unreferenced object and keeps photos and fresh uploads', async () => {
+    const { scene, brewId, readingId } = await readingWith(h);
+    const kept = await scene.owner.agent.post(`/api/brews/${brewId}/readings/${readingId}/photos`).attach('photo', pngLike(), 'jar.png').expect(201);
+    const [row] = await h.ctx.db.select().from(readingPhotos).where(eq(readingPhotos.id, kept.body.id));
+    const orphan = store.newKey(brewId);
+    await store.put(orphan, pngLike(64), 'image/png');
+
+    // An hour has not passed: an upload may still be on its way to its row.
+    const early = await sweepUnreferencedPhotos(h.ctx.db, store);
+    expect(early.removed).not.toContain(orphan);
+
+    const later = await sweepUnreferencedPhotos(h.ctx.db, store, { now: new Date(Date.now() + 2 * 60 * 60 * 1000) });
+    expect(later.removed).toContain(orphan);
+    expect(later.removed).not.toContain(row.storageKey);
+    await expect(store.get(orphan)).rejects.toMatchObject({ status: 503 });
+    expect(sha(await readAll(await store.get(row.storageKey!)))).toBe(kept.body.sha256);
   });
 });

@@ -6,7 +6,7 @@
  */
 import { randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, paginateListObjectsV2 } from '@aws-sdk/client-s3';
 import type { Env } from '../env';
 import { HttpError } from '../lib/errors';
 
@@ -24,6 +24,8 @@ export interface PhotoStore {
   get(key: string): Promise<Readable>;
   /** Removes the object; missing objects are not an error (S3 deletes are idempotent). */
   remove(key: string): Promise<void>;
+  /** Every object under our prefix, with when it was written (for the sweep of unreferenced objects). */
+  list(): AsyncIterable<{ key: string; lastModified: Date }>;
   readonly bucket: string;
   close(): void;
 }
@@ -51,11 +53,13 @@ async function unavailableOnFailure<T>(work: () => Promise<T>): Promise<T> {
   }
 }
 
+export const photoKeyPrefix = 'reading-photos/';
+
 export function createPhotoStore(env: Env, client: S3Client = s3ClientFromEnv(env)): PhotoStore {
   const Bucket = env.S3_BUCKET;
   return {
     bucket: Bucket,
-    newKey: (brewId) => `reading-photos/brew-${brewId}/${randomUUID()}`,
+    newKey: (brewId) => `${photoKeyPrefix}brew-${brewId}/${randomUUID()}`,
     put: (Key, Body, ContentType) =>
       unavailableOnFailure(async () => {
         await client.send(new PutObjectCommand({ Bucket, Key, Body, ContentType, ContentLength: Body.length }));
@@ -69,6 +73,13 @@ export function createPhotoStore(env: Env, client: S3Client = s3ClientFromEnv(en
       unavailableOnFailure(async () => {
         await client.send(new DeleteObjectCommand({ Bucket, Key }));
       }),
+    async *list() {
+      for await (const page of paginateListObjectsV2({ client }, { Bucket, Prefix: photoKeyPrefix })) {
+        for (const object of page.Contents ?? []) {
+          if (object.Key) yield { key: object.Key, lastModified: object.LastModified ?? new Date(0) };
+        }
+      }
+    },
     close: () => client.destroy(),
   };
 }
