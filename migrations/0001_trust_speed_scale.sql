@@ -28,12 +28,14 @@ CREATE TABLE `revoked_sessions` (
 	CONSTRAINT `revoked_sessions_session_id` PRIMARY KEY(`session_id`)
 );
 --> statement-breakpoint
+ALTER TABLE `reading_photos` MODIFY COLUMN `data` mediumblob;--> statement-breakpoint
 ALTER TABLE `packaging_records` MODIFY COLUMN `verdict_state` enum('no-reading','too-early','moving','stuck','stable') NOT NULL;--> statement-breakpoint
 ALTER TABLE `users` ADD `colour_scale` enum('srm','ebc') DEFAULT 'srm' NOT NULL;--> statement-breakpoint
 ALTER TABLE `recipe_fermentables` ADD `colour_lovibond` double;--> statement-breakpoint
 ALTER TABLE `recipes` ADD `target_ibu` double;--> statement-breakpoint
 ALTER TABLE `recipes` ADD `target_colour_srm` double;--> statement-breakpoint
 ALTER TABLE `recipes` ADD `souring_target_ph` double;--> statement-breakpoint
+ALTER TABLE `reading_photos` ADD `storage_key` varchar(255);--> statement-breakpoint
 ALTER TABLE `instruments` ADD `resolution_sg` double;--> statement-breakpoint
 ALTER TABLE `instruments` ADD `offset_scale` double;--> statement-breakpoint
 ALTER TABLE `recipe_versions` ADD CONSTRAINT `recipe_versions_recipe_id_recipes_id_fk` FOREIGN KEY (`recipe_id`) REFERENCES `recipes`(`id`) ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

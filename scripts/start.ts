@@ -1,6 +1,7 @@
 /**
  * `npm start`: everything on a fresh machine. MariaDB (installed and started when needed),
- * migrations, demo data once, the fake SMTP server, the built client and the API on one port.
+ * migrations, demo data once, the fake SMTP server, the fake S3 for photos, the built client and
+ * the API on one port.
  * Run again, it reuses what is already running; Ctrl-C stops what it started.
  */
 import { buildClientIfChanged } from './lib/client-build';
@@ -12,6 +13,7 @@ import { loadEnv } from '../server/env';
 import { startServer } from '../server/index';
 import { startFakeSmtp, type FakeSmtp } from '../server/mail/fake-smtp';
 import { databaseUrl, ensureDatabase, ensureMariadb, projectRoot, type RunningMariadb } from './lib/mariadb';
+import { ensureLocalS3 } from './lib/s3';
 
 const stops: (() => Promise<void>)[] = [];
 let stopping = false;
@@ -51,6 +53,9 @@ try {
     }
     process.env.FAKE_SMTP_API_URL ??= `http://127.0.0.1:${smtpPort + 1}`;
   }
+
+  const s3 = await ensureLocalS3();
+  stops.push(() => s3.stop());
 
   if (!process.env.SKIP_BUILD) {
     console.log('Checking the client build…');

@@ -1,3 +1,4 @@
+import type { Redis } from 'ioredis';
 import type { Pool } from 'mysql2/promise';
 import type { Db } from './db/client';
 import type { Env } from './env';
@@ -9,4 +10,6 @@ export interface AppContext {
   db: Db;
   pool: Pool;
   mailer: Mailer;
+  /** Shared rate-limit counts (REDIS_URL); absent, each process counts in memory. */
+  redis?: Redis | null;
 }

@@ -23,6 +23,16 @@ const envSchema = z
     AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(20),
     CALC_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(120),
     TRUST_PROXY: z.string().optional(),
+    /** Redis for rate-limit counts shared by every instance; unset, each process counts in memory. */
+    REDIS_URL: z.string().url().optional(),
+    /** Object storage for reading photos (S3 or compatible); the defaults are the local fake S3 our scripts start. */
+    S3_ENDPOINT: z.string().url().default('http://127.0.0.1:4568'),
+    S3_REGION: z.string().default('us-east-1'),
+    S3_BUCKET: z.string().min(3).default('wortwise-photos'),
+    S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+    S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+    /** Path-style URLs (http://host/bucket/key): needed by the fake and most self-hosted stores. */
+    S3_FORCE_PATH_STYLE: z.stringbool().default(true),
     /** Where the built client lives (tests build their own copy). */
     CLIENT_DIST: z.string().optional(),
   })

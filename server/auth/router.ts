@@ -1,5 +1,4 @@
-import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { Router, type RequestHandler } from 'express';
 import { eq } from 'drizzle-orm';
 import { loginSchema, preferencesSchema, signupSchema } from '@shared/schemas/auth';
 import type { Db } from '../db/client';
@@ -9,16 +8,9 @@ import { handle } from '../lib/handle';
 import { createUser, verifyLogin } from './service';
 import { clearSession, currentUser, issueSession, loadSessionUser, requireUser, revokeAllSessions, revokeSession, toMe } from './session';
 
-export function authRouter(db: Db, env: Env) {
+/** `authLimiter`: the sign-up and sign-in limit from server/lib/rate-limit.ts. */
+export function authRouter(db: Db, env: Env, authLimiter: RequestHandler) {
   const router = Router();
-  // In-memory counts: per instance. See README, "Beyond one machine", for the shared store.
-  const authLimiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: env.AUTH_RATE_LIMIT_MAX,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    message: { error: 'rate_limited', message: 'Too many attempts. Please wait a few minutes and try again.' },
-  });
 
   router.post(
     '/signup',

@@ -1,10 +1,11 @@
 /**
- * Photos of a reading (a hydrometer in its trial jar, a refractometer's scale). Kept in MariaDB
- * with their SHA-256, so every API instance serves the same bytes: see
- * docs/decisions/0006-uploaded-photos.md. The type is read from the file's first bytes; the
+ * Photos of a reading (a hydrometer in its trial jar, a refractometer's scale). The row (type,
+ * size, SHA-256) is in MariaDB, the bytes in object storage (./photo-store.ts), so every API
+ * instance serves the same photo: see docs/decisions/0011-photos-in-object-storage.md. The type is read from the file's first bytes; the
  * name and Content-Type the client sends are not trusted.
  */
 import { createHash } from 'node:crypto';
+import { pipeline } from 'node:stream/promises';
 import type { Request, Response } from 'express';
 import { and, count, eq } from 'drizzle-orm';
 import { PHOTO_MAX_BYTES, type PhotoMime, type ReadingPhoto } from '@shared/schemas/brews';
@@ -14,6 +15,7 @@ import { lockBrewRow } from '../db/locks';
 import { readingPhotos } from '../db/schema';
 import { BadRequest, HttpError, NotFound } from '../lib/errors';
 import { singleUpload } from '../lib/upload';
+import type { PhotoStore } from './photo-store';
 import { loadReading } from './readings';
 import { loadBrewForActor, photoUrl } from './service';
 
@@ -45,7 +47,7 @@ function toPhoto(brewId: number, row: { id: number; readingId: number; mime: Pho
   return { ...row, createdAt: row.createdAt.toISOString(), url: photoUrl(brewId, row.readingId, row.id) };
 }
 
-export async function addPhoto(db: Db, actor: Actor, brewId: number, readingId: number, file: Express.Multer.File | undefined): Promise<ReadingPhoto> {
+export async function addPhoto(db: Db, store: PhotoStore, actor: Actor, brewId: number, readingId: number, file: Express.Multer.File | undefined): Promise<ReadingPhoto> {
   await loadBrewForActor(db, actor, brewId, 'update');
   await loadReading(db, brewId, readingId);
   if (!file || file.size === 0) {
@@ -55,18 +57,27 @@ export async function addPhoto(db: Db, actor: Actor, brewId: number, readingId: 
   const mime = sniffImageType(file.buffer);
   if (!mime) throw new UnsupportedMediaType('That file is not a JPEG, PNG or WebP image. Choose a photo taken with your camera.');
   const sha256 = createHash('sha256').update(file.buffer).digest('hex');
-  const values = { readingId, brewId, mime, sizeBytes: file.size, sha256, data: file.buffer };
-  const id = await db.transaction(async (tx) => {
-    // Counted under the brew row lock, so twelve uploads at once still keep at most six.
-    await lockBrewRow(tx, brewId);
-    const [{ n }] = await tx.select({ n: count() }).from(readingPhotos).where(eq(readingPhotos.readingId, readingId));
-    if (Number(n) >= PHOTOS_PER_READING) {
-      const message = `A reading keeps at most ${PHOTOS_PER_READING} photos. Delete one first.`;
-      throw new BadRequest(message, { photo: message });
-    }
-    const [{ id }] = await tx.insert(readingPhotos).values(values).$returningId();
-    return id;
-  });
+  // Bytes first, under a key never used before; the row only appears once they are stored.
+  const storageKey = store.newKey(brewId);
+  await store.put(storageKey, file.buffer, mime);
+  const values = { readingId, brewId, mime, sizeBytes: file.size, sha256, storageKey };
+  const id = await db
+    .transaction(async (tx) => {
+      // Counted under the brew row lock, so twelve uploads at once still keep at most six.
+      await lockBrewRow(tx, brewId);
+      const [{ n }] = await tx.select({ n: count() }).from(readingPhotos).where(eq(readingPhotos.readingId, readingId));
+      if (Number(n) >= PHOTOS_PER_READING) {
+        const message = `A reading keeps at most ${PHOTOS_PER_READING} photos. Delete one first.`;
+        throw new BadRequest(message, { photo: message });
+      }
+      const [{ id }] = await tx.insert(readingPhotos).values(values).$returningId();
+      return id;
+    })
+    .catch(async (error: unknown) => {
+      // Nothing points at the bytes: take them away again.
+      await store.remove(storageKey).catch(() => {});
+      throw error;
+    });
   const [row] = await db
     .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
     .from(readingPhotos)
@@ -84,7 +95,7 @@ async function findPhoto(db: Db, brewId: number, readingId: number, photoId: num
 }
 
 /** Sends the image to someone who may read the brew day; never cached by shared caches, never sniffed. */
-export async function sendPhoto(db: Db, actor: Actor, brewId: number, readingId: number, photoId: number, req: Request, res: Response) {
+export async function sendPhoto(db: Db, store: PhotoStore, actor: Actor, brewId: number, readingId: number, photoId: number, req: Request, res: Response) {
   await loadBrewForActor(db, actor, brewId, 'read');
   const row = await findPhoto(db, brewId, readingId, photoId);
   const etag = `"${row.sha256}"`;
@@ -99,11 +110,20 @@ export async function sendPhoto(db: Db, actor: Actor, brewId: number, readingId:
     res.status(304).end();
     return;
   }
-  res.status(200).end(row.data);
+  // Rows from before object storage keep their bytes until `npm run photos:to-s3` moves them.
+  if (!row.storageKey) {
+    res.status(200).end(row.data);
+    return;
+  }
+  const body = await store.get(row.storageKey);
+  res.set('Content-Length', String(row.sizeBytes)).status(200);
+  await pipeline(body, res);
 }
 
-export async function deletePhoto(db: Db, actor: Actor, brewId: number, readingId: number, photoId: number) {
+export async function deletePhoto(db: Db, store: PhotoStore, actor: Actor, brewId: number, readingId: number, photoId: number) {
   await loadBrewForActor(db, actor, brewId, 'update');
-  await findPhoto(db, brewId, readingId, photoId);
+  const row = await findPhoto(db, brewId, readingId, photoId);
   await db.delete(readingPhotos).where(eq(readingPhotos.id, photoId));
+  // The row is gone, so the photo is; an object left behind by a failure here is swept later.
+  if (row.storageKey) await store.remove(row.storageKey).catch(() => {});
 }

@@ -18,6 +18,7 @@ import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
 import { handle } from '../lib/handle';
 import { addDecision } from './decisions';
+import { createPhotoStore } from './photo-store';
 import { addPhoto, deletePhoto, receivePhoto, sendPhoto } from './photos';
 import { addReading, deleteReading, recomputeReading } from './readings';
 import { addNote, deleteBrew, deleteNote, getBrew, listBrews, setBrewSharing, setStage, startBrew, updateBrew } from './service';
@@ -28,6 +29,7 @@ const at = (iso: string | undefined) => (iso ? new Date(iso) : undefined);
 /** `/api/brews`: brew days with their stages, readings, photos, late-boil decisions and notes. */
 export function brewsRouter(ctx: AppContext) {
   const { db } = ctx;
+  const photoStore = createPhotoStore(ctx.env);
   const router = Router();
   router.use(requireUser);
 
@@ -105,7 +107,7 @@ export function brewsRouter(ctx: AppContext) {
     '/:id/readings/:readingId/photos',
     receivePhoto,
     handle({ params: readingParamsSchema }, async ({ params }, req, res) => {
-      const photo = await addPhoto(db, currentUser(req), params.id, params.readingId, req.file);
+      const photo = await addPhoto(db, photoStore, currentUser(req), params.id, params.readingId, req.file);
       res.status(201);
       return photo;
     }),
@@ -113,13 +115,13 @@ export function brewsRouter(ctx: AppContext) {
 
   router.get(
     '/:id/readings/:readingId/photos/:photoId',
-    handle({ params: photoParamsSchema }, ({ params }, req, res) => sendPhoto(db, currentUser(req), params.id, params.readingId, params.photoId, req, res)),
+    handle({ params: photoParamsSchema }, ({ params }, req, res) => sendPhoto(db, photoStore, currentUser(req), params.id, params.readingId, params.photoId, req, res)),
   );
 
   router.delete(
     '/:id/readings/:readingId/photos/:photoId',
     handle({ params: photoParamsSchema }, async ({ params }, req, res) => {
-      await deletePhoto(db, currentUser(req), params.id, params.readingId, params.photoId);
+      await deletePhoto(db, photoStore, currentUser(req), params.id, params.readingId, params.photoId);
       res.status(204).end();
     }),
   );

@@ -1,26 +1,15 @@
-import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { Router, type RequestHandler } from 'express';
 import { boilCorrection } from '@shared/brewmath';
 import { boilCorrectionRequestSchema } from '@shared/schemas/boil-check';
-import type { Env } from '../env';
 import { handle } from '../lib/handle';
 
 /**
  * Public calculators: no account needed, so a brewer can try Wortwise before signing up. Nothing
- * is stored. Rate-limited per client address; the counts live in memory, per instance (README,
- * "Beyond one machine").
+ * is stored. Rate-limited per client address (`limit`, from server/lib/rate-limit.ts).
  */
-export function calcRouter(env: Env) {
+export function calcRouter(limit: RequestHandler) {
   const router = Router();
-  router.use(
-    rateLimit({
-      windowMs: 60 * 1000,
-      limit: env.CALC_RATE_LIMIT_MAX,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      message: { error: 'rate_limited', message: 'Too many calculations in a minute. Please wait a moment and try again.' },
-    }),
-  );
+  router.use(limit);
 
   router.post(
     '/boil-correction',

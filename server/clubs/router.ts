@@ -1,5 +1,4 @@
-import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { Router, type RequestHandler } from 'express';
 import {
   acceptInvitationSchema,
   clubParamsSchema,
@@ -18,20 +17,10 @@ import { acceptInvitation, inviteToClub, listPendingInvitations, previewInvitati
 import { createClub, getClub, leaveClub, listMyClubs, removeMember, setMemberRole, updateClub } from './service';
 
 /** `/api/clubs`: a brewer's clubs, their members and the organisers' invitations. */
-export function clubsRouter(ctx: AppContext) {
+export function clubsRouter(ctx: AppContext, inviteLimiter: RequestHandler) {
   const { db } = ctx;
   const router = Router();
   router.use(requireUser);
-  // In-memory counts, per instance (README, "Beyond one machine"): keeps one account from
-  // turning invitations into a way to mail strangers in bulk.
-  const inviteLimiter = rateLimit({
-    windowMs: 60 * 60 * 1000,
-    limit: ctx.env.AUTH_RATE_LIMIT_MAX * 5,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => `user:${req.user?.id ?? 0}`,
-    message: { error: 'rate_limited', message: 'That is a lot of invitations in one hour. Please wait a while and try again.' },
-  });
 
   router.get(
     '/',
@@ -114,17 +103,9 @@ export function clubsRouter(ctx: AppContext) {
 }
 
 /** `/api/invitations/:token`: public, because the person invited may have no account yet. */
-export function invitationsRouter(ctx: AppContext) {
+export function invitationsRouter(ctx: AppContext, acceptLimiter: RequestHandler) {
   const { db, env } = ctx;
   const router = Router();
-  // Accepting can create an account, so it is limited like sign-up (in memory, per instance).
-  const acceptLimiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: env.AUTH_RATE_LIMIT_MAX,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    message: { error: 'rate_limited', message: 'Too many attempts. Please wait a few minutes and try again.' },
-  });
 
   router.get(
     '/:token',

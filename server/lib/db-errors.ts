@@ -45,6 +45,7 @@ const connectionCodes = new Set([
   'EHOSTUNREACH',
   'ENETUNREACH',
   'PROTOCOL_CONNECTION_LOST',
+  'PROTOCOL_SEQUENCE_TIMEOUT',
   'PROTOCOL_ENQUEUE_AFTER_FATAL_ERROR',
   'PROTOCOL_ENQUEUE_AFTER_QUIT',
   'ER_CON_COUNT_ERROR',
@@ -52,8 +53,8 @@ const connectionCodes = new Set([
   'ER_UNKNOWN_COM_ERROR',
 ]);
 // 1040 too many connections, 1047 WSREP has not yet prepared node (a Galera node out of the
-// cluster), 1053 server shutdown in progress, 1927 connection killed.
-const connectionErrnos = new Set([1040, 1047, 1053, 1927]);
+// cluster), 1053 server shutdown in progress, 1927 connection killed, 2002/2003/2006/2013 connection gone.
+const connectionErrnos = new Set([1040, 1047, 1053, 1927, 2002, 2003, 2006, 2013]);
 
 /** MariaDB cannot be reached or is not serving: the request may succeed later (503). */
 export function isDatabaseUnavailable(error: unknown) {

@@ -1,5 +1,4 @@
-import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { Router, type RequestHandler } from 'express';
 import { tokenParamsSchema } from '@shared/schemas/clubs';
 import { passwordResetRequestedMessage, passwordResetRequestSchema, passwordResetSchema } from '@shared/schemas/password-reset';
 import { issueSession, loadSessionUser, toMe } from '../auth/session';
@@ -8,18 +7,9 @@ import { handle } from '../lib/handle';
 import { checkResetToken, requestPasswordReset, resetPassword } from './service';
 
 /** `/api/auth/password-reset`: ask for a link, check it, use it. */
-export function passwordResetRouter(ctx: AppContext) {
+export function passwordResetRouter(ctx: AppContext, limiter: RequestHandler) {
   const { db, env } = ctx;
   const router = Router();
-  // In-memory counts, per instance (README, "Beyond one machine"); the per-account cap in the
-  // service is in MariaDB and so holds across instances.
-  const limiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: env.AUTH_RATE_LIMIT_MAX,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    message: { error: 'rate_limited', message: 'Too many attempts. Please wait a few minutes and try again.' },
-  });
 
   router.post(
     '/',

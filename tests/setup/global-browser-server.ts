@@ -1,9 +1,10 @@
 /**
  * Browser tests: build the client, then serve it with the real API on a free port, backed by
- * this run's database and a fake SMTP server whose listing the tests read.
+ * this run's database, a fake SMTP server whose listing the tests read and a fake S3 for photos.
  */
 import { execFileSync } from 'node:child_process';
-import { rmSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { seedDemo } from '../../server/db/seed';
@@ -11,6 +12,7 @@ import '../../server/demo-seeds';
 import { createDb } from '../../server/db/client';
 import { loadEnv } from '../../server/env';
 import { startServer } from '../../server/index';
+import { startFakeS3 } from '../../server/lib/fake-s3';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { ensureChromium } from '../../scripts/lib/chromium';
 import { projectRoot } from '../../scripts/lib/mariadb';
@@ -32,6 +34,8 @@ export default async function setup(project: TestProject) {
   await seedDemo(db);
   await pool.end();
   const smtp = await startFakeSmtp();
+  const s3Dir = mkdtempSync(path.join(os.tmpdir(), 'wortwise-s3-'));
+  const s3 = await startFakeS3({ directory: s3Dir, bucket: 'wortwise-test-photos' });
   const server = await startServer(
     loadEnv({
       NODE_ENV: 'test',
@@ -39,6 +43,8 @@ export default async function setup(project: TestProject) {
       DATABASE_URL: databaseUrl,
       SMTP_PORT: String(smtp.smtpPort),
       FAKE_SMTP_API_URL: smtp.apiUrl,
+      S3_ENDPOINT: s3.endpoint,
+      S3_BUCKET: 'wortwise-test-photos',
       AUTH_RATE_LIMIT_MAX: '10000',
       CALC_RATE_LIMIT_MAX: '10000',
       CLIENT_DIST: clientDist,
@@ -49,6 +55,8 @@ export default async function setup(project: TestProject) {
   return async () => {
     await server.stop();
     await smtp.close();
+    await s3.close();
+    rmSync(s3Dir, { recursive: true, force: true });
     rmSync(clientDist, { recursive: true, force: true });
   };
 }

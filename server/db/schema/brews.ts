@@ -142,8 +142,8 @@ export const brewNotes = mysqlTable(
 );
 
 /**
- * Photos of a reading, in the database so every API instance sees them
- * (docs/decisions/0006-uploaded-photos.md). The type is the one the bytes show, not the client's.
+ * Photos of a reading: the row here, the bytes in object storage under `storage_key`
+ * (docs/decisions/0011-photos-in-object-storage.md). The type is the one the bytes show, not the client's.
  */
 export const readingPhotos = mysqlTable(
   'reading_photos',
@@ -158,7 +158,10 @@ export const readingPhotos = mysqlTable(
     mime: mysqlEnum('mime', photoMimeTypes).notNull(),
     sizeBytes: int('size_bytes').notNull(),
     sha256: char('sha256', { length: 64 }).notNull(),
-    data: mediumBlob('data').notNull(),
+    /** The object's key in the photo store (server/brews/photo-store.ts); null only for a photo not yet moved out of `data`. */
+    storageKey: varchar('storage_key', { length: 255 }),
+    /** The bytes of a photo uploaded before object storage; emptied by `npm run photos:to-s3`. */
+    data: mediumBlob('data'),
     createdAt: created('created_at'),
   },
   (t) => [index('reading_photos_reading_idx').on(t.readingId), index('reading_photos_brew_idx').on(t.brewId)],
