@@ -46,4 +46,17 @@ export default tseslint.config(
     files: ['src/**/*.{ts,tsx}'],
     rules: reactHooks.configs.recommended.rules,
   },
+  {
+    // One way to do each thing: CSV goes through server/lib/csv.ts (one reader, one writer, one formula guard).
+    files: ['**/*.{ts,tsx}'],
+    ignores: ['server/lib/csv.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
+        },
+      ],
+    },
+  },
 );
