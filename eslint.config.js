@@ -59,4 +59,12 @@ export default tseslint.config(
       ],
     },
   },
+  {
+    // One way to count days: spans use DAY_MS, calendar days localDay/utcDay (shared/dates.ts, decision 0011).
+    files: ['**/*.{ts,tsx}'],
+    ignores: ['shared/dates.ts', '**/*.test.ts', '**/*.test.tsx'],
+    rules: {
+      'no-restricted-syntax': ['error', { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' }],
+    },
+  },
 );

@@ -45,6 +45,7 @@ import {
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
 import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
+import { utcDay } from '@shared/dates';
 
 export interface StoredBrew {
   row: BrewRow;
@@ -269,9 +270,8 @@ export async function listBrews(db: DbOrTx, actor: Actor, scope: 'mine' | 'share
   );
 }
 
-function todayIso() {
-  return new Date().toISOString().slice(0, 10);
-}
+/** The client sends the brewer's own day; without one, the UTC day (decision 0011). */
+const todayIso = () => utcDay();
 
 /** Starts a brew day from a recipe the brewer may read: snapshots its targets and the equipment profile. */
 export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput, now = new Date()): Promise<number> {

@@ -41,8 +41,8 @@ import {
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
+import { DAY_MS } from '@shared/dates';
 
-const DAY_MS = 86_400_000;
 const iso = (d: Date) => d.toISOString();
 const when = (d: Date) => `${d.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
 

@@ -1,5 +1,6 @@
 import { BrewMathError } from './errors';
 import { requireRange, requireSg, show, showSg } from './validate';
+import { DAY_MS } from '../dates';
 
 /**
  * When is fermentation finished? Common practice, no source: time alone proves nothing; start
@@ -36,8 +37,6 @@ export interface FgStability {
 export const FG_FIRST_CHECK_DAY = 12;
 export const FG_MIN_SPAN_DAYS = 2;
 export const FG_TOLERANCE_SG = 0.001;
-
-const DAY_MS = 86_400_000;
 
 function timeOf(at: Date | string, field: string, label: string): number {
   const ms = at instanceof Date ? at.getTime() : typeof at === 'string' ? Date.parse(at) : Number.NaN;

@@ -6,6 +6,7 @@
  */
 import { FG_FIRST_CHECK_DAY, FG_MIN_SPAN_DAYS, fgStability, type FgStability } from '../brewmath';
 import type { FermentationVerdict } from '../schemas/fermentation';
+import { DAY_MS } from '../dates';
 
 export interface VerdictReading {
   takenAt: Date | string;
@@ -14,8 +15,6 @@ export interface VerdictReading {
   /** An alcohol-corrected refractometer estimate. */
   estimate: boolean;
 }
-
-const DAY_MS = 86_400_000;
 
 const ms = (at: Date | string) => (at instanceof Date ? at.getTime() : Date.parse(at));
 

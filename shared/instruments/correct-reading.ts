@@ -18,6 +18,7 @@ import {
   type RefractometerSnapshot,
   type ThermometerSnapshot,
 } from '../schemas/instruments';
+import { DAY_MS } from '../dates';
 
 export interface HydrometerRaw {
   /** As read at the bottom of the meniscus. */
@@ -153,8 +154,6 @@ function correctThermometerReading(snapshot: ThermometerSnapshot, raw: Thermomet
   }
   return { corrected: tempC - offsetC, correction: { kind: 'offset', offsetC }, warnings };
 }
-
-const DAY_MS = 86_400_000;
 
 export interface PhCalibrationStatus {
   calibratedOn: string | null;

@@ -7,6 +7,7 @@ import { NetworkError } from '@/lib/api-client';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useStartBrew } from '../api/start-brew';
 import { NotSaved } from './not-saved';
+import { localDay } from '@shared/dates';
 
 export interface RecipeChoice {
   id: number;
@@ -19,11 +20,6 @@ interface StartValues {
   recipeId: string;
   name: string;
   brewedOn: string;
-}
-
-function localToday() {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 }
 
 const toInput = (v: StartValues) => ({
@@ -40,7 +36,7 @@ export function StartBrewForm({ recipes, onStarted }: { recipes: readonly Recipe
   }
   return (
     <Formik<StartValues>
-      initialValues={{ recipeId: String(recipes[0].id), name: '', brewedOn: localToday() }}
+      initialValues={{ recipeId: String(recipes[0].id), name: '', brewedOn: localDay() }}
       validate={(v) => zodValidate(startBrewSchema)(toInput(v))}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);

@@ -1,8 +1,8 @@
 import { useEffect, useRef, useState } from 'react';
 import type { FermentationLog } from '@shared/schemas/fermentation';
 import { useUnits } from '@/lib/units';
+import { DAY_MS } from '@shared/dates';
 
-const DAY_MS = 86_400_000;
 const HEIGHT = 240;
 const M = { left: 46, right: 42, top: 14, bottom: 40 };
 

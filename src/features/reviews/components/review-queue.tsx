@@ -1,11 +1,12 @@
 import { ChevronRight } from 'lucide-react';
 import { Link } from 'react-router';
+import { DAY_MS } from '@shared/dates';
 import { brewStatusLabels } from '@shared/schemas/brews';
 import type { ReviewQueueItem } from '@shared/schemas/comments';
 import { useUnits } from '@/lib/units';
 
 function sharedAgo(iso: string): string {
-  const days = Math.floor((Date.now() - Date.parse(iso)) / 86_400_000);
+  const days = Math.floor((Date.now() - Date.parse(iso)) / DAY_MS);
   if (days <= 0) return 'shared today';
   if (days === 1) return 'shared yesterday';
   return `shared ${days} days ago`;
