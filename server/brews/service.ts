@@ -18,13 +18,10 @@ import {
   type BrewStageAction,
   type BrewStageState,
   type BrewSummary,
-  type DecisionChoice,
   type ReadingPhoto,
   type StartBrewInput,
   type UpdateBrewInput,
 } from '@shared/schemas/brews';
-import type { EquipmentProfile, InstrumentSnapshot } from '@shared/schemas/instruments';
-import type { RecipeTargets } from '@shared/schemas/recipes';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
 import { checkShareTargets, diffShares } from '../lib/sharing';
 import type { DbOrTx } from '../db/client';
@@ -94,29 +91,30 @@ export function toReading(row: BrewReadingRow, photos: ReadingPhoto[] = []): Bre
     kind: row.kind,
     quantity: readingQuantity[row.kind],
     instrumentId: row.instrumentId,
-    instrument: row.instrumentSnapshot as InstrumentSnapshot | null,
+    instrument: row.instrumentSnapshot,
     raw: row.raw,
     corrected: row.correctedValue,
-    correction: row.correction as BrewReading['correction'],
+    correction: row.correction,
     warnings: row.warnings,
     volumeL: row.volumeL,
     takenAt: row.takenAt.toISOString(),
     note: row.note,
     recomputedAt: iso(row.recomputedAt),
-    recomputedFrom: row.recomputedFrom as BrewReading['recomputedFrom'],
+    recomputedFrom: row.recomputedFrom,
     photos,
   };
 }
 
 export function toDecision(row: BrewDecisionRow): BrewDecision {
+  // The option types (shared/brewmath) are interfaces, so `chosen` is narrowed here, where it is read.
   const stored = row.result as { chosen?: BrewDecision['chosen'] } & Record<string, unknown>;
   const { chosen = null, ...result } = stored;
   return {
     id: row.id,
     brewId: row.brewId,
-    input: row.input as Record<string, unknown>,
+    input: row.input,
     result,
-    choice: row.choice as DecisionChoice,
+    choice: row.choice,
     chosen,
     note: row.note,
     decidedAt: row.decidedAt.toISOString(),
@@ -130,7 +128,7 @@ export function toNote(row: BrewNoteRow): BrewNote {
     kind: row.kind,
     stage: row.stage,
     body: row.body,
-    details: row.details as Record<string, unknown> | null,
+    details: row.details,
     authorId: row.authorId,
     createdAt: row.createdAt.toISOString(),
   };
@@ -138,7 +136,7 @@ export function toNote(row: BrewNoteRow): BrewNote {
 
 function toSummary(actor: Actor, stored: StoredBrew, og: number | null): BrewSummary {
   const { row } = stored;
-  const targets = row.targetsSnapshot as RecipeTargets;
+  const targets = row.targetsSnapshot;
   return {
     id: row.id,
     name: row.name,
@@ -191,8 +189,8 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
   }
   const readings = readingRows.map((r) => toReading(r, photosByReading.get(r.id)));
   const decisions = decisionRows.map(toDecision);
-  const targets = stored.row.targetsSnapshot as RecipeTargets;
-  const equipment = stored.row.equipmentSnapshot as EquipmentProfile;
+  const targets = stored.row.targetsSnapshot;
+  const equipment = stored.row.equipmentSnapshot;
   const stages: BrewStageState[] = brewStages.map((stage) => {
     const s = stageRows.find((r) => r.stage === stage);
     return { stage, startedAt: iso(s?.startedAt ?? null), completedAt: iso(s?.completedAt ?? null), skippedAt: iso(s?.skippedAt ?? null) };

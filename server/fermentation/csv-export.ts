@@ -27,9 +27,9 @@ export async function exportCsv(db: Db, actor: Actor, brewId: number): Promise<{
   const rows = await readingRows(db, brewId);
   const lines: CsvCell[][] = [[...CSV_COLUMNS, ...CSV_EXPORT_EXTRA_COLUMNS]];
   for (const r of rows) {
-    const raw = r.raw as FermentationRaw;
+    const raw = r.raw;
     const { value, unit, sample, original } = valueAndUnit(raw);
-    const snapshot = r.instrumentSnapshot as { name?: string };
+    const snapshot: { name?: string } = r.instrumentSnapshot;
     lines.push(
       [
         r.takenAt.toISOString(),

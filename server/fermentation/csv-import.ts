@@ -100,7 +100,7 @@ interface PreparedRow {
   raw: FermentationRaw;
   snapshot: InstrumentSnapshot;
   corrected: number;
-  correction: unknown;
+  correction: Record<string, unknown>;
   warnings: string[];
   estimate: boolean;
   key: string;

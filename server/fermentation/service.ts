@@ -96,10 +96,10 @@ export function toFermentationReading(row: FermentationReadingRow, pitchedAt: Da
     kind: row.kind,
     method: row.method,
     instrumentId: row.instrumentId,
-    instrument: row.instrumentSnapshot as InstrumentSnapshot,
-    raw: row.raw as FermentationRaw,
+    instrument: row.instrumentSnapshot,
+    raw: row.raw,
     corrected: row.correctedValue,
-    correction: row.correction as Record<string, unknown> | null,
+    correction: row.correction,
     estimate: row.estimate,
     warnings: row.warnings,
     takenAt: iso(row.takenAt),
@@ -158,7 +158,7 @@ export async function setRemindersEnabled(db: Db, actor: Actor, enabled: boolean
 }
 
 function targetsOf(stored: StoredBrew): Partial<RecipeTargets> {
-  return (stored.row.targetsSnapshot ?? {}) as Partial<RecipeTargets>;
+  return stored.row.targetsSnapshot ?? {};
 }
 
 function brewOf(actor: Actor, stored: StoredBrew, og: number | null): FermentationBrew {
