@@ -1,5 +1,7 @@
 // Lint rules that keep the architecture honest: shared imports neither side, features never
 // import each other, the server never imports the client.
+import { readdirSync } from 'node:fs';
+import { URL } from 'node:url';
 import js from '@eslint/js';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import importX from 'eslint-plugin-import-x';
@@ -7,7 +9,12 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
-const featureZones = ['auth', 'recipes', 'instruments', 'brews', 'late-boil', 'fermentation', 'clubs', 'admin'].map((feature) => ({
+// Every folder in src/features is a feature, so a new one is fenced in without editing this file.
+const features = readdirSync(new URL('./src/features', import.meta.url), { withFileTypes: true })
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
+
+const featureZones = features.map((feature) => ({
   target: `./src/features/${feature}`,
   from: './src/features',
   except: [`./${feature}`],
@@ -45,5 +52,31 @@ export default tseslint.config(
   {
     files: ['src/**/*.{ts,tsx}'],
     rules: reactHooks.configs.recommended.rules,
+  },
+  {
+    // One way to do each thing: CSV goes through server/lib/csv.ts (one reader, one writer, one formula guard).
+    files: ['**/*.{ts,tsx}'],
+    ignores: ['server/lib/csv.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
+        },
+      ],
+    },
+  },
+  {
+    // One way to count days: spans use DAY_MS, calendar days localDay/utcDay (shared/dates.ts, decision 0011);
+    // one schema for an id in a URL (idSchema in shared/schemas/common.ts).
+    files: ['**/*.{ts,tsx}'],
+    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', '**/*.test.ts', '**/*.test.tsx'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
+        { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+      ],
+    },
   },
 );

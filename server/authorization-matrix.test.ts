@@ -38,6 +38,7 @@ import { addReading as addFermentationReading, recordPackaging } from './ferment
 import { createInstrument } from './instruments/service';
 import { createRecipe, setRecipeSharing } from './recipes/service';
 import { lateBoilInput } from './reviews/test-scene';
+import { DAY_MS } from '@shared/dates';
 
 type Who = 'owner' | 'otherBrewer' | 'clubMember' | 'mentor' | 'otherMentor' | 'organiser' | 'admin' | 'anonymous';
 const people: Who[] = ['owner', 'otherBrewer', 'clubMember', 'mentor', 'otherMentor', 'organiser', 'admin', 'anonymous'];
@@ -88,7 +89,6 @@ function tinyPng(): Buffer {
   ]);
 }
 
-const DAY_MS = 86_400_000;
 let h: TestHarness;
 let scene: Awaited<ReturnType<typeof makeMatrixScene>>;
 let counter = 0;

@@ -15,6 +15,7 @@ import { MASH_PH_TARGET, mashPhVerdict } from './brewmath/mash';
 import { formatGravity, formatTemperature, formatVolume, type GravityUnit, type UnitSystem } from './brewmath/format';
 import type { InstrumentSnapshot } from './schemas/instruments';
 import type { BrewDeviation, ReadingKind } from './schemas/brews';
+import { DAY_MS } from './dates';
 
 export const MASH_TEMP_TOLERANCE_C = 1;
 export const OG_TOLERANCE_POINTS = 2;
@@ -47,7 +48,6 @@ export interface DeviationDecision {
   decidedAt: string;
 }
 
-const DAY_MS = 86_400_000;
 const points = (sg: number) => (sg - 1) * 1000;
 // Readings are stored unrounded; compare at the resolution the instruments show, so a 66.0 °C
 // reading against a 65 °C step is "within 1 °C", not 1.0000000001 away.

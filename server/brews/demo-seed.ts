@@ -13,6 +13,7 @@ import { addDecision } from './decisions';
 import { addReading } from './readings';
 import { addNote, setBrewSharing, setStage, startBrew } from './service';
 import { decisionInputSchema, readingInputSchema, type ReadingInput } from '@shared/schemas/brews';
+import { DAY_MS } from '@shared/dates';
 
 /** The clubs helper's mentor comment hangs off this brew day: keep its name. */
 export const DEMO_BREW_NAME = 'Hollow Oak Harvest Pale, first batch';
@@ -28,7 +29,7 @@ registerDemoSeed(async (db, people, club) => {
   const owned = await db.select({ id: instruments.id, kind: instruments.kind }).from(instruments).where(eq(instruments.ownerId, priya.id));
   const instrument = (kind: InstrumentKind) => owned.find((i) => i.kind === kind)?.id ?? null;
 
-  const day = new Date(Date.now() - DAYS_AGO * 86_400_000);
+  const day = new Date(Date.now() - DAYS_AGO * DAY_MS);
   const brewedOn = day.toISOString().slice(0, 10);
   const at = (hhmm: string) => `${brewedOn}T${hhmm}:00.000Z`;
   // A brew day that happened: every time is of that day, not of when the seed ran.

@@ -153,7 +153,7 @@ export async function recomputeReading(db: Db, actor: Actor, brewId: number, rea
     const message = 'This reading used common-practice defaults, not an instrument of yours, so there is no newer calibration to apply.';
     throw new BadRequest(message, { instrumentId: message });
   }
-  const oldSnapshot = row.instrumentSnapshot as InstrumentSnapshot;
+  const oldSnapshot = row.instrumentSnapshot;
   const snapshot = await snapshotFor(db, actor, oldSnapshot.kind, row.instrumentId, true);
   const { corrected, correction, warnings } = correct(snapshot, row.raw, row.takenAt);
   const now = new Date();

@@ -19,13 +19,10 @@ import {
   type BrewStageAction,
   type BrewStageState,
   type BrewSummary,
-  type DecisionChoice,
   type ReadingPhoto,
   type StartBrewInput,
   type UpdateBrewInput,
 } from '@shared/schemas/brews';
-import type { EquipmentProfile, InstrumentSnapshot } from '@shared/schemas/instruments';
-import type { RecipeTargets } from '@shared/schemas/recipes';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
 import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
 import type { DbOrTx } from '../db/client';
@@ -47,6 +44,7 @@ import { lockBrewRow } from '../db/locks';
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
 import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
+import { utcDay } from '@shared/dates';
 
 export interface StoredBrew {
   row: BrewRow;
@@ -95,29 +93,30 @@ export function toReading(row: BrewReadingRow, photos: ReadingPhoto[] = []): Bre
     kind: row.kind,
     quantity: readingQuantity[row.kind],
     instrumentId: row.instrumentId,
-    instrument: row.instrumentSnapshot as InstrumentSnapshot | null,
+    instrument: row.instrumentSnapshot,
     raw: row.raw,
     corrected: row.correctedValue,
-    correction: row.correction as BrewReading['correction'],
+    correction: row.correction,
     warnings: row.warnings,
     volumeL: row.volumeL,
     takenAt: row.takenAt.toISOString(),
     note: row.note,
     recomputedAt: iso(row.recomputedAt),
-    recomputedFrom: row.recomputedFrom as BrewReading['recomputedFrom'],
+    recomputedFrom: row.recomputedFrom,
     photos,
   };
 }
 
 export function toDecision(row: BrewDecisionRow): BrewDecision {
+  // The option types (shared/brewmath) are interfaces, so `chosen` is narrowed here, where it is read.
   const stored = row.result as { chosen?: BrewDecision['chosen'] } & Record<string, unknown>;
   const { chosen = null, ...result } = stored;
   return {
     id: row.id,
     brewId: row.brewId,
-    input: row.input as Record<string, unknown>,
+    input: row.input,
     result,
-    choice: row.choice as DecisionChoice,
+    choice: row.choice,
     chosen,
     note: row.note,
     decidedAt: row.decidedAt.toISOString(),
@@ -131,7 +130,7 @@ export function toNote(row: BrewNoteRow): BrewNote {
     kind: row.kind,
     stage: row.stage,
     body: row.body,
-    details: row.details as Record<string, unknown> | null,
+    details: row.details,
     authorId: row.authorId,
     createdAt: row.createdAt.toISOString(),
   };
@@ -139,7 +138,7 @@ export function toNote(row: BrewNoteRow): BrewNote {
 
 function toSummary(actor: Actor, stored: StoredBrew, og: number | null): BrewSummary {
   const { row } = stored;
-  const targets = row.targetsSnapshot as RecipeTargets;
+  const targets = row.targetsSnapshot;
   return {
     id: row.id,
     name: row.name,
@@ -201,8 +200,8 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
   }
   const readings = readingRows.map((r) => toReading(r, photosByReading.get(r.id)));
   const decisions = decisionRows.map(toDecision);
-  const targets = stored.row.targetsSnapshot as RecipeTargets;
-  const equipment = stored.row.equipmentSnapshot as EquipmentProfile;
+  const targets = stored.row.targetsSnapshot;
+  const equipment = stored.row.equipmentSnapshot;
   const stages: BrewStageState[] = brewStages.map((stage) => {
     const s = stageRows.find((r) => r.stage === stage);
     return { stage, startedAt: iso(s?.startedAt ?? null), completedAt: iso(s?.completedAt ?? null), skippedAt: iso(s?.skippedAt ?? null) };
@@ -276,9 +275,8 @@ export async function listBrews(db: DbOrTx, actor: Actor, scope: 'mine' | 'share
   );
 }
 
-function todayIso() {
-  return new Date().toISOString().slice(0, 10);
-}
+/** The client sends the brewer's own day; without one, the UTC day (decision 0011). */
+const todayIso = () => utcDay();
 
 /** Starts a brew day from a recipe the brewer may read: snapshots its targets and the equipment profile. */
 export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput, now = new Date()): Promise<number> {

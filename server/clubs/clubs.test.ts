@@ -1,6 +1,8 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import request from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
+import type { EquipmentProfile } from '@shared/schemas/instruments';
+import type { RecipeTargets } from '@shared/schemas/recipes';
 import { brewClubShares, brews, clubInvitations, clubMemberships, recipeClubShares, recipes } from '../db/schema';
 import { makeUser } from '../db/factories';
 import { hashLinkToken } from '../lib/tokens';
@@ -278,7 +280,7 @@ describe('roles, removal and leaving', () => {
     const recipe = { name: 'Leaver Amber', notes: '', batchVolumeL: 20, preBoilVolumeL: 26, postBoilVolumeL: 22, boilMinutes: 60, boilOffLPerHour: 4, efficiency: 0.72, targetOg: 1.05, targetFg: 1.012, fermentationTempMinC: 18, fermentationTempMaxC: 20 };
     const [{ id: mine }] = await db.insert(recipes).values({ ...recipe, ownerId: scene.member.id }).$returningId();
     const [{ id: theirs }] = await db.insert(recipes).values({ ...recipe, ownerId: scene.mentor.id }).$returningId();
-    const [{ id: brew }] = await db.insert(brews).values({ ownerId: scene.member.id, name: 'Leaver Amber, day 1', brewedOn: '2026-03-01', targetsSnapshot: {}, equipmentSnapshot: {}, notes: '' }).$returningId();
+    const [{ id: brew }] = await db.insert(brews).values({ ownerId: scene.member.id, name: 'Leaver Amber, day 1', brewedOn: '2026-03-01', targetsSnapshot: {} as RecipeTargets, equipmentSnapshot: {} as EquipmentProfile, notes: '' }).$returningId();
     await db.insert(recipeClubShares).values([
       { recipeId: mine, clubId: scene.club.id },
       { recipeId: mine, clubId: scene.otherClub.id },

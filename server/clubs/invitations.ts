@@ -17,6 +17,7 @@ import { hashLinkToken, newLinkToken } from '../lib/tokens';
 import { sendAfterCommit } from '../mail/mailer';
 import { invitationMail } from '../mail/templates';
 import { lockClub, pendingInvitationsTo } from './service';
+import { DAY_MS, utcDayInWords } from '@shared/dates';
 
 export const INVITATION_DAYS = 7;
 
@@ -35,7 +36,7 @@ function toPending(row: ClubInvitation, inviterName: string | null): PendingInvi
 export async function inviteToClub(ctx: AppContext, actor: SessionUser, clubId: number, input: { email: string; role: ClubRole }): Promise<InvitationSent> {
   requireClubAccess(actor, 'invite', clubId);
   const { token, hash } = newLinkToken();
-  const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 60 * 60 * 1000);
+  const expiresAt = new Date(Date.now() + INVITATION_DAYS * DAY_MS);
   const { club, row } = await ctx.db.transaction(async (tx) => {
     const club = await lockClub(tx, clubId);
     const [member] = await tx
@@ -93,17 +94,13 @@ export async function revokeInvitation(db: Db, actor: Actor, clubId: number, inv
   });
 }
 
-function formatDay(date: Date) {
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-}
-
 /** Refuses a link that can no longer be used, saying why. */
 function assertUsable(row: ClubInvitation, now = new Date()) {
   if (row.acceptedAt) throw new Gone('This invitation has already been used. If that was you, sign in and open Clubs.');
   if (row.revokedReason === 'replaced') throw new Gone('This invitation was replaced by a newer one: use the link in the most recent e-mail.');
   if (row.revokedAt) throw new Gone('This invitation was withdrawn by the club’s organiser.');
   if (row.expiresAt.getTime() <= now.getTime()) {
-    throw new Gone(`This invitation expired on ${formatDay(row.expiresAt)}. Ask the club’s organiser to invite you again.`);
+    throw new Gone(`This invitation expired on ${utcDayInWords(row.expiresAt)}. Ask the club’s organiser to invite you again.`);
   }
 }
 

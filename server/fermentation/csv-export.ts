@@ -3,17 +3,13 @@
  * then three for people (corrected value, estimate, source) that the import ignores. Values are
  * written at the precision the duplicate check uses, so importing an export adds nothing.
  */
-import { CSV_COLUMNS, CSV_EXPORT_EXTRA_COLUMNS, roundFor, toCsvLine } from '@shared/fermentation';
+import { CSV_COLUMNS, CSV_EXPORT_EXTRA_COLUMNS, roundFor } from '@shared/fermentation';
 import type { FermentationRaw } from '@shared/schemas/fermentation';
 import type { Actor } from '../auth/permissions';
 import { loadBrewForActor } from '../brews/service';
 import type { Db } from '../db/client';
+import { formulaSafe, writeCsv, type CsvCell } from '../lib/csv';
 import { readingRows } from './service';
-
-/** A spreadsheet would run text starting with = + - @ as a formula; an apostrophe stops that. */
-function safeText(text: string) {
-  return /^[=+\-@]/.test(text) ? `'${text}` : text;
-}
 
 function valueAndUnit(raw: FermentationRaw): { value: string; unit: string; sample: string; original: string } {
   switch (raw.method) {
@@ -29,13 +25,13 @@ function valueAndUnit(raw: FermentationRaw): { value: string; unit: string; samp
 export async function exportCsv(db: Db, actor: Actor, brewId: number): Promise<{ filename: string; body: string }> {
   const stored = await loadBrewForActor(db, actor, brewId, 'read');
   const rows = await readingRows(db, brewId);
-  const lines = [toCsvLine([...CSV_COLUMNS, ...CSV_EXPORT_EXTRA_COLUMNS])];
+  const lines: CsvCell[][] = [[...CSV_COLUMNS, ...CSV_EXPORT_EXTRA_COLUMNS]];
   for (const r of rows) {
-    const raw = r.raw as FermentationRaw;
+    const raw = r.raw;
     const { value, unit, sample, original } = valueAndUnit(raw);
-    const snapshot = r.instrumentSnapshot as { name?: string };
+    const snapshot: { name?: string } = r.instrumentSnapshot;
     lines.push(
-      toCsvLine([
+      [
         r.takenAt.toISOString(),
         r.kind,
         value,
@@ -43,14 +39,14 @@ export async function exportCsv(db: Db, actor: Actor, brewId: number): Promise<{
         sample,
         original,
         // The common-practice stand-ins have no saved instrument to name.
-        r.instrumentId === null ? '' : safeText(snapshot.name ?? ''),
-        safeText(r.note),
+        r.instrumentId === null ? '' : formulaSafe(snapshot.name ?? ''),
+        formulaSafe(r.note),
         r.kind === 'gravity' ? r.correctedValue.toFixed(4) : r.correctedValue.toFixed(2),
         r.estimate ? 'yes' : 'no',
         r.source,
-      ]),
+      ],
     );
   }
   const slug = stored.row.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'brew';
-  return { filename: `${slug}-fermentation.csv`, body: `${lines.join('\r\n')}\r\n` };
+  return { filename: `${slug}-fermentation.csv`, body: writeCsv(lines) };
 }

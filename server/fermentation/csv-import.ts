@@ -6,17 +6,7 @@
  * twice in the file) are skipped, so importing the same file again adds nothing.
  */
 import { BrewMathError, sgToBrix } from '@shared/brewmath';
-import {
-  CsvParseError,
-  CsvTooManyRowsError,
-  detectDelimiter,
-  parseCsv,
-  readRow,
-  stripBom,
-  suggestMapping,
-  type CsvRecord,
-  type ImportedRow,
-} from '@shared/fermentation';
+import { readRow, suggestMapping, type ImportedRow } from '@shared/fermentation';
 import { defaultSnapshot } from '@shared/instruments';
 import {
   CSV_MAX_ROW_ERRORS,
@@ -40,6 +30,7 @@ import { fermentationReadings } from '../db/schema';
 import { listInstruments } from '../instruments/service';
 import { fieldErrors } from '../lib/handle';
 import { BadRequest, Conflict, HttpError } from '../lib/errors';
+import { CsvParseError, CsvTooManyRowsError, detectDelimiter, readCsv, stripBom, type CsvRecord } from '../lib/csv';
 import { scheduleAfterReadings } from './reminders';
 import { assembleLog, correctRaw, dedupeKey, existingKeys, expectedFgOf, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
@@ -83,7 +74,7 @@ export function decodeCsv(buffer: Buffer): string {
 function readRecords(text: string): CsvRecord[] {
   try {
     // One more than the limit, for the header.
-    return parseCsv(text, { delimiter: detectDelimiter(text), maxRecords: CSV_MAX_ROWS + 1 });
+    return readCsv(text, { delimiter: detectDelimiter(text), maxRecords: CSV_MAX_ROWS + 1 });
   } catch (error) {
     if (error instanceof CsvTooManyRowsError) throw new TooManyRows(`The file has more than ${CSV_MAX_ROWS.toLocaleString('en-GB')} rows. Split it into smaller files and import them one after the other.`);
     if (error instanceof CsvParseError) throw new BadRequest(`The file could not be read as CSV. ${error.message}`, { file: error.message });
@@ -112,7 +103,7 @@ interface PreparedRow {
   raw: FermentationRaw;
   snapshot: InstrumentSnapshot;
   corrected: number;
-  correction: unknown;
+  correction: Record<string, unknown>;
   warnings: string[];
   estimate: boolean;
   key: string;

@@ -11,6 +11,7 @@ import { DEMO_BREW_NAME } from '../brews/demo-seed';
 import { registerDemoSeed } from '../db/seed';
 import { brews, instruments } from '../db/schema';
 import { addReading, measuredOg } from './service';
+import { DAY_MS } from '@shared/dates';
 
 registerDemoSeed(async (db, people, club) => {
   const priya = { id: people.brewer.id, siteRole: 'user' as const, memberships: [{ clubId: club.id, role: 'member' as const }] };
@@ -22,7 +23,7 @@ registerDemoSeed(async (db, people, club) => {
   const owned = await db.select({ id: instruments.id, kind: instruments.kind, wcf: instruments.wcf }).from(instruments).where(eq(instruments.ownerId, priya.id));
   const instrument = (kind: string) => owned.find((i) => i.kind === kind) ?? null;
   const pitched = brew.pitchedAt.getTime();
-  const at = (days: number) => new Date(pitched + days * 86_400_000).toISOString();
+  const at = (days: number) => new Date(pitched + days * DAY_MS).toISOString();
   const now = new Date();
   const add = async (input: FermentationReadingInput) => {
     if (Date.parse(input.takenAt!) > now.getTime()) return;

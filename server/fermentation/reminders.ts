@@ -15,8 +15,8 @@ import type { AppContext } from '../context';
 import type { DbOrTx } from '../db/client';
 import { brews, fermentationReadings, fermentationReminders, fermentationSettings, packagingRecords, users } from '../db/schema';
 import { reminderMail } from './mail';
+import { DAY_MS } from '@shared/dates';
 
-const DAY_MS = 86_400_000;
 /** How long a claim holds before another instance may take the row over (a crashed sender). */
 const CLAIM_MS = 5 * 60_000;
 /** A reminder this late is no longer useful: it is skipped, not sent. */

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
+import { idSchema } from '@shared/schemas/common';
 import { CSV_MAX_BYTES, fermentationReadingInputSchema, fermentationSettingsSchema, packagingInputSchema } from '@shared/schemas/fermentation';
 import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
@@ -10,7 +11,7 @@ import { exportCsv } from './csv-export';
 import { importReadings, parseMapping, previewImport } from './csv-import';
 import { addReading, deletePackaging, deleteReading, getLog, recordPackaging, remindersEnabledFor, setRemindersEnabled } from './service';
 
-const idNum = z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' });
+const idNum = idSchema;
 const brewParams = z.object({ brewId: idNum });
 const readingParams = z.object({ brewId: idNum, readingId: idNum });
 const uploadBody = z.object({ mapping: z.string().max(20_000).optional() });

@@ -46,8 +46,8 @@ import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 import { scheduleAfterReadings } from './reminders';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
+import { DAY_MS } from '@shared/dates';
 
-const DAY_MS = 86_400_000;
 const iso = (d: Date) => d.toISOString();
 const when = (d: Date) => `${d.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
 
@@ -91,10 +91,10 @@ export function toFermentationReading(row: FermentationReadingRow, pitchedAt: Da
     kind: row.kind,
     method: row.method,
     instrumentId: row.instrumentId,
-    instrument: row.instrumentSnapshot as InstrumentSnapshot,
-    raw: row.raw as FermentationRaw,
+    instrument: row.instrumentSnapshot,
+    raw: row.raw,
     corrected: row.correctedValue,
-    correction: row.correction as Record<string, unknown> | null,
+    correction: row.correction,
     estimate: row.estimate,
     warnings: row.warnings,
     takenAt: iso(row.takenAt),
@@ -164,7 +164,7 @@ export async function setRemindersEnabled(db: Db, actor: Actor, enabled: boolean
 }
 
 function targetsOf(stored: StoredBrew): Partial<RecipeTargets> {
-  return (stored.row.targetsSnapshot ?? {}) as Partial<RecipeTargets>;
+  return stored.row.targetsSnapshot ?? {};
 }
 
 function brewOf(actor: Actor, stored: StoredBrew, { og, volumeL }: { og: number | null; volumeL: number | null }): FermentationBrew {

@@ -4,8 +4,9 @@
  */
 import type { TestHarness } from '../../tests/support/api';
 import { makeScene, startBrewDay, type Scene } from '../brews/test-scene';
+import { DAY_MS } from '@shared/dates';
 
-export const DAY_MS = 86_400_000;
+export { DAY_MS };
 
 export interface FermentationScene extends Scene {
   brewId: number;

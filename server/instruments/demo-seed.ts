@@ -5,9 +5,10 @@
 import { registerDemoSeed } from '../db/seed';
 import { createEquipment } from '../equipment/service';
 import { calibrateInstrument, createInstrument } from './service';
+import { DAY_MS, utcDay } from '@shared/dates';
 
 const brewerActor = (id: number) => ({ id, siteRole: 'user' as const, memberships: [] });
-const daysAgoIso = (days: number) => new Date(Date.now() - days * 86_400_000).toISOString().slice(0, 10);
+const daysAgoIso = (days: number) => utcDay(new Date(Date.now() - days * DAY_MS));
 
 registerDemoSeed(async (db, people) => {
   // Priya: a full set, calibrated.

@@ -28,10 +28,11 @@ import type { DbOrTx, Tx } from '../db/client';
 import { instrumentCalibrations, instruments, type InstrumentCalibrationRow, type InstrumentRow } from '../db/schema';
 import { rememberElevation } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
+import { utcDay } from '@shared/dates';
 
 type InstrumentValues = Partial<Omit<InstrumentRow, 'id' | 'ownerId' | 'kind' | 'createdAt' | 'updatedAt'>>;
 
-const todayIso = (now = new Date()) => now.toISOString().slice(0, 10);
+const todayIso = (now = new Date()) => utcDay(now);
 const iso = (d: Date | string) => (d instanceof Date ? d.toISOString() : new Date(d).toISOString());
 
 /** The calibration a reading taken now would keep. */

@@ -3,6 +3,7 @@
  * what the tests read) and a small HTML body with the same words. Anything a user typed is
  * escaped before it reaches the HTML.
  */
+import { utcDayInWords } from '@shared/dates';
 import type { OutgoingMail } from './mailer';
 
 export type MailContent = Omit<OutgoingMail, 'to'>;
@@ -22,19 +23,15 @@ export function excerpt(text: string, maxChars = 280) {
   return `${(lastSpace > maxChars * 0.6 ? cut.slice(0, lastSpace) : cut).trimEnd()}…`;
 }
 
-function formatDate(date: Date) {
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-}
-
-interface Block {
+export interface MailBlock {
   paragraphs: string[];
   action: { label: string; url: string };
   quote?: string;
   after?: string[];
 }
 
-/** One layout for all mail: paragraphs, an optional quote, one button (and its link spelled out). */
-function render(subject: string, block: Block): MailContent {
+/** The one layout for all mail: paragraphs, an optional quote, one button (and its link spelled out). */
+export function renderMail(subject: string, block: MailBlock): MailContent {
   const text = [
     ...block.paragraphs,
     ...(block.quote ? [block.quote.split('\n').map((l) => `> ${l}`).join('\n')] : []),
@@ -67,19 +64,19 @@ export function invitationMail(input: {
   expiresAt: Date;
 }): MailContent {
   const who = input.inviterName ?? 'An organiser';
-  return render(`${who} invites you to ${input.clubName} on Wortwise`, {
+  return renderMail(`${who} invites you to ${input.clubName} on Wortwise`, {
     paragraphs: [
       `${who} invites you to join ${input.clubName} on Wortwise as ${roleWords[input.role]}.`,
       'Wortwise keeps your recipes and brew-day readings, and lets you share a brew with your club so a mentor can look over it and comment.',
       'If you have no Wortwise account yet, the link lets you create one on the way in.',
     ],
     action: { label: 'Accept the invitation', url: input.url },
-    after: [`The link works once and expires on ${formatDate(input.expiresAt)}. If you were not expecting this, ignore it: nothing happens until the link is opened and accepted.`],
+    after: [`The link works once and expires on ${utcDayInWords(input.expiresAt)}. If you were not expecting this, ignore it: nothing happens until the link is opened and accepted.`],
   });
 }
 
 export function passwordResetMail(input: { displayName: string; url: string; validMinutes: number }): MailContent {
-  return render('Choose a new Wortwise password', {
+  return renderMail('Choose a new Wortwise password', {
     paragraphs: [`Hello ${input.displayName},`, 'Someone (we hope you) asked to choose a new password for your Wortwise account.'],
     action: { label: 'Choose a new password', url: input.url },
     after: [
@@ -97,7 +94,7 @@ export function mentorCommentNotice(input: {
   commentExcerpt: string;
   url: string;
 }): MailContent {
-  return render(`${input.mentorName} commented on ${input.brewName}`, {
+  return renderMail(`${input.mentorName} commented on ${input.brewName}`, {
     paragraphs: [`Hello ${input.brewerName},`, `${input.mentorName} left a comment on ${input.brewName}:`],
     quote: excerpt(input.commentExcerpt),
     action: { label: 'Read it in Wortwise', url: input.url },

@@ -20,6 +20,7 @@ import {
   type RecipeData,
   type RecipeFile,
 } from '@shared/schemas/recipes';
+import { formulaSafe, writeCsv } from '../lib/csv';
 import { fieldErrors } from '../lib/handle';
 import { BadRequest } from '../lib/errors';
 
@@ -44,11 +45,10 @@ export function fileSlug(name: string) {
 
 export const CSV_COLUMNS = ['section', 'position', 'field', 'value', 'unit'] as const;
 
-/** RFC 4180 quoting; text that a spreadsheet would run as a formula gets a leading apostrophe (OWASP, CSV injection). */
+/** Typed text goes through the one formula guard; numbers are written at full precision. */
 function cell(value: string | number | null | undefined, isText = false): string {
-  let text = value === null || value === undefined ? '' : typeof value === 'number' ? numberText(value) : value;
-  if (isText && /^[=+\-@\t\r]/.test(text)) text = `'${text}`;
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  const text = value === null || value === undefined ? '' : typeof value === 'number' ? numberText(value) : value;
+  return isText ? formulaSafe(text) : text;
 }
 
 /** Full precision, minus binary float noise (0.72 × 100 = 72.00000000000001). */
@@ -108,9 +108,9 @@ export function toRecipeCsv(data: RecipeData): string {
   data.mashSteps.forEach((m, i) => {
     rows.push(['mash_step', i + 1, 'temperature', m.tempC, '°C'], ['mash_step', i + 1, 'minutes', m.minutes, 'min']);
   });
-  const lines = [CSV_COLUMNS.join(','), ...rows.map(([section, position, field, value, unit, isText]) => [section, cell(position), field, cell(value, isText), unit].join(','))];
+  const lines = [[...CSV_COLUMNS], ...rows.map(([section, position, field, value, unit, isText]) => [section, cell(position), field, cell(value, isText), unit])];
   // A byte-order mark so spreadsheet programs read the file as UTF-8 (°C, accented names).
-  return '\ufeff' + lines.join('\r\n') + '\r\n';
+  return writeCsv(lines, { bom: true });
 }
 
 // ---------------------------------------------------------------------------------------------

@@ -15,10 +15,10 @@ import type { Db } from '../db/client';
 import { registerDemoSeed } from '../db/seed';
 import { brewClubShares, brewDecisions, brews, instruments, recipes } from '../db/schema';
 import { insertComment } from './service';
+import { DAY_MS } from '@shared/dates';
 
 /** Jonah's brew day waiting for a review: keep its name (the demo-seed test looks for it). */
 export const DEMO_WAITING_BREW_NAME = 'Back Porch Robust Porter, October';
-const DAY_MS = 86_400_000;
 
 registerDemoSeed(async (db, people, club) => {
   const ivo = { id: people.mentor.id, siteRole: 'user' as const, memberships: [{ clubId: club.id, role: 'mentor' as const }] };

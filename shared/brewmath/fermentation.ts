@@ -1,5 +1,6 @@
 import { BrewMathError } from './errors';
 import { requireRange, requireSg, show, showSg } from './validate';
+import { DAY_MS } from '../dates';
 
 /**
  * When is fermentation finished? Common practice, no source: time alone proves nothing; start
@@ -62,7 +63,6 @@ export const FG_TREND_LIMIT_SG_PER_DAY = 0.00025;
 /** Four points above the recipe's FG: common practice, no source. */
 export const FG_STUCK_MARGIN_SG = 0.004;
 
-const DAY_MS = 86_400_000;
 const EPS = 1e-9;
 
 function timeOf(at: Date | string, field: string, label: string): number {

@@ -2,7 +2,6 @@
 export { fermentationVerdict, type VerdictReading } from './verdict';
 export { temperatureSummary, SWING_FLAG_C, type TemperaturePoint } from './temperature';
 export { fermentationProgress, ABV_SIMPLE_LABEL, ABV_EXACT_LABEL, type ProgressInput } from './progress';
-export { parseCsv, detectDelimiter, stripBom, toCsvLine, CsvParseError, CsvTooManyRowsError, type CsvRecord, type CsvDelimiter } from './csv';
 export {
   CSV_COLUMNS,
   CSV_EXPORT_EXTRA_COLUMNS,

@@ -4,6 +4,7 @@
  * than almost anything else in fermentation (common practice, no source).
  */
 import type { TemperatureExcursion, TemperatureRange, TemperatureSummary } from '../schemas/fermentation';
+import { DAY_MS } from '../dates';
 
 export interface TemperaturePoint {
   id?: number | null;
@@ -14,7 +15,6 @@ export interface TemperaturePoint {
 
 /** A move of more than this within 24 hours is worth a look (common practice, no source). */
 export const SWING_FLAG_C = 3;
-const DAY_MS = 86_400_000;
 
 const ms = (at: Date | string) => (at instanceof Date ? at.getTime() : Date.parse(at));
 const iso = (t: number) => new Date(t).toISOString();

@@ -7,6 +7,7 @@
  */
 import { FG_FIRST_CHECK_DAY, FG_MIN_SPAN_DAYS, fgStability, type FgStability } from '../brewmath';
 import type { FermentationVerdict } from '../schemas/fermentation';
+import { DAY_MS } from '../dates';
 
 export interface VerdictReading {
   takenAt: Date | string;
@@ -22,8 +23,6 @@ export interface VerdictOptions {
   /** Where the recipe should finish (see expectedFinalGravity); null skips the stuck check. */
   expectedFgSg?: number | null;
 }
-
-const DAY_MS = 86_400_000;
 
 const ms = (at: Date | string) => (at instanceof Date ? at.getTime() : Date.parse(at));
 

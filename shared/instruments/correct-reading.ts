@@ -19,6 +19,7 @@ import {
   type RefractometerSnapshot,
   type ThermometerSnapshot,
 } from '../schemas/instruments';
+import { DAY_MS } from '../dates';
 
 export interface HydrometerRaw {
   /** As read at the bottom of the meniscus. */
@@ -179,8 +180,6 @@ function correctThermometerReading(snapshot: ThermometerSnapshot, raw: Thermomet
   const scale = snapshot.scale ?? 1;
   return { corrected: (tempC - offsetC) * scale, correction: scale === 1 ? { kind: 'offset', offsetC } : { kind: 'offset', offsetC, scale }, warnings };
 }
-
-const DAY_MS = 86_400_000;
 
 export interface PhCalibrationStatus {
   calibratedOn: string | null;

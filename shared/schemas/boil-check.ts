@@ -7,7 +7,7 @@
  * same message reaches brewers of either preference.
  */
 import { z } from 'zod';
-import { showF, showGal } from './fields';
+import { checkedNumber, showF, showGal } from './fields';
 import { BrewMathError, BRIX_MAX, BRIX_MIN, EXTRACT_KINDS, SG_MAX, SG_MIN, WCF_MAX, WCF_MIN, type ExtractKind } from '../brewmath';
 import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../brewmath/extract';
 import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckInput } from '../boil-check';
@@ -30,52 +30,42 @@ const gal = showGal;
 const f = showF;
 const sg3 = (sg: number) => sg.toFixed(3);
 
-/** A number with a brewer's message for missing, not-a-number and out-of-range input. */
-function number(what: string, label: string, inRange: (v: number) => boolean, rangeMessage: (v: number) => string) {
-  return z
-    .number({
-      error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${what}.` : `${label} must be a number.`),
-    })
-    .refine((v) => Number.isFinite(v), { error: `${label} must be a number.`, abort: true })
-    .refine(inRange, { error: (issue) => rangeMessage(issue.input as number), abort: true });
-}
-
 const volume = (what: string, label: string) =>
-  number(what, label, (v) => v > 0 && v <= BOIL_CHECK_LIMITS.volumeL, (v) =>
+  checkedNumber(what, label, (v) => v > 0 && v <= BOIL_CHECK_LIMITS.volumeL, (v) =>
     v <= 0
       ? `${label} must be more than 0.`
       : `${label} above ${BOIL_CHECK_LIMITS.volumeL} L (${gal(BOIL_CHECK_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
   );
 
 const wortGravity = (what: string, label: string) =>
-  number(what, label, (v) => v >= SG_MIN && v <= SG_MAX, (v) =>
+  checkedNumber(what, label, (v) => v >= SG_MIN && v <= SG_MAX, (v) =>
     `${label} ${sg3(v)} is outside ${sg3(SG_MIN)} to ${sg3(SG_MAX)}, the range wort can read. Check the reading.`,
   );
 
-export const brixSchema = number('the Brix reading', 'Brix', (v) => v >= BRIX_MIN && v <= BRIX_MAX, (v) =>
+const boilCheckBrixSchema = checkedNumber('the Brix reading', 'Brix', (v) => v >= BRIX_MIN && v <= BRIX_MAX, (v) =>
   `Brix ${v} is outside ${BRIX_MIN} to ${BRIX_MAX} °Bx, the scale of a brewing refractometer. Check the reading.`,
 );
-export const wcfSchema = number('the wort correction factor', 'Wort correction factor', (v) => v >= WCF_MIN && v <= WCF_MAX, (v) =>
+export const wcfSchema = checkedNumber('the wort correction factor', 'Wort correction factor', (v) => v >= WCF_MIN && v <= WCF_MAX, (v) =>
   `Wort correction factor ${v} is outside ${WCF_MIN} to ${WCF_MAX}; most refractometers need about 1.00 to 1.10.`,
 );
-export const minutesLeftSchema = number('the minutes left in the boil', 'Minutes left', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.minutesLeft, (v) =>
+export const minutesLeftSchema = checkedNumber('the minutes left in the boil', 'Minutes left', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.minutesLeft, (v) =>
   v < 0 ? 'Minutes left cannot be below 0.' : `Minutes left must be at most ${BOIL_CHECK_LIMITS.minutesLeft}.`,
 );
-export const boilOffSchema = number('the boil-off rate', 'Boil-off rate', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.boilOffLPerHour, (v) =>
+export const boilOffSchema = checkedNumber('the boil-off rate', 'Boil-off rate', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.boilOffLPerHour, (v) =>
   v < 0
     ? 'Boil-off rate cannot be below 0.'
     : `Boil-off rate above ${BOIL_CHECK_LIMITS.boilOffLPerHour} L/h (${gal(BOIL_CHECK_LIMITS.boilOffLPerHour)}/h) is more than Wortwise handles. Check the number.`,
 );
-export const targetSgSchema = number('the target OG', 'Target OG', (v) => v > 1 && v <= SG_MAX, (v) =>
+export const targetSgSchema = checkedNumber('the target OG', 'Target OG', (v) => v > 1 && v <= SG_MAX, (v) =>
   `Target OG ${sg3(v)} must be above 1.000 and at most ${sg3(SG_MAX)}.`,
 );
-const shrinkageSchema = number('the cooling shrinkage', 'Cooling shrinkage', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.coolingShrinkage, () =>
+const shrinkageSchema = checkedNumber('the cooling shrinkage', 'Cooling shrinkage', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.coolingShrinkage, () =>
   'Cooling shrinkage must be between 0 and 10 % (about 4 % is usual).',
 );
-const kettleLossSchema = number('the kettle losses', 'Kettle losses', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.kettleLossL, () =>
+const kettleLossSchema = checkedNumber('the kettle losses', 'Kettle losses', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.kettleLossL, () =>
   `Kettle losses (trub and dead space) must be between 0 and ${BOIL_CHECK_LIMITS.kettleLossL} L (0 and ${gal(BOIL_CHECK_LIMITS.kettleLossL)}).`,
 );
-const potentialSchema = number('the extract potential', 'Potential', (v) => v >= POTENTIAL_MIN_POINTS_L_PER_KG && v <= POTENTIAL_MAX_POINTS_L_PER_KG, () =>
+const potentialSchema = checkedNumber('the extract potential', 'Potential', (v) => v >= POTENTIAL_MIN_POINTS_L_PER_KG && v <= POTENTIAL_MAX_POINTS_L_PER_KG, () =>
   `Potential must be between ${POTENTIAL_MIN_POINTS_L_PER_KG} and ${POTENTIAL_MAX_POINTS_L_PER_KG} points·L/kg (about 6 to 54 points per lb per gallon); table sugar is about 384 (46).`,
 );
 export const potentialsSchema = z.object({
@@ -91,19 +81,19 @@ export const extractKindSchema = z.enum(EXTRACT_KINDS as [ExtractKind, ...Extrac
 
 export const refractometerReadingSchema = z.object({
   kind: z.literal('refractometer'),
-  brix: brixSchema,
+  brix: boilCheckBrixSchema,
   wcf: wcfSchema.optional(),
 });
 
 export const hydrometerReadingSchema = z.object({
   kind: z.literal('hydrometer'),
   sg: wortGravity('the hydrometer reading', 'Hydrometer reading'),
-  sampleTempC: number('the sample temperature', 'Sample temperature', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.hydrometerSampleMaxC, (v) =>
+  sampleTempC: checkedNumber('the sample temperature', 'Sample temperature', (v) => v >= 0 && v <= BOIL_CHECK_LIMITS.hydrometerSampleMaxC, (v) =>
     v < 0
       ? `Sample temperature must be between 0 and ${BOIL_CHECK_LIMITS.hydrometerSampleMaxC} °C (${f(0)} and ${f(BOIL_CHECK_LIMITS.hydrometerSampleMaxC)}).`
       : `A sample at ${v} °C (${f(v)}) is too hot to decide the boil on: the hydrometer correction assumes wort expands like water, which holds only near room temperature. Cool the sample below ${BOIL_CHECK_LIMITS.hydrometerSampleMaxC} °C (${f(BOIL_CHECK_LIMITS.hydrometerSampleMaxC)}), ideally to the hydrometer's calibration temperature, and read it again.`,
   ),
-  calibrationTempC: number('the calibration temperature', 'Calibration temperature', (v) => v >= 0 && v <= 40, () =>
+  calibrationTempC: checkedNumber('the calibration temperature', 'Calibration temperature', (v) => v >= 0 && v <= 40, () =>
     `Calibration temperature must be between 0 and 40 °C (${f(0)} and ${f(40)}); most hydrometers say ${DEFAULT_CALIBRATION_TEMP_C} °C or 60 °F on the scale.`,
   ).optional(),
 });

@@ -4,6 +4,7 @@
  * metric and US units, because the same message reaches brewers of either preference.
  */
 import { z } from 'zod';
+import { idSchema } from './common';
 import { num, ranged, showF, showGal } from './fields';
 import { boilCheckInputSchema } from './boil-check';
 import type { InstrumentKind, InstrumentSnapshot, EquipmentProfile } from './instruments';
@@ -271,7 +272,7 @@ export const stageActionSchema = z.object({
   at: pastInstantSchema('The time of the stage change'),
 });
 export const stageParamsSchema = z.object({
-  id: z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' }),
+  id: idSchema,
   stage: z.enum(brewStages, { error: 'Unknown stage: use mash, boil, chill or og.' }),
 });
 
@@ -286,7 +287,7 @@ export const brewNoteInputSchema = z.object({
 });
 export type BrewNoteInput = z.input<typeof brewNoteInputSchema>;
 
-const idNum = z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' });
+const idNum = idSchema;
 export const readingParamsSchema = z.object({ id: idNum, readingId: idNum });
 export const photoParamsSchema = z.object({ id: idNum, readingId: idNum, photoId: idNum });
 export const noteParamsSchema = z.object({ id: idNum, noteId: idNum });

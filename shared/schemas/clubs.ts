@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idSchema } from './common';
 import { clubRoleSchema, displayNameSchema, emailSchema, newPasswordSchema, type ClubRole } from './auth';
 
 export { clubRoleSchema, type ClubRole };
@@ -51,13 +52,13 @@ export const newcomerSchema = z.object({
 export type NewcomerInput = z.input<typeof newcomerSchema>;
 
 export const clubParamsSchema = z.object({
-  id: z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' }),
+  id: idSchema,
 });
 export const memberParamsSchema = clubParamsSchema.extend({
-  userId: z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' }),
+  userId: idSchema,
 });
 export const invitationParamsSchema = clubParamsSchema.extend({
-  invitationId: z.coerce.number({ error: 'Expected a numeric id.' }).int().positive({ error: 'Expected a numeric id.' }),
+  invitationId: idSchema,
 });
 /** Tokens are 32 random bytes in base64url (43 characters); anything else cannot match. */
 export const tokenParamsSchema = z.object({ token: z.string().min(1).max(200) });

@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import type { FermentationDeviation } from '../brew-deviations';
+import { idSchema } from './common';
 import type { BrewDetail, BrewDeviation } from './brews';
 import type { FermentationReading, FermentationVerdict, PackagingRecord, TemperatureSummary } from './fermentation';
 
@@ -20,7 +21,7 @@ export const COMMENT_MAX_CHARS = 4000;
 // ---------------------------------------------------------------------------------------------
 // Requests
 
-const idNum = z.coerce.number({ error: 'Expected a numeric id.' }).int({ error: 'Expected a numeric id.' }).positive({ error: 'Expected a numeric id.' });
+const idNum = idSchema;
 
 export const commentBodySchema = z
   .string({ error: 'Write the comment.' })

@@ -92,7 +92,7 @@ export const originalBrixSchema = ranged(
   'A brewing refractometer reads 0 to 40 °Bx. Check the original reading.',
 );
 
-export const sampleTempSchema = ranged(
+const fermentationSampleTempSchema = ranged(
   'the sample temperature',
   'Sample temperature',
   L.sampleTempC.min,
@@ -134,7 +134,7 @@ export const hydrometerReadingSchema = z.object({
   method: z.literal('hydrometer'),
   /** As read at the bottom of the meniscus, before temperature correction. */
   sg: fermentingSgSchema,
-  sampleTempC: sampleTempSchema,
+  sampleTempC: fermentationSampleTempSchema,
 });
 
 export const refractometerReadingSchema = z

@@ -14,10 +14,17 @@ export function num(what: string, label: string) {
   });
 }
 
-/** A finite number within [min, max], with one message for either side. */
-export function ranged(what: string, label: string, min: number, max: number, message: string) {
+/**
+ * The number builder for a brewer's field: "Enter …" when missing, "… must be a number" when not
+ * one, and `rangeMessage` (text, or built from the value) when `inRange` refuses it.
+ */
+export function checkedNumber(what: string, label: string, inRange: (v: number) => boolean, rangeMessage: string | ((v: number) => string)) {
   return num(what, label)
     .refine((v) => Number.isFinite(v), { error: `${label} must be a number.`, abort: true })
-    .refine((v) => v >= min, { error: message, abort: true })
-    .refine((v) => v <= max, { error: message, abort: true });
+    .refine(inRange, { error: typeof rangeMessage === 'string' ? rangeMessage : (issue) => rangeMessage(issue.input as number), abort: true });
+}
+
+/** A finite number within [min, max], with one message for either side. */
+export function ranged(what: string, label: string, min: number, max: number, message: string) {
+  return checkedNumber(what, label, (v) => v >= min && v <= max, message);
 }

@@ -1,9 +1,9 @@
 import type { BrowserContext } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { newPage, signInViaApi, useBrowser } from '../support/browser';
+import { DAY_MS } from '../../shared/dates';
 
 const b = useBrowser();
-const DAY_MS = 86_400_000;
 
 /** A brew day of the demo brewer's own recipe whose yeast went in some days ago. */
 async function pitchedBrew(context: BrowserContext, name: string, daysAgo: number) {

@@ -13,7 +13,9 @@ import {
   timestamp,
   varchar,
 } from 'drizzle-orm/mysql-core';
-import { brewStages, brewStatuses, photoMimeTypes, readingKinds } from '../../../shared/schemas/brews';
+import { brewStages, brewStatuses, photoMimeTypes, readingKinds, type BrewReading, type DecisionChoice } from '../../../shared/schemas/brews';
+import type { EquipmentProfile, InstrumentSnapshot } from '../../../shared/schemas/instruments';
+import type { RecipeTargets } from '../../../shared/schemas/recipes';
 import { clubs } from './clubs';
 import { recipes } from './recipes';
 import { users } from './users';
@@ -42,9 +44,9 @@ export const brews = mysqlTable(
     status: mysqlEnum('status', brewStatuses).notNull().default('brewing'),
     brewedOn: date('brewed_on', { mode: 'string' }).notNull(),
     /** RecipeTargets (shared/schemas/recipes.ts) at the start of the day. */
-    targetsSnapshot: jsonDoc<unknown>('targets_snapshot').notNull(),
+    targetsSnapshot: jsonDoc<RecipeTargets>('targets_snapshot').notNull(),
     /** EquipmentProfile (shared/schemas/instruments.ts) at the start of the day. */
-    equipmentSnapshot: jsonDoc<unknown>('equipment_snapshot').notNull(),
+    equipmentSnapshot: jsonDoc<EquipmentProfile>('equipment_snapshot').notNull(),
     /** Today's boil-off rate, when the brewer changed it from the equipment profile's. */
     boilOffLPerHour: double('boil_off_l_per_hour'),
     currentStage: mysqlEnum('current_stage', brewStages).notNull().default('mash'),
@@ -88,16 +90,16 @@ export const brewReadings = mysqlTable(
     kind: mysqlEnum('kind', readingKinds).notNull(),
     /** No foreign key on purpose: the snapshot stands for the instrument even after it is deleted. */
     instrumentId: int('instrument_id'),
-    instrumentSnapshot: jsonDoc<unknown>('instrument_snapshot').notNull(),
+    instrumentSnapshot: jsonDoc<InstrumentSnapshot>('instrument_snapshot').notNull(),
     raw: jsonDoc<Record<string, number | boolean | string>>('raw').notNull(),
     correctedValue: double('corrected_value').notNull(),
-    correction: jsonDoc<unknown>('correction'),
+    correction: jsonDoc<BrewReading['correction']>('correction'),
     warnings: jsonDoc<string[]>('warnings').notNull(),
     volumeL: double('volume_l'),
     takenAt: stamp('taken_at').notNull(),
     note: text('note').notNull(),
     recomputedAt: stamp('recomputed_at'),
-    recomputedFrom: jsonDoc<unknown>('recomputed_from'),
+    recomputedFrom: jsonDoc<BrewReading['recomputedFrom']>('recomputed_from'),
     createdAt: created('created_at'),
   },
   (t) => [index('brew_readings_brew_idx').on(t.brewId, t.takenAt)],
@@ -114,9 +116,10 @@ export const brewDecisions = mysqlTable(
     brewId: int('brew_id')
       .notNull()
       .references(() => brews.id, { onDelete: 'cascade' }),
-    input: jsonDoc<unknown>('input').notNull(),
-    result: jsonDoc<unknown>('result').notNull(),
-    choice: jsonDoc<unknown>('choice').notNull(),
+    input: jsonDoc<Record<string, unknown>>('input').notNull(),
+    /** The recomputed check, with the chosen option's figures under `chosen`. */
+    result: jsonDoc<Record<string, unknown>>('result').notNull(),
+    choice: jsonDoc<DecisionChoice>('choice').notNull(),
     note: text('note').notNull(),
     decidedAt: created('decided_at'),
   },
@@ -134,7 +137,7 @@ export const brewNotes = mysqlTable(
     kind: mysqlEnum('kind', ['note', 'recompute']).notNull().default('note'),
     stage: mysqlEnum('stage', brewStages),
     body: text('body').notNull(),
-    details: jsonDoc<unknown>('details'),
+    details: jsonDoc<Record<string, unknown>>('details'),
     authorId: int('author_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: created('created_at'),
   },

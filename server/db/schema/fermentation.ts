@@ -7,7 +7,9 @@ import {
   packagingSugars,
   readingSources,
   reminderKinds,
+  type FermentationRaw,
 } from '../../../shared/schemas/fermentation';
+import type { InstrumentSnapshot } from '../../../shared/schemas/instruments';
 import { brews } from './brews';
 import { users } from './users';
 import { jsonDoc } from './columns';
@@ -34,11 +36,11 @@ export const fermentationReadings = mysqlTable(
     method: mysqlEnum('method', fermentationMethods).notNull(),
     /** No foreign key on purpose: the snapshot stands for the instrument even after it is deleted. */
     instrumentId: int('instrument_id'),
-    instrumentSnapshot: jsonDoc<unknown>('instrument_snapshot').notNull(),
-    raw: jsonDoc<unknown>('raw').notNull(),
+    instrumentSnapshot: jsonDoc<InstrumentSnapshot>('instrument_snapshot').notNull(),
+    raw: jsonDoc<FermentationRaw>('raw').notNull(),
     /** SG or °C. */
     correctedValue: double('corrected_value').notNull(),
-    correction: jsonDoc<unknown>('correction'),
+    correction: jsonDoc<Record<string, unknown>>('correction'),
     warnings: jsonDoc<string[]>('warnings').notNull(),
     /** An alcohol-corrected refractometer estimate. */
     estimate: boolean('estimate').notNull().default(false),

@@ -5,6 +5,7 @@ import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useStartBrew } from '../api/start-brew';
 import { SaveNotice } from '@/components/ui/save-notice';
+import { localDay } from '@shared/dates';
 
 export interface RecipeChoice {
   id: number;
@@ -17,11 +18,6 @@ interface StartValues {
   recipeId: string;
   name: string;
   brewedOn: string;
-}
-
-function localToday() {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 }
 
 const toInput = (v: StartValues) => ({
@@ -38,7 +34,7 @@ export function StartBrewForm({ recipes, onStarted }: { recipes: readonly Recipe
   }
   return (
     <Formik<StartValues>
-      initialValues={{ recipeId: String(recipes[0].id), name: '', brewedOn: localToday() }}
+      initialValues={{ recipeId: String(recipes[0].id), name: '', brewedOn: localDay() }}
       validate={(v) => zodValidate(startBrewSchema)(toInput(v))}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);

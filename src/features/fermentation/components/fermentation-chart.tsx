@@ -2,8 +2,8 @@ import type { FermentationLog } from '@shared/schemas/fermentation';
 import { Chart } from '@/components/ui/chart';
 import { countOf } from '@/lib/plural';
 import { useUnits } from '@/lib/units';
+import { DAY_MS } from '@shared/dates';
 
-const DAY_MS = 86_400_000;
 const dayText = (d: number) => String(Number(d.toFixed(1)));
 
 /** Gravity (left) and fermenter temperature (right) over the days since pitching, with the target FG and the recipe's range marked. */

@@ -1,6 +1,7 @@
 /** Shared wording and date formatting for the fermentation pages. */
 import type { FgState } from '@shared/brewmath';
 import type { FermentationMethod } from '@shared/schemas/fermentation';
+import { DAY_MS, localDateTimeInput } from '@shared/dates';
 
 export const verdictTitles: Record<FgState, string> = {
   'no-reading': 'No reading yet',
@@ -15,8 +16,6 @@ export const methodLabels: Record<FermentationMethod, string> = {
   refractometer: 'Refractometer',
   thermometer: 'Thermometer',
 };
-
-const DAY_MS = 86_400_000;
 
 /** "Day 12" from pitching; fractions are floored, as brewers count days. */
 export function dayLabel(takenAt: string, pitchedAt: string | null) {
@@ -35,8 +34,7 @@ export function shortDate(iso: string) {
 
 /** A local date-time for <input type="datetime-local">, from a Date. */
 export function toLocalInput(date: Date) {
-  const pad = (n: number) => String(n).padStart(2, '0');
-  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}T${pad(date.getHours())}:${pad(date.getMinutes())}`;
+  return localDateTimeInput(date);
 }
 
 /** The ISO instant of a datetime-local value, or undefined when it is empty or not a date. */

@@ -9,17 +9,12 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, type FormNumber } from './describe';
 import { NumberField } from '@/components/ui/number-field';
+import { localDay } from '@shared/dates';
 
 interface PhValues {
   calibratedOn: string;
   bufferLowPh: FormNumber;
   bufferHighPh: FormNumber;
-}
-
-/** Today on the brewer's own calendar, for the date input. */
-function localToday() {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
 }
 
 const toBody = (v: PhValues): CalibrateInstrumentBody => ({
@@ -46,7 +41,7 @@ export function PhCalibration({ instrument, onDone }: { instrument: Instrument; 
   return (
     <Formik<PhValues>
       initialValues={{
-        calibratedOn: localToday(),
+        calibratedOn: localDay(),
         bufferLowPh: instrument.bufferLowPh ?? DEFAULT_PH_BUFFERS.low,
         bufferHighPh: instrument.bufferHighPh ?? DEFAULT_PH_BUFFERS.high,
       }}
@@ -69,7 +64,7 @@ export function PhCalibration({ instrument, onDone }: { instrument: Instrument; 
           </p>
           <Notice tone="caution">{cautionTexts.phSolutions}</Notice>
           <div className="grid gap-3 sm:grid-cols-3">
-            <TextField name="calibratedOn" type="date" label="Calibrated on" max={localToday()} />
+            <TextField name="calibratedOn" type="date" label="Calibrated on" max={localDay()} />
             <NumberField name="bufferLowPh" label="First buffer" unit="pH" />
             <NumberField name="bufferHighPh" label="Second buffer" unit="pH" />
           </div>

@@ -1,11 +1,12 @@
 import { ChevronRight } from 'lucide-react';
 import { Link } from 'react-router';
+import { DAY_MS } from '@shared/dates';
 import { brewStatusLabels } from '@shared/schemas/brews';
 import type { ReviewedItem, ReviewQueueItem } from '@shared/schemas/comments';
 import { useUnits } from '@/lib/units';
 
 function ago(what: string, iso: string): string {
-  const days = Math.floor((Date.now() - Date.parse(iso)) / 86_400_000);
+  const days = Math.floor((Date.now() - Date.parse(iso)) / DAY_MS);
   if (days <= 0) return `${what} today`;
   if (days === 1) return `${what} yesterday`;
   return `${what} ${days} days ago`;

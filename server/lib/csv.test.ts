@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { CsvParseError, CsvTooManyRowsError, detectDelimiter, parseCsv, toCsvLine } from './csv';
+import { CsvParseError, CsvTooManyRowsError, detectDelimiter, formulaSafe, readCsv, writeCsv } from './csv';
 
-const cells = (text: string) => parseCsv(text).map((r) => r.cells);
+const cells = (text: string) => readCsv(text).map((r) => r.cells);
 
 // The rules of RFC 4180 (IETF, October 2005), section 2, numbered as there.
 describe('CSV after RFC 4180 section 2', () => {
@@ -36,19 +36,19 @@ describe('CSV after RFC 4180 section 2', () => {
   });
 
   it('numbers rows as a spreadsheet does, across quoted line breaks and blank lines', () => {
-    const records = parseCsv('h1,h2\n"x\ny",1\n\nlast,2\n');
+    const records = readCsv('h1,h2\n"x\ny",1\n\nlast,2\n');
     expect(records.map((r) => r.row)).toEqual([1, 2, 5]);
   });
 
   it('refuses an unclosed quote and text after a closing quote, naming the row', () => {
-    expect(() => parseCsv('a,b\n"open,1\n')).toThrow(CsvParseError);
-    expect(() => parseCsv('a,b\n"open,1\n')).toThrow(/Row 2/);
-    expect(() => parseCsv('a,b\n"x"y,1\n')).toThrow(/after a closing quote/);
+    expect(() => readCsv('a,b\n"open,1\n')).toThrow(CsvParseError);
+    expect(() => readCsv('a,b\n"open,1\n')).toThrow(/Row 2/);
+    expect(() => readCsv('a,b\n"x"y,1\n')).toThrow(/after a closing quote/);
   });
 
   it('stops at the record limit without reading the rest', () => {
     const big = 'h\n' + '1\n'.repeat(100_000);
-    expect(() => parseCsv(big, { maxRecords: 1001 })).toThrow(CsvTooManyRowsError);
+    expect(() => readCsv(big, { maxRecords: 1001 })).toThrow(CsvTooManyRowsError);
   });
 
   it('reads semicolon and tab files, and a byte-order mark, as spreadsheets write them', () => {
@@ -62,6 +62,30 @@ describe('CSV after RFC 4180 section 2', () => {
 
   it('writes what it reads back', () => {
     const row = ['plain', 'with,comma', 'with "quote"', 'two\nlines', '', ' padded '];
-    expect(cells(toCsvLine(row))).toEqual([row]);
+    expect(cells(writeCsv([row]))).toEqual([row]);
+    expect(writeCsv([['a', 1, null], ['b', 2.5, undefined]])).toBe('a,1,\r\nb,2.5,\r\n');
+    expect(writeCsv([['°C']], { bom: true })).toBe('\ufeff°C\r\n');
+  });
+
+  it('keeps a quote inside an unquoted field as written, as spreadsheets do', () => {
+    expect(cells('note,value\n6" of krausen,1\n')).toEqual([
+      ['note', 'value'],
+      ['6" of krausen', '1'],
+    ]);
+  });
+
+  it('names the row an unclosed quote opens on, not the end of the file', () => {
+    expect(() => readCsv('a,b\n"open,1\nx\ny\n')).toThrow(/^Row 2:/);
+  });
+});
+
+// OWASP "CSV Injection": cells starting with = + - @ tab or carriage return are run as formulas.
+describe('the one spreadsheet-formula guard', () => {
+  it('puts an apostrophe before text a spreadsheet would run', () => {
+    for (const text of ['=1+1', '+1', '-1', '@SUM(A1)', '\t=1', '\r=1']) expect(formulaSafe(text)).toBe(`'${text}`);
+  });
+
+  it('leaves other text alone', () => {
+    for (const text of ['Pale ale', '', '1.050', "it's 'fine'", ' =padded']) expect(formulaSafe(text)).toBe(text);
   });
 });
