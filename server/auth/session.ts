@@ -89,6 +89,7 @@ async function loadSessionRows(db: Db, userId: number, sessionId: string | null)
       displayName: users.displayName,
       unitSystem: users.unitSystem,
       gravityUnit: users.gravityUnit,
+      colourScale: users.colourScale,
       siteRole: users.siteRole,
       tokenVersion: users.tokenVersion,
       clubId: clubs.id,

@@ -44,6 +44,7 @@ import { lockBrewRow } from '../db/locks';
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
 import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
+import type { RecipeTargets } from '@shared/schemas/recipes';
 import { utcDay } from '@shared/dates';
 
 export interface StoredBrew {

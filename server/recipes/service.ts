@@ -4,7 +4,7 @@
  * in one transaction; a save names the version it was edited from and is refused (409) when the
  * stored recipe has moved on, so nobody's edits are overwritten silently.
  */
-import { and, asc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import {
   estimateRecipeColour,
   estimateRecipeIbu,
