@@ -1,9 +1,15 @@
+import { mkdtempSync, rmSync, statSync } from 'node:fs';
 import net from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import jwt from 'jsonwebtoken';
 import request from 'supertest';
 import { beforeAll, describe, expect, inject, it, vi } from 'vitest';
 import { createApp } from './app';
 import { createDb } from './db/client';
-import { loadEnv } from './env';
+import { assertSafeToListen, loadEnv, PUBLIC_DEV_SECRET } from './env';
+import { SESSION_COOKIE } from './auth/session';
+import { startFakeSmtp } from './mail/fake-smtp';
 import { createHarness, type TestHarness } from '../tests/support/api';
 import { makeScene } from './brews/test-scene';
 
@@ -161,5 +167,34 @@ describe('the API while MariaDB is away', () => {
 describe('configuration', () => {
   it('refuses to start in production without a JWT secret, naming it', () => {
     expect(() => loadEnv({ NODE_ENV: 'production' })).toThrow(/JWT_SECRET/);
+  });
+
+  it('without JWT_SECRET in development, makes a random key once and keeps it in the data folder, readable by its owner only', () => {
+    const dataDir = mkdtempSync(path.join(tmpdir(), 'wortwise-env-'));
+    try {
+      const first = loadEnv({ NODE_ENV: 'development', DATA_DIR: dataDir });
+      expect(first.JWT_SECRET).not.toBe(PUBLIC_DEV_SECRET);
+      expect(first.JWT_SECRET.length).toBeGreaterThanOrEqual(32);
+      expect(statSync(path.join(dataDir, 'jwt-secret')).mode & 0o777).toBe(0o600);
+      expect(loadEnv({ NODE_ENV: 'development', DATA_DIR: dataDir }).JWT_SECRET).toBe(first.JWT_SECRET);
+      // Only on this machine: another address needs a key of one's own.
+      expect(() => assertSafeToListen({ ...first, HOST: '0.0.0.0' })).toThrow(/JWT_SECRET/);
+      expect(() => assertSafeToListen(first)).not.toThrow();
+      const own = loadEnv({ NODE_ENV: 'development', HOST: '0.0.0.0', JWT_SECRET: 'a'.repeat(40), DATA_DIR: dataDir });
+      expect(() => assertSafeToListen(own)).not.toThrow();
+      expect(() => assertSafeToListen({ ...own, JWT_SECRET: PUBLIC_DEV_SECRET })).toThrow(/development session key/);
+    } finally {
+      rmSync(dataDir, { recursive: true, force: true });
+    }
+  });
+
+  it('does not accept a session forged with the key once written in the source', async () => {
+    const forged = jwt.sign({ tv: 0 }, PUBLIC_DEV_SECRET, { subject: '1', algorithm: 'HS256', expiresIn: '1h' });
+    const res = await request(h.app).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${forged}`);
+    expect(res.status).toBe(401);
+  });
+
+  it('keeps the fake mail listing (which shows password-reset links) on loopback', async () => {
+    await expect(startFakeSmtp({ host: '0.0.0.0' })).rejects.toThrow(/loopback/);
   });
 });
