@@ -12,6 +12,7 @@ import { SESSION_COOKIE } from './auth/session';
 import { startFakeSmtp } from './mail/fake-smtp';
 import { createHarness, type TestHarness } from '../tests/support/api';
 import { makeScene } from './brews/test-scene';
+import { makeUser } from './db/factories';
 
 let h: TestHarness;
 beforeAll(async () => {
@@ -196,5 +197,41 @@ describe('configuration', () => {
 
   it('keeps the fake mail listing (which shows password-reset links) on loopback', async () => {
     await expect(startFakeSmtp({ host: '0.0.0.0' })).rejects.toThrow(/loopback/);
+  });
+});
+
+describe('requests from other sites', () => {
+  it('refuses a state-changing request with a foreign Origin or Sec-Fetch-Site: cross-site (403), and stores nothing', async () => {
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    const foreign = await agent.post('/api/clubs').set('Origin', 'https://evil.example').send({ name: 'Forged club' });
+    expect(foreign.status).toBe(403);
+    const crossSite = await agent.post('/api/clubs').set('Sec-Fetch-Site', 'cross-site').send({ name: 'Forged club' });
+    expect(crossSite.status).toBe(403);
+    const logout = await agent.post('/api/auth/logout').set('Origin', 'null');
+    expect(logout.status).toBe(403);
+    expect((await agent.get('/api/clubs')).body).toEqual([]);
+    // The app's own origin, and a request without Origin (a script, curl), go through.
+    const own = await agent.post('/api/clubs').set('Origin', new URL(h.ctx.env.APP_URL).origin).set('Sec-Fetch-Site', 'same-origin').send({ name: 'Real club' });
+    expect(own.status).toBe(201);
+  });
+
+  it('refuses form content types on JSON endpoints with 415', async () => {
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    const urlencoded = await agent.post('/api/clubs').type('form').send('name=Forged');
+    expect(urlencoded.status).toBe(415);
+    const plain = await agent.post('/api/clubs').set('Content-Type', 'text/plain').send('{"name":"Forged"}');
+    expect(plain.status).toBe(415);
+    const multipart = await agent.post('/api/clubs').field('name', 'Forged');
+    expect(multipart.status).toBe(415);
+    expect((await agent.get('/api/clubs')).body).toEqual([]);
+  });
+
+  it('marks signed-in answers Cache-Control: no-store', async () => {
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    expect((await agent.get('/api/auth/me')).headers['cache-control']).toBe('no-store');
+    expect((await agent.get('/api/recipes')).headers['cache-control']).toBe('no-store');
   });
 });

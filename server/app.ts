@@ -14,6 +14,7 @@ import { equipmentRouter } from './equipment/router';
 import { fermentationRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
+import { crossSiteGuard, noStoreWhenSignedIn } from './lib/cross-site';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { idempotency } from './lib/idempotency';
 import { passwordResetRouter } from './password-reset/router';
@@ -34,9 +35,11 @@ export function createApp(ctx: AppContext) {
   app.use(cookieParser());
 
   const api = express.Router();
+  api.use(crossSiteGuard(env));
   api.use('/health', healthRouter(pool));
   api.use('/calc', calcRouter(env));
   api.use(loadUser(db, env));
+  api.use(noStoreWhenSignedIn);
   api.use(idempotency(db));
   api.use('/auth/password-reset', passwordResetRouter(ctx));
   api.use('/auth', authRouter(db, env));
