@@ -1,11 +1,18 @@
+import { mkdtempSync, rmSync, statSync } from 'node:fs';
 import net from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import jwt from 'jsonwebtoken';
 import request from 'supertest';
 import { beforeAll, describe, expect, inject, it, vi } from 'vitest';
 import { createApp } from './app';
 import { createDb } from './db/client';
-import { loadEnv } from './env';
+import { assertSafeToListen, loadEnv, PUBLIC_DEV_SECRET } from './env';
+import { SESSION_COOKIE } from './auth/session';
+import { startFakeSmtp } from './mail/fake-smtp';
 import { createHarness, type TestHarness } from '../tests/support/api';
 import { makeScene } from './brews/test-scene';
+import { makeUser } from './db/factories';
 
 let h: TestHarness;
 beforeAll(async () => {
@@ -161,5 +168,70 @@ describe('the API while MariaDB is away', () => {
 describe('configuration', () => {
   it('refuses to start in production without a JWT secret, naming it', () => {
     expect(() => loadEnv({ NODE_ENV: 'production' })).toThrow(/JWT_SECRET/);
+  });
+
+  it('without JWT_SECRET in development, makes a random key once and keeps it in the data folder, readable by its owner only', () => {
+    const dataDir = mkdtempSync(path.join(tmpdir(), 'wortwise-env-'));
+    try {
+      const first = loadEnv({ NODE_ENV: 'development', DATA_DIR: dataDir });
+      expect(first.JWT_SECRET).not.toBe(PUBLIC_DEV_SECRET);
+      expect(first.JWT_SECRET.length).toBeGreaterThanOrEqual(32);
+      expect(statSync(path.join(dataDir, 'jwt-secret')).mode & 0o777).toBe(0o600);
+      expect(loadEnv({ NODE_ENV: 'development', DATA_DIR: dataDir }).JWT_SECRET).toBe(first.JWT_SECRET);
+      // Only on this machine: another address needs a key of one's own.
+      expect(() => assertSafeToListen({ ...first, HOST: '0.0.0.0' })).toThrow(/JWT_SECRET/);
+      expect(() => assertSafeToListen(first)).not.toThrow();
+      const own = loadEnv({ NODE_ENV: 'development', HOST: '0.0.0.0', JWT_SECRET: 'a'.repeat(40), DATA_DIR: dataDir });
+      expect(() => assertSafeToListen(own)).not.toThrow();
+      expect(() => assertSafeToListen({ ...own, JWT_SECRET: PUBLIC_DEV_SECRET })).toThrow(/development session key/);
+    } finally {
+      rmSync(dataDir, { recursive: true, force: true });
+    }
+  });
+
+  it('does not accept a session forged with the key once written in the source', async () => {
+    const forged = jwt.sign({ tv: 0 }, PUBLIC_DEV_SECRET, { subject: '1', algorithm: 'HS256', expiresIn: '1h' });
+    const res = await request(h.app).get('/api/auth/me').set('Cookie', `${SESSION_COOKIE}=${forged}`);
+    expect(res.status).toBe(401);
+  });
+
+  it('keeps the fake mail listing (which shows password-reset links) on loopback', async () => {
+    await expect(startFakeSmtp({ host: '0.0.0.0' })).rejects.toThrow(/loopback/);
+  });
+});
+
+describe('requests from other sites', () => {
+  it('refuses a state-changing request with a foreign Origin or Sec-Fetch-Site: cross-site (403), and stores nothing', async () => {
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    const foreign = await agent.post('/api/clubs').set('Origin', 'https://evil.example').send({ name: 'Forged club' });
+    expect(foreign.status).toBe(403);
+    const crossSite = await agent.post('/api/clubs').set('Sec-Fetch-Site', 'cross-site').send({ name: 'Forged club' });
+    expect(crossSite.status).toBe(403);
+    const logout = await agent.post('/api/auth/logout').set('Origin', 'null');
+    expect(logout.status).toBe(403);
+    expect((await agent.get('/api/clubs')).body).toEqual([]);
+    // The app's own origin, and a request without Origin (a script, curl), go through.
+    const own = await agent.post('/api/clubs').set('Origin', new URL(h.ctx.env.APP_URL).origin).set('Sec-Fetch-Site', 'same-origin').send({ name: 'Real club' });
+    expect(own.status).toBe(201);
+  });
+
+  it('refuses form content types on JSON endpoints with 415', async () => {
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    const urlencoded = await agent.post('/api/clubs').type('form').send('name=Forged');
+    expect(urlencoded.status).toBe(415);
+    const plain = await agent.post('/api/clubs').set('Content-Type', 'text/plain').send('{"name":"Forged"}');
+    expect(plain.status).toBe(415);
+    const multipart = await agent.post('/api/clubs').field('name', 'Forged');
+    expect(multipart.status).toBe(415);
+    expect((await agent.get('/api/clubs')).body).toEqual([]);
+  });
+
+  it('marks signed-in answers Cache-Control: no-store', async () => {
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    expect((await agent.get('/api/auth/me')).headers['cache-control']).toBe('no-store');
+    expect((await agent.get('/api/recipes')).headers['cache-control']).toBe('no-store');
   });
 });

@@ -17,6 +17,7 @@ import { equipmentRouter } from './equipment/router';
 import { fermentationRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
+import { crossSiteGuard, noStoreWhenSignedIn } from './lib/cross-site';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { idempotency } from './lib/idempotency';
 import { createRateLimits } from './lib/rate-limit';
@@ -42,9 +43,11 @@ export function createApp(ctx: AppContext) {
 
   const limits = createRateLimits(env, ctx.redis);
   const api = express.Router();
+  api.use(crossSiteGuard(env));
   api.use('/health', healthRouter(pool));
   api.use('/calc', calcRouter(limits.calc));
   api.use(loadUser(db, env));
+  api.use(noStoreWhenSignedIn);
   api.use(idempotency(db));
   api.use('/auth/password-reset', passwordResetRouter(ctx, limits.passwordReset));
   api.use('/auth', authRouter(db, env, limits.auth));

@@ -273,9 +273,11 @@ const cases: Case[] = [
     route: 'POST /api/auth/logout-everywhere',
     freshAgent: true,
     call: async (a) => {
+      const me = await a.get('/api/auth/me');
       const res = await a.post('/api/auth/logout-everywhere');
-      // That signed this person out on every agent: sign the shared ones in again.
-      for (const who of people) if (who !== 'anonymous') scene.agents[who] = await h.signIn(scene.users[who].email);
+      // That signed this person out on every agent: sign their shared agent in again.
+      const who = people.find((p): p is Exclude<Who, 'anonymous'> => p !== 'anonymous' && scene.users[p].email === me.body?.email);
+      if (who) scene.agents[who] = await h.signIn(scene.users[who].email);
       return res;
     },
     expected: signedIn(204),

@@ -1,6 +1,35 @@
+import { randomBytes } from 'node:crypto';
+import { chmodSync, mkdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
 import { z } from 'zod';
 
-const devSecret = 'wortwise-development-secret-not-for-production';
+/** A key once written in the source: never accepted off this machine. */
+export const PUBLIC_DEV_SECRET = 'wortwise-development-secret-not-for-production';
+const defaultDataDir = path.resolve(import.meta.dirname, '..', '.data');
+// Tests get a random key per process: nothing to keep.
+const testSecret = randomBytes(32).toString('base64url');
+
+/**
+ * Without JWT_SECRET in development, a random key made on first start and kept in the private
+ * data folder (mode 600), so sessions survive a restart and nobody can forge one from the source.
+ */
+export function generatedSecret(dataDir = defaultDataDir): string {
+  const file = path.join(dataDir, 'jwt-secret');
+  try {
+    const existing = readFileSync(file, 'utf8').trim();
+    if (existing.length >= 32) {
+      if ((statSync(file).mode & 0o077) !== 0) chmodSync(file, 0o600);
+      return existing;
+    }
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code !== 'ENOENT') throw error;
+  }
+  mkdirSync(dataDir, { recursive: true, mode: 0o700 });
+  const secret = randomBytes(48).toString('base64url');
+  writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  chmodSync(file, 0o600);
+  return secret;
+}
 
 const envSchema = z
   .object({
@@ -35,13 +64,19 @@ const envSchema = z
     S3_FORCE_PATH_STYLE: z.stringbool().default(true),
     /** Where the built client lives (tests build their own copy). */
     CLIENT_DIST: z.string().optional(),
+    /** The private data folder: the generated development session key lives here. */
+    DATA_DIR: z.string().optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.JWT_SECRET) {
       ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'JWT_SECRET is required in production' });
     }
   })
-  .transform((env) => ({ ...env, JWT_SECRET: env.JWT_SECRET ?? devSecret }));
+  .transform((env) => {
+    const source: 'env' | 'generated' | 'test' = env.JWT_SECRET ? 'env' : env.NODE_ENV === 'test' ? 'test' : 'generated';
+    const secret = env.JWT_SECRET ?? (source === 'test' ? testSecret : generatedSecret(env.DATA_DIR));
+    return { ...env, JWT_SECRET: secret, JWT_SECRET_SOURCE: source };
+  });
 
 export type Env = z.output<typeof envSchema>;
 
@@ -53,4 +88,17 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
     throw new Error(`Invalid environment:\n${lines.join('\n')}`);
   }
   return parsed.data;
+}
+
+const loopback = (host: string) => host === 'localhost' || host === '::1' || /^127\./.test(host);
+
+/**
+ * Before listening: a development key (generated or the old public one) is only for this
+ * machine. Listening on another address needs a JWT_SECRET of your own.
+ */
+export function assertSafeToListen(env: Env) {
+  const devKey = env.JWT_SECRET_SOURCE !== 'env' || env.JWT_SECRET === PUBLIC_DEV_SECRET;
+  if (devKey && !loopback(env.HOST)) {
+    throw new Error(`Refusing to listen on ${env.HOST} with a development session key: set JWT_SECRET (at least 32 random characters) first, or listen on 127.0.0.1.`);
+  }
 }

@@ -1,13 +1,14 @@
 import { createApp } from './app';
 import type { AppContext } from './context';
 import { createDb } from './db/client';
-import { loadEnv } from './env';
+import { assertSafeToListen, loadEnv } from './env';
 import { connectRedis } from './lib/rate-limit';
 import { startReminderWorker } from './fermentation/reminders';
 import { createMailer } from './mail/mailer';
 
 /** Starts the HTTP server; resolves with a function that shuts it down gracefully. */
 export async function startServer(env = loadEnv()) {
+  assertSafeToListen(env);
   const { db, pool } = createDb(env.DATABASE_URL, { poolSize: env.DB_POOL_SIZE });
   const redis = env.REDIS_URL ? await connectRedis(env.REDIS_URL) : null;
   const ctx: AppContext = { env, db, pool, mailer: createMailer(env), redis };

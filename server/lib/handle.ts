@@ -1,5 +1,6 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { z } from 'zod';
+import { refuseStrayMultipart } from './cross-site';
 import { BadRequest } from './errors';
 
 /** Turns zod issues into `{ "field.path": "message" }`, the shape the forms show inline. */
@@ -45,6 +46,7 @@ export function handle<
   handler: (valid: Valid<Out<B>, Out<Q>, Out<P>>, req: Request, res: Response) => Promise<unknown> | unknown,
 ): RequestHandler {
   return async (req: Request, res: Response, _next: NextFunction) => {
+    refuseStrayMultipart(req, res);
     const valid = {
       body: schemas.body ? parseOrThrow(schemas.body, req.body ?? {}) : undefined,
       query: schemas.query ? parseOrThrow(schemas.query, req.query) : undefined,

@@ -3,7 +3,7 @@
  * runs and its answer (status and JSON body) is kept in MariaDB for a day; the same key from the
  * same user gets that answer again and nothing new is stored. A second request arriving while
  * the first still runs waits for it. Answers of 5xx and 429 are not kept, so a retry after an
- * outage runs again. See docs/decisions/0012-idempotency-keys.md.
+ * outage runs again. See docs/decisions/0012-writes-under-concurrency-and-outages.md.
  */
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { and, eq, lt } from 'drizzle-orm';

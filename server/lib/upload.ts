@@ -32,6 +32,7 @@ export function singleUpload(spec: UploadSpec): RequestHandler {
   }).single(spec.field);
   const mb = spec.maxBytes / (1024 * 1024);
   return (req: Request, res: Response, next: NextFunction) => {
+    res.locals.acceptsUpload = true;
     upload(req, res, (error: unknown) => {
       if (!error) return next();
       if (error instanceof multer.MulterError) {

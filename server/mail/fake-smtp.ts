@@ -27,6 +27,8 @@ export interface FakeSmtp {
 }
 
 export async function startFakeSmtp({ smtpPort = 0, apiPort = 0, host = '127.0.0.1' } = {}): Promise<FakeSmtp> {
+  // Its listing shows every mail, password-reset links included: this machine only.
+  if (!(host === 'localhost' || host === '::1' || /^127\./.test(host))) throw new Error(`The fake SMTP server listens on loopback only, not ${host}.`);
   const messages: CaughtMail[] = [];
   let nextId = 1;
   const smtp = new SMTPServer({

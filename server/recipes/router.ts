@@ -1,11 +1,11 @@
 import { Router } from 'express';
-import multer from 'multer';
 import { z } from 'zod';
 import { idParamSchema } from '@shared/schemas/common';
 import { listRecipesQuerySchema, recipeInputSchema, recipeVersionParamsSchema, recipeUpdateSchema, sharingInputSchema, type RecipeImportResult } from '@shared/schemas/recipes';
 import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
 import { handle } from '../lib/handle';
+import { singleUpload } from '../lib/upload';
 import { fileSlug, parseRecipeFile, toRecipeCsv, toRecipeFile } from './file-format';
 import {
   cloneRecipe,
@@ -25,7 +25,12 @@ const exportQuerySchema = z.object({
 });
 
 /** A recipe file is a few kilobytes; kept in memory, never written to disk (no per-instance state). */
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 256 * 1024, files: 1 } });
+const upload = singleUpload({
+  field: 'file',
+  what: 'recipe file',
+  maxBytes: 256 * 1024,
+  tooLargeTip: 'A recipe file is a few kilobytes: check that you chose a recipe exported from Wortwise.',
+});
 
 /** `/api/recipes`: a brewer's recipes and those shared with their clubs. */
 export function recipesRouter(ctx: AppContext) {
@@ -50,7 +55,7 @@ export function recipesRouter(ctx: AppContext) {
 
   router.post(
     '/import',
-    upload.single('file'),
+    upload,
     handle({}, async (_valid, req, res): Promise<RecipeImportResult> => {
       const actor = currentUser(req);
       const { data, ignored } = parseRecipeFile(req.file?.buffer);
