@@ -15,6 +15,7 @@ export interface SessionUser extends Actor {
   displayName: string;
   unitSystem: User['unitSystem'];
   gravityUnit: User['gravityUnit'];
+  gallonUnit: User['gallonUnit'];
   clubs: { id: number; name: string; role: Actor['memberships'][number]['role'] }[];
 }
 
@@ -69,6 +70,7 @@ export async function loadSessionUser(db: Db, userId: number): Promise<SessionUs
     displayName: user.displayName,
     unitSystem: user.unitSystem,
     gravityUnit: user.gravityUnit,
+    gallonUnit: user.gallonUnit,
     siteRole: user.siteRole,
     clubs: rows,
     memberships: rows.map((r) => ({ clubId: r.id, role: r.role })),

@@ -36,7 +36,7 @@ registerDemoSeed(async (db, people, club) => {
   const read = (input: ReadingInput) => addReading(db as Db, priya, id, readingInputSchema.parse(input));
 
   await read({ kind: 'mash_temp', instrumentId: instrument('thermometer'), tempC: 66.6, takenAt: at('10:05'), note: 'Stirred, probe in the middle of the tun.' });
-  await read({ kind: 'mash_ph', instrumentId: instrument('ph_meter'), ph: 5.38, takenAt: at('10:20'), note: 'Sample cooled to room temperature first.' });
+  await read({ kind: 'mash_ph', instrumentId: instrument('ph_meter'), ph: 5.27, takenAt: at('10:20'), note: 'Sample cooled to room temperature first.' });
   await read({ kind: 'mash_temp', instrumentId: instrument('thermometer'), tempC: 65.9, takenAt: at('10:50') });
   await setStage(db, priya, id, 'mash', 'complete', new Date(at('11:05')));
   await read({ kind: 'pre_boil_gravity', instrumentId: instrument('refractometer'), method: 'refractometer', brix: 10.9, volumeL: 29.2, takenAt: at('11:35') });

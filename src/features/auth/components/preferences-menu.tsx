@@ -1,12 +1,16 @@
 import { Check, CircleUser, LogOut } from 'lucide-react';
 import { useEffect, useRef, useState } from 'react';
-import type { GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
+import type { GallonUnit, GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
 import { useLogout } from '../api/logout';
 import { useUpdatePreferences } from '../api/update-preferences';
 
 const unitOptions: { value: UnitSystem; label: string }[] = [
   { value: 'metric', label: 'Metric (L, kg, °C)' },
   { value: 'us', label: 'US (gal, lb, °F)' },
+];
+const gallonOptions: { value: GallonUnit; label: string }[] = [
+  { value: 'us', label: 'US gallons (3.785 L)' },
+  { value: 'imperial', label: 'Imperial gallons (4.546 L)' },
 ];
 const gravityOptions: { value: GravityUnit; label: string }[] = [
   { value: 'sg', label: 'Specific gravity (1.050)' },
@@ -60,6 +64,15 @@ export function PreferencesMenu({ me, onSignedOut }: { me: Me; onSignedOut: () =
               </MenuChoice>
             ))}
           </MenuGroup>
+          {me.unitSystem === 'us' && (
+            <MenuGroup label="Gallons">
+              {gallonOptions.map((o) => (
+                <MenuChoice key={o.value} checked={me.gallonUnit === o.value} onSelect={() => update.mutate({ gallonUnit: o.value })}>
+                  {o.label}
+                </MenuChoice>
+              ))}
+            </MenuGroup>
+          )}
           <MenuGroup label="Gravity">
             {gravityOptions.map((o) => (
               <MenuChoice key={o.value} checked={me.gravityUnit === o.value} onSelect={() => update.mutate({ gravityUnit: o.value })}>

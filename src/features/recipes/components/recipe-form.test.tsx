@@ -8,7 +8,7 @@ import { RecipeForm } from './recipe-form';
 
 function renderForm(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'> = { unitSystem: 'metric', gravityUnit: 'sg' }) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], ...prefs };
+  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], gallonUnit: 'us', ...prefs };
   queryClient.setQueryData(meQueryOptions().queryKey, me);
   const onSaved = vi.fn();
   render(

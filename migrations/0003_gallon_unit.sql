@@ -1,0 +1,1 @@
+ALTER TABLE `users` ADD `gallon_unit` enum('us','imperial') DEFAULT 'us' NOT NULL;
