@@ -55,6 +55,8 @@ registerDemoSeed(async (db, people, club) => {
       extractsOnHand: ['dme', 'sucrose'],
       kettleCapacityL: 35,
       coolingShrinkage: 0.04,
+      // Priya's kettle profile: 1.5 L trub loss and 0.5 L dead space (server/instruments/demo-seed.ts).
+      kettleLossL: 2,
     },
     choice: { kind: 'extract', extract: 'dme' },
     note: 'A little short after a vigorous mash-out. Stirred the dry malt extract into a jug of wort first so it would not clump.',
