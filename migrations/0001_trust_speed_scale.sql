@@ -31,6 +31,7 @@ CREATE TABLE `revoked_sessions` (
 ALTER TABLE `reading_photos` MODIFY COLUMN `data` mediumblob;--> statement-breakpoint
 ALTER TABLE `packaging_records` MODIFY COLUMN `verdict_state` enum('no-reading','too-early','moving','stuck','stable') NOT NULL;--> statement-breakpoint
 ALTER TABLE `users` ADD `colour_scale` enum('srm','ebc') DEFAULT 'srm' NOT NULL;--> statement-breakpoint
+ALTER TABLE `users` ADD `gallon_unit` enum('us','imperial') DEFAULT 'us' NOT NULL;--> statement-breakpoint
 ALTER TABLE `recipe_fermentables` ADD `colour_lovibond` double;--> statement-breakpoint
 ALTER TABLE `recipes` ADD `target_ibu` double;--> statement-breakpoint
 ALTER TABLE `recipes` ADD `target_colour_srm` double;--> statement-breakpoint

@@ -92,5 +92,13 @@ describe('sign out and /me', () => {
     const bad = await agent.patch('/api/auth/me').send({ unitSystem: 'imperial' });
     expect(bad.status).toBe(400);
     expect(bad.body.fields.unitSystem).toBe('Choose metric or US units.');
+    expect(res.body.gallonUnit).toBe('us');
+    const imperial = await agent.patch('/api/auth/me').send({ gallonUnit: 'imperial' });
+    expect(imperial.status).toBe(200);
+    expect(imperial.body).toMatchObject({ unitSystem: 'us', gallonUnit: 'imperial' });
+    const badGallon = await agent.patch('/api/auth/me').send({ gallonUnit: 'quart' });
+    expect(badGallon.status).toBe(400);
+    expect(badGallon.body.fields.gallonUnit).toBe('Choose US gallons (3.785 L) or imperial gallons (4.546 L).');
+    expect((await agent.get('/api/auth/me')).body.gallonUnit).toBe('imperial');
   });
 });

@@ -17,6 +17,7 @@ export interface SessionUser extends Actor {
   unitSystem: User['unitSystem'];
   gravityUnit: User['gravityUnit'];
   colourScale: User['colourScale'];
+  gallonUnit: User['gallonUnit'];
   clubs: { id: number; name: string; role: Actor['memberships'][number]['role'] }[];
 }
 
@@ -90,6 +91,7 @@ async function loadSessionRows(db: Db, userId: number, sessionId: string | null)
       unitSystem: users.unitSystem,
       gravityUnit: users.gravityUnit,
       colourScale: users.colourScale,
+      gallonUnit: users.gallonUnit,
       siteRole: users.siteRole,
       tokenVersion: users.tokenVersion,
       clubId: clubs.id,
@@ -116,6 +118,7 @@ function toSessionUser(rows: Awaited<ReturnType<typeof loadSessionRows>>): Sessi
     unitSystem: user.unitSystem,
     gravityUnit: user.gravityUnit,
     colourScale: user.colourScale,
+    gallonUnit: user.gallonUnit,
     siteRole: user.siteRole,
     clubs: clubList,
     memberships: clubList.map((c) => ({ clubId: c.id, role: c.role })),

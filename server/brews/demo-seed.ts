@@ -37,7 +37,7 @@ registerDemoSeed(async (db, people, club) => {
   const read = (input: ReadingInput) => addReading(db as Db, priya, id, readingInputSchema.parse(input));
 
   await read({ kind: 'mash_temp', instrumentId: instrument('thermometer'), tempC: 66.6, takenAt: at('10:05'), note: 'Stirred, probe in the middle of the tun.' });
-  await read({ kind: 'mash_ph', instrumentId: instrument('ph_meter'), ph: 5.38, takenAt: at('10:20'), note: 'Sample cooled to room temperature first.' });
+  await read({ kind: 'mash_ph', instrumentId: instrument('ph_meter'), ph: 5.27, takenAt: at('10:20'), note: 'Sample cooled to room temperature first.' });
   await read({ kind: 'mash_temp', instrumentId: instrument('thermometer'), tempC: 65.9, takenAt: at('10:50') });
   await setStage(db, priya, id, 'mash', 'complete', new Date(at('11:05')));
   await read({ kind: 'pre_boil_gravity', instrumentId: instrument('refractometer'), method: 'refractometer', brix: 10.9, volumeL: 29.2, takenAt: at('11:35') });
@@ -56,6 +56,8 @@ registerDemoSeed(async (db, people, club) => {
       extractsOnHand: ['dme', 'sucrose'],
       kettleCapacityL: 35,
       coolingShrinkage: 0.04,
+      // Priya's kettle profile: 1.5 L trub loss and 0.5 L dead space (server/instruments/demo-seed.ts).
+      kettleLossL: 2,
     },
     choice: { kind: 'extract', extract: 'dme' },
     note: 'A little short after a vigorous mash-out. Stirred the dry malt extract into a jug of wort first so it would not clump.',

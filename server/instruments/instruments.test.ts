@@ -220,12 +220,14 @@ describe('checking a thermometer', () => {
     const { agent, user } = await brewer();
     const t = await agent.post('/api/instruments').send({ kind: 'thermometer', name: 'Kettle dial' }).expect(201);
     expect((await getEquipmentProfile(h.ctx.db, user.id)).source).toBe('common-practice');
-    // Sea level: water boils at 99.974 °C (ITS-90 / IAPWS). 1.5 in ice and 101.5 at the boil: offsets 1.5 and 1.526, mean 1.513.
+    // Sea level: water boils at 99.974 °C (ITS-90 / IAPWS). 1.5 in ice and 101.5 at the boil: a
+    // two-point line through (1.5 → 0) and (101.5 → 99.974), i.e. offset 1.5 and slope 99.974 / 100.
     const res = await agent
       .post(`/api/instruments/${t.body.id}/calibrations`)
       .send({ method: 'thermometer-check', iceReadingC: 1.5, boilingReadingC: 101.5, elevationM: 0 })
       .expect(201);
-    expect(Math.abs(res.body.instrument.offsetC - 1.513)).toBeLessThan(0.002);
+    expect(res.body.instrument.offsetC).toBeCloseTo(1.5, 9);
+    expect(Math.abs(res.body.instrument.snapshot.scale - 0.99974)).toBeLessThan(0.00002);
     expect(res.body.calibration.result.flagged).toBe(true);
     expect(res.body.calibration.result.warnings.join(' ')).toMatch(/more than 1 °C off/);
     const kettle = await getEquipmentProfile(h.ctx.db, user.id);

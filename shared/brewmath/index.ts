@@ -113,6 +113,7 @@ export {
 export { MASH_PH_TARGET, MASH_PH_BAND, MASH_PH_TOLERANCE, mashPhStatus, mashPhVerdict, type MashPhStatus, type MashPhVerdict } from './mash';
 export {
   LITRES_PER_US_GALLON,
+  LITRES_PER_IMPERIAL_GALLON,
   KG_PER_LB,
   G_PER_OZ,
   litresToUsGallons,

@@ -7,6 +7,8 @@ import { requireFinite, requireNonNegative } from './validate';
  * agreement, 1959); ounce = pound / 16; °F = °C × 9/5 + 32.
  */
 export const LITRES_PER_US_GALLON = 3.785411784;
+/** Imperial gallon = 4.54609 L exactly (UK Weights and Measures Act 1985). */
+export const LITRES_PER_IMPERIAL_GALLON = 4.54609;
 export const KG_PER_LB = 0.45359237;
 export const G_PER_OZ = (KG_PER_LB * 1000) / 16;
 

@@ -32,6 +32,9 @@ export type LoginInput = z.input<typeof loginSchema>;
 
 export const unitSystems = ['metric', 'us'] as const;
 export const gravityUnits = ['sg', 'plato'] as const;
+/** Which gallon "US units" show volumes in: the US gallon (3.785 L) or the imperial one (4.546 L). */
+export const gallonUnits = ['us', 'imperial'] as const;
+export type GallonUnit = (typeof gallonUnits)[number];
 export type UnitSystem = (typeof unitSystems)[number];
 export type GravityUnit = (typeof gravityUnits)[number];
 export const colourScales = ['srm', 'ebc'] as const;
@@ -42,6 +45,7 @@ export const preferencesSchema = z
     unitSystem: z.enum(unitSystems, { error: 'Choose metric or US units.' }),
     gravityUnit: z.enum(gravityUnits, { error: 'Choose SG or °Plato.' }),
     colourScale: z.enum(colourScales, { error: 'Choose SRM or EBC.' }),
+    gallonUnit: z.enum(gallonUnits, { error: 'Choose US gallons (3.785 L) or imperial gallons (4.546 L).' }),
     displayName: displayNameSchema,
   })
   .partial();
@@ -58,6 +62,7 @@ export const meSchema = z.object({
   unitSystem: z.enum(unitSystems),
   gravityUnit: z.enum(gravityUnits),
   colourScale: z.enum(colourScales),
+  gallonUnit: z.enum(gallonUnits),
   siteRole: z.enum(['user', 'admin']),
   clubs: z.array(z.object({ id: z.number(), name: z.string(), role: clubRoleSchema })),
 });

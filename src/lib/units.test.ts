@@ -11,6 +11,19 @@ describe('the unit edge', () => {
     expect(fromDisplay('volume', us, 5)).toBeCloseTo(convert(5).from('gal').to('l'), 6);
   });
 
+  // The imperial gallon is 4.54609 L exactly (UK Weights and Measures Act 1985); convert-units has
+  // no imperial gallon, so the check is worked by hand: 23 / 4.54609 = 5.0593.
+  it('shows litres as imperial gallons when the brewer chooses them, and only volumes', () => {
+    const imperial: UnitPrefs = { unitSystem: 'us', gravityUnit: 'sg', gallonUnit: 'imperial' };
+    expect(toDisplay('volume', imperial, 23)).toBeCloseTo(5.0593, 4);
+    expect(fromDisplay('volume', imperial, 5)).toBeCloseTo(22.73045, 6);
+    expect(formatQuantity('volume', imperial, 23)).toBe('5.06\u00a0imp gal');
+    expect(formatQuantity('rate', imperial, 4.54609)).toBe('1.00\u00a0imp gal/h');
+    expect(toDisplay('mass', imperial, 4.5)).toBeCloseTo(toDisplay('mass', us, 4.5), 12);
+    // Metric users are unaffected by the gallon choice.
+    expect(formatQuantity('volume', { unitSystem: 'metric', gravityUnit: 'sg', gallonUnit: 'imperial' }, 23)).toBe('23.0\u00a0L');
+  });
+
   // convert-units rounds its pound factor (2.20462), so agreement is to about 1e-5.
   it('shows kilograms as pounds and grams as ounces, against convert-units', () => {
     expect(toDisplay('mass', us, 4.5)).toBeCloseTo(convert(4.5).from('kg').to('lb'), 4);

@@ -10,6 +10,7 @@ import {
   fToC,
   G_PER_OZ,
   KG_PER_LB,
+  LITRES_PER_IMPERIAL_GALLON,
   LITRES_PER_US_GALLON,
   platoToSg,
   sgToPlato,
@@ -23,6 +24,8 @@ export type QuantityKind = 'volume' | 'mass' | 'smallMass' | 'temperature' | 'te
 export interface UnitPrefs {
   unitSystem: UnitSystem;
   gravityUnit: GravityUnit;
+  /** With US units, volumes in US gallons (default) or imperial gallons. */
+  gallonUnit?: 'us' | 'imperial';
 }
 
 export const defaultUnitPrefs: UnitPrefs = { unitSystem: 'metric', gravityUnit: 'sg' };
@@ -37,6 +40,10 @@ interface KindSpec {
 
 const linear = (factor: number) => ({ toUs: (si: number) => si / factor, fromUs: (us: number) => us * factor });
 
+const imperialVolume: Pick<KindSpec, 'toUs' | 'fromUs'> = linear(LITRES_PER_IMPERIAL_GALLON);
+const imperialUnits: Partial<Record<QuantityKind, string>> = { volume: 'imp gal', rate: 'imp gal/h' };
+const isImperial = (kind: QuantityKind, prefs: UnitPrefs) => prefs.unitSystem === 'us' && prefs.gallonUnit === 'imperial' && kind in imperialUnits;
+
 const specs: Record<Exclude<QuantityKind, 'gravity'>, KindSpec> = {
   volume: { metric: { unit: 'L', decimals: 1 }, us: { unit: 'gal', decimals: 2 }, ...linear(LITRES_PER_US_GALLON) },
   rate: { metric: { unit: 'L/h', decimals: 1 }, us: { unit: 'gal/h', decimals: 2 }, ...linear(LITRES_PER_US_GALLON) },
@@ -48,6 +55,7 @@ const specs: Record<Exclude<QuantityKind, 'gravity'>, KindSpec> = {
 
 export function quantityUnit(kind: QuantityKind, prefs: UnitPrefs): string {
   if (kind === 'gravity') return prefs.gravityUnit === 'plato' ? '°P' : 'SG';
+  if (isImperial(kind, prefs)) return imperialUnits[kind]!;
   return specs[kind][prefs.unitSystem].unit;
 }
 
@@ -59,12 +67,14 @@ export function displayDecimals(kind: QuantityKind, prefs: UnitPrefs): number {
 /** SI value → number in the user's unit. */
 export function toDisplay(kind: QuantityKind, prefs: UnitPrefs, si: number): number {
   if (kind === 'gravity') return prefs.gravityUnit === 'plato' ? sgToPlato(si) : si;
+  if (isImperial(kind, prefs)) return imperialVolume.toUs(si);
   return prefs.unitSystem === 'us' ? specs[kind].toUs(si) : si;
 }
 
 /** A number the user typed in their unit → SI. Throws BrewMathError when it cannot be converted. */
 export function fromDisplay(kind: QuantityKind, prefs: UnitPrefs, shown: number): number {
   if (kind === 'gravity') return prefs.gravityUnit === 'plato' ? platoToSg(shown) : shown;
+  if (isImperial(kind, prefs)) return imperialVolume.fromUs(shown);
   return prefs.unitSystem === 'us' ? specs[kind].fromUs(shown) : shown;
 }
 
@@ -107,5 +117,5 @@ export function unitsFor(prefs: UnitPrefs): Units {
 /** The signed-in user's units (metric and SG for visitors). */
 export function useUnits(): Units {
   const { data: me } = useMe();
-  return unitsFor(me ? { unitSystem: me.unitSystem, gravityUnit: me.gravityUnit } : defaultUnitPrefs);
+  return unitsFor(me ? { unitSystem: me.unitSystem, gravityUnit: me.gravityUnit, gallonUnit: me.gallonUnit } : defaultUnitPrefs);
 }

@@ -9,6 +9,8 @@ export const users = mysqlTable('users', {
   unitSystem: mysqlEnum('unit_system', ['metric', 'us']).notNull().default('metric'),
   gravityUnit: mysqlEnum('gravity_unit', ['sg', 'plato']).notNull().default('sg'),
   colourScale: mysqlEnum('colour_scale', ['srm', 'ebc']).notNull().default('srm'),
+  /** With US units, which gallon volumes are shown in. */
+  gallonUnit: mysqlEnum('gallon_unit', ['us', 'imperial']).notNull().default('us'),
   siteRole: mysqlEnum('site_role', ['user', 'admin']).notNull().default('user'),
   /** Bumped to revoke every token issued before (password change or reset). */
   tokenVersion: int('token_version').notNull().default(0),

@@ -42,7 +42,7 @@ export function QuantityField({ name, kind, label, hint, className = '', size = 
   const [text, setText] = useState(() => shownText(kind, units, field.value));
   const [conversionError, setConversionError] = useState<string | null>(null);
   const lastSet = useRef<unknown>(field.value);
-  const unitKey = `${units.unitSystem}/${units.gravityUnit}`;
+  const unitKey = `${units.unitSystem}/${units.gravityUnit}/${units.gallonUnit ?? 'us'}`;
   const lastUnitKey = useRef(unitKey);
 
   useEffect(() => {

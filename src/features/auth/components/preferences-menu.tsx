@@ -1,6 +1,6 @@
 import { Check, CircleUser, LogOut } from 'lucide-react';
 import { useEffect, useRef, useState } from 'react';
-import type { ColourScalePreference, GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
+import type { ColourScalePreference, GallonUnit, GravityUnit, Me, UnitSystem } from '@shared/schemas/auth';
 import { confirmSignOut, useLogout } from '../api/logout';
 import { useUpdatePreferences } from '../api/update-preferences';
 
@@ -13,6 +13,10 @@ const colourOptions: { value: ColourScalePreference; label: string }[] = [
   { value: 'ebc', label: 'EBC (European)' },
 ];
 
+const gallonOptions: { value: GallonUnit; label: string }[] = [
+  { value: 'us', label: 'US gallons (3.785 L)' },
+  { value: 'imperial', label: 'Imperial gallons (4.546 L)' },
+];
 const gravityOptions: { value: GravityUnit; label: string }[] = [
   { value: 'sg', label: 'Specific gravity (1.050)' },
   { value: 'plato', label: 'Degrees Plato (12.4 °P)' },
@@ -66,6 +70,15 @@ export function PreferencesMenu({ me, onSignedOut }: { me: Me; onSignedOut: () =
               </MenuChoice>
             ))}
           </MenuGroup>
+          {me.unitSystem === 'us' && (
+            <MenuGroup label="Gallons">
+              {gallonOptions.map((o) => (
+                <MenuChoice key={o.value} checked={me.gallonUnit === o.value} onSelect={() => update.mutate({ gallonUnit: o.value })}>
+                  {o.label}
+                </MenuChoice>
+              ))}
+            </MenuGroup>
+          )}
           <MenuGroup label="Gravity">
             {gravityOptions.map((o) => (
               <MenuChoice key={o.value} checked={me.gravityUnit === o.value} onSelect={() => update.mutate({ gravityUnit: o.value })}>

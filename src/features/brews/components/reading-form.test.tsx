@@ -8,7 +8,7 @@ import { meQueryOptions } from '@/lib/auth';
 import { ReadingForm } from './reading-form';
 
 function me(unitSystem: Me['unitSystem'] = 'metric'): Me {
-  return { id: 1, email: 'brewer@example.org', displayName: 'Brewer', unitSystem, gravityUnit: 'sg', colourScale: 'srm', siteRole: 'user', clubs: [] };
+  return { id: 1, email: 'brewer@example.org', displayName: 'Brewer', unitSystem, gravityUnit: 'sg', colourScale: 'srm', gallonUnit: 'us', siteRole: 'user', clubs: [] };
 }
 
 function instrument(id: number, snapshot: InstrumentSnapshot): Instrument {

@@ -8,7 +8,7 @@ import { RecipeForm } from './recipe-form';
 
 function renderForm(prefs: Partial<Pick<Me, 'unitSystem' | 'gravityUnit' | 'colourScale'>> = {}) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], unitSystem: 'metric', gravityUnit: 'sg', colourScale: 'srm', ...prefs };
+  const me: Me = { id: 1, email: 'maple@example.org', displayName: 'Maple Thorne', siteRole: 'user', clubs: [], unitSystem: 'metric', gravityUnit: 'sg', colourScale: 'srm', gallonUnit: 'us', ...prefs };
   queryClient.setQueryData(meQueryOptions().queryKey, me);
   const onSaved = vi.fn();
   render(
