@@ -58,9 +58,12 @@ function instrumentRaw(kind: InstrumentKind, raw: ReadingRaw): RawByKind[Instrum
   }
 }
 
-function correct(snapshot: InstrumentSnapshot, raw: ReadingRaw, at: Date) {
+/** The brewer's own units for the stored warnings; only readings' owners add or recompute them. */
+const unitSystemOf = (actor: Actor): 'metric' | 'us' => ((actor as Actor & { unitSystem?: string }).unitSystem === 'us' ? 'us' : 'metric');
+
+function correct(snapshot: InstrumentSnapshot, raw: ReadingRaw, at: Date, unitSystem: 'metric' | 'us') {
   try {
-    return correctReading(snapshot, instrumentRaw(snapshot.kind, raw), at);
+    return correctReading(snapshot, instrumentRaw(snapshot.kind, raw), at, { unitSystem });
   } catch (error) {
     if (error instanceof BrewMathError) throw new BadRequest(error.message, { [error.field ?? '_']: error.message });
     throw error;
@@ -84,7 +87,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
   const snapshot = await snapshotFor(db, actor, kind, body.instrumentId);
   const takenAt = body.takenAt ? new Date(body.takenAt) : new Date();
   const { raw, volumeL } = splitRaw(body);
-  const { corrected, correction, warnings } = correct(snapshot, raw, takenAt);
+  const { corrected, correction, warnings } = correct(snapshot, raw, takenAt, unitSystemOf(actor));
   const stage = readingStage[body.kind];
 
   const id = await db.transaction(async (tx) => {
@@ -155,7 +158,7 @@ export async function recomputeReading(db: Db, actor: Actor, brewId: number, rea
   }
   const oldSnapshot = row.instrumentSnapshot as InstrumentSnapshot;
   const snapshot = await snapshotFor(db, actor, oldSnapshot.kind, row.instrumentId, true);
-  const { corrected, correction, warnings } = correct(snapshot, row.raw, row.takenAt);
+  const { corrected, correction, warnings } = correct(snapshot, row.raw, row.takenAt, unitSystemOf(actor));
   const now = new Date();
   await db.transaction(async (tx) => {
     await tx
