@@ -205,6 +205,18 @@ describe('readings', () => {
     expect(brew.body.deviations.map((d: { code: string }) => d.code)).toEqual(['volume-low']);
   });
 
+  it('words a stored hydrometer warning in the brewer’s own units', async () => {
+    const scene = await makeScene(h);
+    const id = await startBrewDay(scene);
+    const hydrometer = await makeInstrument(scene, { kind: 'hydrometer', name: 'Trial-jar hydrometer', calibrationTempC: 20 });
+    await scene.owner.agent.patch('/api/auth/me').send({ unitSystem: 'us' }).expect(200);
+    const res = await scene.owner.agent.post(`/api/brews/${id}/readings`).send({ kind: 'og', instrumentId: hydrometer, sg: 1.046, sampleTempC: 35, volumeL: 21.5 });
+    expect(res.status).toBe(201);
+    // 20 °C = 68 °F and a 10 °C difference is 18 °F (NIST SP 811, appendix B.8).
+    expect(res.body.warnings).toEqual([expect.stringMatching(/more than 18 °F from the hydrometer's 68 °F calibration/)]);
+    expect(res.body.warnings.join(' ')).not.toMatch(/°C/);
+  });
+
   it('records the pitch time once, for the fermentation log to count from', async () => {
     const scene = await makeScene(h);
     const id = await startBrewDay(scene);

@@ -59,9 +59,12 @@ function instrumentRaw(kind: InstrumentKind, raw: ReadingRaw): RawByKind[Instrum
   }
 }
 
+/** The brewer's own units for the stored warnings; only readings' owners add or recompute them. */
+const unitSystemOf = (actor: Actor): 'metric' | 'us' => ((actor as Actor & { unitSystem?: string }).unitSystem === 'us' ? 'us' : 'metric');
+
 /** An impossible reading is a BrewMathError: the error middleware answers 400 under its field. */
-function correct(snapshot: InstrumentSnapshot, raw: ReadingRaw, at: Date) {
-  return correctReading(snapshot, instrumentRaw(snapshot.kind, raw), at);
+function correct(snapshot: InstrumentSnapshot, raw: ReadingRaw, at: Date, unitSystem: 'metric' | 'us') {
+  return correctReading(snapshot, instrumentRaw(snapshot.kind, raw), at, { unitSystem });
 }
 
 async function snapshotFor(db: Db, actor: Actor, kind: InstrumentKind, instrumentId: number | null, allowArchived = false): Promise<InstrumentSnapshot> {
@@ -81,7 +84,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
   const snapshot = await snapshotFor(db, actor, kind, body.instrumentId);
   const takenAt = body.takenAt ? new Date(body.takenAt) : new Date();
   const { raw, volumeL } = splitRaw(body);
-  const { corrected, correction, warnings } = correct(snapshot, raw, takenAt);
+  const { corrected, correction, warnings } = correct(snapshot, raw, takenAt, unitSystemOf(actor));
   const stage = readingStage[body.kind];
 
   const id = await db.transaction(async (tx) => {
@@ -155,7 +158,7 @@ export async function recomputeReading(db: Db, actor: Actor, brewId: number, rea
   }
   const oldSnapshot = row.instrumentSnapshot;
   const snapshot = await snapshotFor(db, actor, oldSnapshot.kind, row.instrumentId, true);
-  const { corrected, correction, warnings } = correct(snapshot, row.raw, row.takenAt);
+  const { corrected, correction, warnings } = correct(snapshot, row.raw, row.takenAt, unitSystemOf(actor));
   const now = new Date();
   await db.transaction(async (tx) => {
     await lockBrewRow(tx, brewId);

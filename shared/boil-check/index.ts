@@ -94,7 +94,7 @@ function inputPath(field: string | undefined, reading: BoilCheckReading): string
   return field;
 }
 
-function readingToSg(reading: BoilCheckReading): { currentSg: number; used: UsedReading; warnings: string[] } {
+function readingToSg(reading: BoilCheckReading, unitSystem: 'metric' | 'us'): { currentSg: number; used: UsedReading; warnings: string[] } {
   if (reading.kind === 'refractometer') {
     const wcf = reading.wcf ?? DEFAULT_WCF;
     return { currentSg: brixToSg(reading.brix, wcf), used: { kind: 'refractometer', brix: reading.brix, wcf }, warnings: [] };
@@ -102,7 +102,7 @@ function readingToSg(reading: BoilCheckReading): { currentSg: number; used: Used
   if (reading.kind === 'hydrometer') {
     const calibrationTempC = reading.calibrationTempC ?? DEFAULT_CALIBRATION_TEMP_C;
     const currentSg = correctHydrometer(reading.sg, reading.sampleTempC, calibrationTempC);
-    const warning = hydrometerTempWarning(reading.sampleTempC, calibrationTempC);
+    const warning = hydrometerTempWarning(reading.sampleTempC, calibrationTempC, unitSystem);
     return {
       currentSg,
       used: { kind: 'hydrometer', sg: reading.sg, sampleTempC: reading.sampleTempC, calibrationTempC },
@@ -116,10 +116,10 @@ function readingToSg(reading: BoilCheckReading): { currentSg: number; used: Used
  * Runs the late-boil check. Throws a BrewMathError for impossible input; its `field` is the
  * path in BoilCheckInput (e.g. `reading.brix`, `boilOffLPerHour`, `potentials.dme`).
  */
-export function runBoilCheck(input: BoilCheckInput): BoilCheckOutcome {
+export function runBoilCheck(input: BoilCheckInput, { unitSystem = 'metric' }: { unitSystem?: 'metric' | 'us' } = {}): BoilCheckOutcome {
   const { reading } = input;
   try {
-    const { currentSg, used, warnings } = readingToSg(reading);
+    const { currentSg, used, warnings } = readingToSg(reading, unitSystem);
     const onHand = new Set<ExtractKind>(input.extractsOnHand ?? EXTRACT_KINDS);
     const potentials = input.potentials;
     if (potentials) {

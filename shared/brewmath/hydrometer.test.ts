@@ -90,4 +90,15 @@ describe('hydrometer temperature warning', () => {
     expect(hydrometerTempWarning(35, 20)).toMatch(/20 °C calibration/);
     expect(hydrometerTempWarning(35, 15.56)).toMatch(/15.56 °C/);
   });
+
+  // °F = °C × 9/5 + 32, and a difference of 10 °C is 18 °F (NIST SP 811, appendix B.8).
+  it('speaks °F to a brewer on US units, with no °C left in it', () => {
+    const far = hydrometerTempWarning(35, 15.56, 'us')!;
+    expect(far).toMatch(/more than 18 °F from the hydrometer's 60 °F calibration/);
+    expect(far).not.toMatch(/°C/);
+    const hot = hydrometerTempWarning(75, 20, 'us')!;
+    expect(hot).toMatch(/A sample at 167 °F is outside 32–140 °F/);
+    expect(hot).toMatch(/near 68 °F/);
+    expect(hot).not.toMatch(/°C/);
+  });
 });

@@ -1,4 +1,5 @@
 import { BrewMathError } from './errors';
+import { cToF, deltaCToF } from './units';
 import { SG_MAX, SG_MIN, requireRange, requireSg, show, showSg } from './validate';
 
 /**
@@ -55,16 +56,24 @@ export function correctHydrometer(readingSg: number, sampleTempC: number, calibr
   return corrected;
 }
 
-/** A short caution for the reading form, or null when the sample temperature is fine. */
-export function hydrometerTempWarning(sampleTempC: number, calibrationTempC = 20): string | null {
+/**
+ * A short caution for the reading form, or null when the sample temperature is fine. Temperatures
+ * are said in the brewer's units: °C for metric, °F for US (the limits themselves stay in °C).
+ */
+export function hydrometerTempWarning(sampleTempC: number, calibrationTempC = 20, unitSystem: 'metric' | 'us' = 'metric'): string | null {
   requireRange(sampleTempC, -50, 150, 'sampleTempC', 'Sample temperature', '°C');
   requireRange(calibrationTempC, 0, 40, 'calibrationTempC', 'Calibration temperature', '°C');
-  const cal = show(calibrationTempC, 2);
+  const us = unitSystem === 'us';
+  const temp = (c: number, digits: number) => `${show(us ? cToF(c) : c, digits)} ${us ? '°F' : '°C'}`;
+  // 15.56 °C is the 60 °F of US hydrometers: one decimal in °F says it as printed on them.
+  const cal = temp(calibrationTempC, us ? 1 : 2);
   if (sampleTempC < TRUSTED_MIN_C || sampleTempC > TRUSTED_MAX_C) {
-    return `A sample at ${show(sampleTempC, 1)} °C is outside 0–60 °C, where no temperature correction can be trusted. Cool or warm it to near ${cal} °C and read again.`;
+    const span = us ? `${show(cToF(TRUSTED_MIN_C), 1)}–${show(cToF(TRUSTED_MAX_C), 1)} °F` : `${TRUSTED_MIN_C}–${TRUSTED_MAX_C} °C`;
+    return `A sample at ${temp(sampleTempC, 1)} is outside ${span}, where no temperature correction can be trusted. Cool or warm it to near ${cal} and read again.`;
   }
   if (Math.abs(sampleTempC - calibrationTempC) > FAR_FROM_CALIBRATION_C) {
-    return `The sample is more than ${FAR_FROM_CALIBRATION_C} °C from the hydrometer's ${cal} °C calibration, so the corrected value is an estimate. For an exact reading, bring it nearer ${cal} °C.`;
+    const far = us ? `${show(deltaCToF(FAR_FROM_CALIBRATION_C), 1)} °F` : `${FAR_FROM_CALIBRATION_C} °C`;
+    return `The sample is more than ${far} from the hydrometer's ${cal} calibration, so the corrected value is an estimate. For an exact reading, bring it nearer ${cal}.`;
   }
   return null;
 }

@@ -74,15 +74,20 @@ export interface CorrectedReading {
 
 type SnapshotOf<K extends InstrumentKind> = Extract<InstrumentSnapshot, { kind: K }>;
 
+/** How warnings are worded: temperatures in the brewer's units (metric unless told). */
+export interface WordsOptions {
+  unitSystem?: 'metric' | 'us';
+}
+
 /**
  * Applies a calibration snapshot to a raw reading. Throws a BrewMathError (with `field` naming
  * the raw input) for impossible input; `now` decides whether a pH meter is overdue.
  */
-export function correctReading<K extends InstrumentKind>(snapshot: SnapshotOf<K>, raw: RawByKind[K], now?: Date): CorrectedReading;
-export function correctReading(snapshot: InstrumentSnapshot, raw: RawByKind[InstrumentKind], now: Date = new Date()): CorrectedReading {
+export function correctReading<K extends InstrumentKind>(snapshot: SnapshotOf<K>, raw: RawByKind[K], now?: Date, options?: WordsOptions): CorrectedReading;
+export function correctReading(snapshot: InstrumentSnapshot, raw: RawByKind[InstrumentKind], now: Date = new Date(), options: WordsOptions = {}): CorrectedReading {
   switch (snapshot.kind) {
     case 'hydrometer':
-      return correctHydrometerReading(snapshot, raw as HydrometerRaw);
+      return correctHydrometerReading(snapshot, raw as HydrometerRaw, options.unitSystem);
     case 'refractometer':
       return correctRefractometerReading(snapshot, raw as RefractometerRaw);
     case 'thermometer':
@@ -101,7 +106,7 @@ function requireNumber(value: unknown, field: string, label: string): number {
 
 const fmt = (value: number, digits: number) => Number(value.toFixed(digits)).toString();
 
-function correctHydrometerReading(snapshot: HydrometerSnapshot, raw: HydrometerRaw): CorrectedReading {
+function correctHydrometerReading(snapshot: HydrometerSnapshot, raw: HydrometerRaw, unitSystem: 'metric' | 'us' = 'metric'): CorrectedReading {
   const sg = requireNumber(raw?.sg, 'sg', 'Hydrometer reading');
   const sampleTempC = requireNumber(raw?.sampleTempC, 'sampleTempC', 'Sample temperature');
   const calibrationTempC = snapshot.calibrationTempC;
@@ -114,7 +119,7 @@ function correctHydrometerReading(snapshot: HydrometerSnapshot, raw: HydrometerR
     throw error;
   }
   const warnings: string[] = [];
-  const tempWarning = hydrometerTempWarning(sampleTempC, calibrationTempC);
+  const tempWarning = hydrometerTempWarning(sampleTempC, calibrationTempC, unitSystem);
   if (tempWarning) warnings.push(tempWarning);
   if (sampleTempC >= 60) {
     warnings.push('Hot wort and steam burn: cool the sample in the trial jar before reading, and never put a hydrometer in boiling wort.');

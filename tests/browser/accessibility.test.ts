@@ -128,6 +128,13 @@ for (const [size, viewport] of [
           await check.getByLabel('Brix').fill('11.4');
           await check.getByLabel('Wort in the kettle (hot)').fill('26');
           await check.getByRole('button', { name: 'Choose this' }).first().waitFor();
+          // The "why" is written before a choice is saved, so it comes before the first "Choose this".
+          const whyFirst = await page.evaluate(() => {
+            const why = [...document.querySelectorAll('label')].find((l) => l.textContent?.startsWith('Why (optional)'));
+            const choose = [...document.querySelectorAll('button')].find((b) => b.textContent?.includes('Choose this'));
+            return Boolean(why && choose && why.compareDocumentPosition(choose) & Node.DOCUMENT_POSITION_FOLLOWING);
+          });
+          expect(whyFirst).toBe(true);
         }
         found.push(...(await audit(page, path, size)), ...(await smallTargets(page, path, size)));
       }

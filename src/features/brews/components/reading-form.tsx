@@ -324,7 +324,7 @@ function Preview({ units, instruments }: { units: Units; instruments: readonly I
   let problem: string | null = null;
   if (raw && valuesOk) {
     try {
-      const result = correctReading(snapshot, raw);
+      const result = correctReading(snapshot, raw, new Date(), { unitSystem: units.unitSystem });
       corrected = { value: result.corrected, warnings: result.warnings };
     } catch (error) {
       if (!(error instanceof BrewMathError)) throw error;

@@ -31,7 +31,7 @@ function work(snapshot: InstrumentSnapshot, v: CheckValues, units: Units): Outco
     switch (snapshot.kind) {
       case 'hydrometer': {
         if (!isNum(v.sg) || !isNum(v.sampleTempC)) return null;
-        const result = correctReading(snapshot, { sg: v.sg as number, sampleTempC: v.sampleTempC as number });
+        const result = correctReading(snapshot, { sg: v.sg as number, sampleTempC: v.sampleTempC as number }, new Date(), { unitSystem: units.unitSystem });
         return { raw: `${units.format('gravity', v.sg as number)} at ${units.format('temperature', v.sampleTempC as number)}`, result, corrected: units.format('gravity', result.corrected) };
       }
       case 'refractometer': {

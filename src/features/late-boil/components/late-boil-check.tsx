@@ -221,17 +221,17 @@ type Check =
   | { ok: true; input: BoilCheckParsed; outcome: BoilCheckOutcome }
   | { ok: false; missing: string[]; problems: { path: string; message: string }[] };
 
-function useCheck(values: LateBoilFormValues): Check {
+function useCheck(values: LateBoilFormValues, unitSystem: Units['unitSystem']): Check {
   return useMemo(() => {
     const parsed = parseCheck(values);
     if (!parsed.ok) return parsed;
     try {
-      return { ok: true, input: parsed.input, outcome: runBoilCheck(parsed.input) };
+      return { ok: true, input: parsed.input, outcome: runBoilCheck(parsed.input, { unitSystem }) };
     } catch (error) {
       if (!(error instanceof BrewMathError)) throw error;
       return { ok: false, missing: [], problems: [{ path: error.field ?? '', message: error.message }] };
     }
-  }, [values]);
+  }, [values, unitSystem]);
 }
 
 function Answer({
@@ -243,7 +243,7 @@ function Answer({
   renderBeforeOptions,
 }: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'renderBeforeOptions'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
   const { values } = useFormikContext<LateBoilFormValues>();
-  const check = useCheck(values);
+  const check = useCheck(values, units.unitSystem);
   const [choice, setChoice] = useState<ChoiceState | null>(null);
   const mounted = useRef(true);
   useEffect(() => {
