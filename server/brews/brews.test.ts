@@ -203,6 +203,10 @@ describe('readings', () => {
     expect(brew.body.og).toBeCloseTo(1.04869, 4);
     // 21.5 L is 6.5 % short of 23 L: more than the 5 % allowed (common practice, no source).
     expect(brew.body.deviations.map((d: { code: string }) => d.code)).toEqual(['volume-low']);
+    // The answer carries what the reading changed, exactly as the whole day now reads, so the
+    // client updates its copy without reloading the day.
+    const { og, pitchedAt, currentStage, updatedAt, stages, deviations } = brew.body;
+    expect(res.body.brewDay).toEqual({ og, pitchedAt, currentStage, updatedAt, stages, deviations });
   });
 
   it('words a stored hydrometer warning in the brewer’s own units', async () => {

@@ -6,7 +6,7 @@
  */
 import { and, eq, isNull } from 'drizzle-orm';
 import { correctReading, defaultSnapshot, type RawByKind } from '@shared/instruments';
-import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
+import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingCreated, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
 import type { InstrumentKind, InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { Actor } from '../auth/permissions';
 import type { Db } from '../db/client';
@@ -14,7 +14,7 @@ import { lockBrewRow } from '../db/locks';
 import { brewNotes, brewReadings, brews } from '../db/schema';
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, NotFound } from '../lib/errors';
-import { loadBrewForActor, touchStage, toReading } from './service';
+import { brewDayChange, loadBrewForActor, touchStage, toReading } from './service';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 /** The instrument a reading is taken with: fixed by its kind, or the gravity method the brewer chose. */
@@ -78,7 +78,7 @@ async function snapshotFor(db: Db, actor: Actor, kind: InstrumentKind, instrumen
   }
 }
 
-export async function addReading(db: Db, actor: Actor, brewId: number, body: ReadingBody): Promise<BrewReading> {
+export async function addReading(db: Db, actor: Actor, brewId: number, body: ReadingBody): Promise<ReadingCreated> {
   const stored = await loadBrewForActor(db, actor, brewId, 'update');
   const kind = instrumentKindFor(body);
   const snapshot = await snapshotFor(db, actor, kind, body.instrumentId);
@@ -115,8 +115,8 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
     }
     return id;
   });
-  const [row] = await db.select().from(brewReadings).where(eq(brewReadings.id, id));
-  return toReading(row);
+  const [[row], brewDay] = await Promise.all([db.select().from(brewReadings).where(eq(brewReadings.id, id)), brewDayChange(db, brewId)]);
+  return { ...toReading(row), brewDay };
 }
 
 export async function loadReading(db: Db, brewId: number, readingId: number) {

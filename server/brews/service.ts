@@ -9,6 +9,7 @@ import { findDeviations } from '@shared/brew-deviations';
 import {
   brewStages,
   readingQuantity,
+  type BrewDayChange,
   type BrewDecision,
   type BrewDeviation,
   type BrewDetail,
@@ -175,6 +176,35 @@ export function brewDayDeviations(targets: RecipeTargets, readings: readonly Bre
   });
 }
 
+function stagesOf(stageRows: readonly (typeof brewStagesTable.$inferSelect)[]): BrewStageState[] {
+  return brewStages.map((stage) => {
+    const s = stageRows.find((r) => r.stage === stage);
+    return { stage, startedAt: iso(s?.startedAt ?? null), completedAt: iso(s?.completedAt ?? null), skippedAt: iso(s?.skippedAt ?? null) };
+  });
+}
+
+/**
+ * What a write changed on the brew day (OG, stages, deviations), without photos, notes or
+ * the readings themselves: the answer to a new reading, so the client need not reload the day.
+ */
+export async function brewDayChange(db: DbOrTx, brewId: number): Promise<BrewDayChange> {
+  const [[row], stageRows, readingRows, decisionRows] = await Promise.all([
+    db.select().from(brews).where(eq(brews.id, brewId)),
+    db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, brewId)),
+    db.select().from(brewReadings).where(eq(brewReadings.brewId, brewId)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
+    db.select().from(brewDecisions).where(eq(brewDecisions.brewId, brewId)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
+  ]);
+  const readings = readingRows.map((r) => toReading(r));
+  return {
+    og: readings.findLast((r) => r.kind === 'og')?.corrected ?? null,
+    pitchedAt: iso(row.pitchedAt),
+    currentStage: row.currentStage,
+    updatedAt: row.updatedAt.toISOString(),
+    stages: stagesOf(stageRows),
+    deviations: brewDayDeviations(row.targetsSnapshot as RecipeTargets, readings, decisionRows.map(toDecision)),
+  };
+}
+
 export async function getBrew(db: DbOrTx, actor: Actor, id: number): Promise<BrewDetail> {
   const stored = await loadBrewForActor(db, actor, id, 'read');
   return assembleBrew(db, actor, stored);
@@ -203,10 +233,7 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
   const decisions = decisionRows.map(toDecision);
   const targets = stored.row.targetsSnapshot;
   const equipment = stored.row.equipmentSnapshot;
-  const stages: BrewStageState[] = brewStages.map((stage) => {
-    const s = stageRows.find((r) => r.stage === stage);
-    return { stage, startedAt: iso(s?.startedAt ?? null), completedAt: iso(s?.completedAt ?? null), skippedAt: iso(s?.skippedAt ?? null) };
-  });
+  const stages = stagesOf(stageRows);
   const og = [...readings].reverse().find((r) => r.kind === 'og')?.corrected ?? null;
   const resource = { ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds };
   return {

@@ -488,6 +488,21 @@ export interface BrewDetail extends BrewSummary {
   permissions: { edit: boolean; share: boolean; delete: boolean; comment: boolean };
 }
 
+/** What a new reading changed on its brew day: the client updates its copy from this instead of reloading the whole day. */
+export interface BrewDayChange {
+  og: number | null;
+  pitchedAt: string | null;
+  currentStage: BrewStage;
+  updatedAt: string;
+  stages: BrewStageState[];
+  deviations: BrewDeviation[];
+}
+
+/** POST /api/brews/:id/readings answers the reading and what it changed. */
+export interface ReadingCreated extends BrewReading {
+  brewDay: BrewDayChange;
+}
+
 export interface BrewSharing {
   brewId: number;
   clubIds: number[];
