@@ -46,4 +46,20 @@ export default tseslint.config(
     files: ['src/**/*.{ts,tsx}'],
     rules: reactHooks.configs.recommended.rules,
   },
+  {
+    // Every rate limit is built in one place, from configuration, with the shared store.
+    files: ['server/**/*.ts'],
+    ignores: ['server/lib/rate-limit.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts and take its middleware as a router argument.' },
+            { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },
+          ],
+        },
+      ],
+    },
+  },
 );
