@@ -54,14 +54,19 @@ export default tseslint.config(
     rules: reactHooks.configs.recommended.rules,
   },
   {
-    // One way to do each thing: CSV goes through server/lib/csv.ts (one reader, one writer, one formula guard).
+    // One way to do each thing: CSV goes through server/lib/csv.ts (one reader, one writer, one
+    // formula guard); every rate limit is built in server/lib/rate-limit.ts, from configuration.
     files: ['**/*.{ts,tsx}'],
-    ignores: ['server/lib/csv.ts'],
+    ignores: ['server/lib/csv.ts', 'server/lib/rate-limit.ts'],
     rules: {
       'no-restricted-imports': [
         'error',
         {
           patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
+          paths: [
+            { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts and take its middleware as a router argument.' },
+            { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },
+          ],
         },
       ],
     },

@@ -149,3 +149,27 @@ describe('sweeping objects no photo points to', () => {
     expect(sha(await readAll(await store.get(row.storageKey!)))).toBe(kept.body.sha256);
   });
 });
+
+describe('photo store out of reach', () => {
+  let broken: TestHarness;
+  beforeAll(async () => {
+    // The same database, a photo store on a port where nothing listens.
+    broken = await createHarness({ S3_ENDPOINT: 'http://127.0.0.1:9' });
+  });
+
+  it('answers a photo view and an upload with 503 and stores no row', async () => {
+    const { brewId, readingId, scene } = await readingWith(broken);
+    const [{ id }] = await broken.ctx.db
+      .insert(readingPhotos)
+      .values({ readingId, brewId, mime: 'image/png', sizeBytes: 10, sha256: sha(Buffer.from('x')), storageKey: store.newKey(brewId) })
+      .$returningId();
+    const view = await scene.owner.agent.get(`/api/brews/${brewId}/readings/${readingId}/photos/${id}`);
+    expect(view.status).toBe(503);
+    expect(view.body.error).toBe('storage_unavailable');
+    expect(view.headers['cache-control'] ?? '').not.toMatch(/max-age=3600/);
+    const upload = await scene.owner.agent.post(`/api/brews/${brewId}/readings/${readingId}/photos`).attach('photo', pngLike(), 'jar.png');
+    expect(upload.status).toBe(503);
+    const rows = await broken.ctx.db.select({ id: readingPhotos.id }).from(readingPhotos).where(eq(readingPhotos.readingId, readingId));
+    expect(rows).toHaveLength(1);
+  });
+});

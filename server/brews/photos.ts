@@ -1,8 +1,8 @@
 /**
  * Photos of a reading (a hydrometer in its trial jar, a refractometer's scale). The row (type,
  * size, SHA-256) is in MariaDB, the bytes in object storage (./photo-store.ts), so every API
- * instance serves the same photo: see docs/decisions/0011-photos-in-object-storage.md. The type is read from the file's first bytes; the
- * name and Content-Type the client sends are not trusted.
+ * instance serves the same photo: see docs/decisions/0011-photos-in-object-storage.md. The type
+ * is read from the file's first bytes; the name and Content-Type the client sends are not trusted.
  */
 import { createHash } from 'node:crypto';
 import { pipeline } from 'node:stream/promises';
@@ -99,6 +99,9 @@ export async function sendPhoto(db: Db, store: PhotoStore, actor: Actor, brewId:
   await loadBrewForActor(db, actor, brewId, 'read');
   const row = await findPhoto(db, brewId, readingId, photoId);
   const etag = `"${row.sha256}"`;
+  const fresh = req.headers['if-none-match'] === etag;
+  // Asked before any header is set, so a store that cannot answer gives a plain 503.
+  const body = !fresh && row.storageKey ? await store.get(row.storageKey) : null;
   res.set({
     'Content-Type': row.mime,
     'X-Content-Type-Options': 'nosniff',
@@ -106,16 +109,15 @@ export async function sendPhoto(db: Db, store: PhotoStore, actor: Actor, brewId:
     'Content-Disposition': `inline; filename="reading-${readingId}-photo-${photoId}.${row.mime.split('/')[1]}"`,
     ETag: etag,
   });
-  if (req.headers['if-none-match'] === etag) {
+  if (fresh) {
     res.status(304).end();
     return;
   }
   // Rows from before object storage keep their bytes until `npm run photos:to-s3` moves them.
-  if (!row.storageKey) {
+  if (!body) {
     res.status(200).end(row.data);
     return;
   }
-  const body = await store.get(row.storageKey);
   res.set('Content-Length', String(row.sizeBytes)).status(200);
   await pipeline(body, res);
 }
