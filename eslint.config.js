@@ -84,4 +84,17 @@ export default tseslint.config(
       ],
     },
   },
+  {
+    // One query-key scheme: every key comes from the feature's api/keys.ts.
+    files: ['src/features/**/*.{ts,tsx}'],
+    ignores: ['src/features/*/api/keys.ts', '**/*.test.tsx'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        { selector: "Property[key.name='queryKey'] > ArrayExpression", message: "Build query keys in the feature's api/keys.ts." },
+        { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
+        { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+      ],
+    },
+  },
 );

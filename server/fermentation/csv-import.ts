@@ -30,7 +30,7 @@ import { fermentationReadings } from '../db/schema';
 import { listInstruments } from '../instruments/service';
 import { fieldErrors } from '../lib/handle';
 import { BadRequest, Conflict, HttpError } from '../lib/errors';
-import { CsvParseError, CsvTooManyRowsError, detectDelimiter, readCsv, stripBom, type CsvRecord } from '../lib/csv';
+import { CsvParseError, CsvTooManyRowsError, detectDelimiter, readCsv, stripBom, unguardFormula, type CsvRecord } from '../lib/csv';
 import { scheduleAfterReadings } from './reminders';
 import { assembleLog, correctRaw, dedupeKey, existingKeys, expectedFgOf, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
@@ -132,7 +132,7 @@ async function prepareRows(db: Db, actor: Actor, stored: StoredBrew, records: Cs
     let snapshot: InstrumentSnapshot = defaultSnapshot(r.method);
     if (r.instrumentName) {
       // Our export guards text against spreadsheet formulas with a leading apostrophe.
-      const name = r.instrumentName.replace(/^'(?=[=+\-@])/, '');
+      const name = unguardFormula(r.instrumentName);
       const all = byName.get(name.toLowerCase()) ?? [];
       const matches = all.filter((s) => s.kind === r.method);
       if (matches.length === 0) {
@@ -321,7 +321,7 @@ export async function importReadings(db: Db, actor: Actor, brewId: number, buffe
             warnings: p.warnings,
             estimate: p.estimate,
             takenAt: p.source.takenAt,
-            note: p.source.note.replace(/^'(?=[=+\-@])/, ''),
+            note: unguardFormula(p.source.note),
             source: 'csv' as const,
             dedupeKey: p.key,
             createdBy: actor.id,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CsvParseError, CsvTooManyRowsError, detectDelimiter, formulaSafe, readCsv, writeCsv } from './csv';
+import { CsvParseError, CsvTooManyRowsError, detectDelimiter, formulaSafe, readCsv, unguardFormula, writeCsv } from './csv';
 
 const cells = (text: string) => readCsv(text).map((r) => r.cells);
 
@@ -83,6 +83,11 @@ describe('CSV after RFC 4180 section 2', () => {
 describe('the one spreadsheet-formula guard', () => {
   it('puts an apostrophe before text a spreadsheet would run', () => {
     for (const text of ['=1+1', '+1', '-1', '@SUM(A1)', '\t=1', '\r=1']) expect(formulaSafe(text)).toBe(`'${text}`);
+  });
+
+  it('is undone on reading our own export back, and only there', () => {
+    for (const text of ['=1+1', '-1', '@x', '\t=1', "'quoted", 'plain']) expect(unguardFormula(formulaSafe(text))).toBe(text);
+    expect(unguardFormula("'plain")).toBe("'plain");
   });
 
   it('leaves other text alone', () => {

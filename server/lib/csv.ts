@@ -112,8 +112,15 @@ export function readCsv(text: string, { delimiter = detectDelimiter(stripBom(tex
 
 /** A spreadsheet would run text starting with = + - @ (or a tab or CR) as a formula; an apostrophe stops that (OWASP, CSV injection). */
 export function formulaSafe(text: string): string {
-  return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+  return FORMULA_START.test(text) ? `'${text}` : text;
 }
+
+/** The text as typed, from a cell `formulaSafe` wrote (reading our own export back). */
+export function unguardFormula(text: string): string {
+  return text.startsWith("'") && FORMULA_START.test(text.slice(1)) ? text.slice(1) : text;
+}
+
+const FORMULA_START = /^[=+\-@\t\r]/;
 
 export type CsvCell = string | number | null | undefined;
 

@@ -4,11 +4,13 @@ import { setUnauthorizedHandler } from '@/lib/api-client';
 import { createQueryClient } from '@/lib/query-client';
 import { meQueryOptions } from '@/lib/auth';
 import { AppProvider } from './provider';
+import { linkFeatureCaches } from './query-links';
 import { createAppRouter } from './router';
 
 export function App() {
   const [{ queryClient, router }] = useState(() => {
     const queryClient = createQueryClient();
+    linkFeatureCaches(queryClient);
     const router = createAppRouter(queryClient);
     setUnauthorizedHandler(() => {
       queryClient.setQueryData(meQueryOptions().queryKey, null);

@@ -15,9 +15,9 @@ function owns(me: Me) {
  * seen on this device, so an offline brew day still opens; the server checks the session again
  * when anything is sent.
  */
-export async function getMe(): Promise<Me | null> {
+export async function getMe(signal?: AbortSignal): Promise<Me | null> {
   try {
-    const me = await api.get<Me>('/api/auth/me');
+    const me = await api.get<Me>('/api/auth/me', { signal });
     owns(me);
     signedInAgain();
     void saveMeCopy(me).catch(() => undefined);
@@ -38,7 +38,7 @@ export async function getMe(): Promise<Me | null> {
 }
 
 // 'always': offline, answer from the device copy instead of pausing the page forever.
-export const meQueryOptions = () => queryOptions({ queryKey: ['auth', 'me'], queryFn: getMe, staleTime: 5 * 60_000, networkMode: 'always' });
+export const meQueryOptions = () => queryOptions({ queryKey: ['auth', 'me'], queryFn: ({ signal }) => getMe(signal), staleTime: 5 * 60_000, networkMode: 'always' });
 
 export function useMe() {
   return useQuery(meQueryOptions());

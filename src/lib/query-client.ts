@@ -14,3 +14,11 @@ export function createQueryClient() {
     },
   });
 }
+
+/**
+ * What a feature's mutation makes stale in another feature, said as a fact (`meta` of the
+ * mutation); src/app/query-links.ts knows which queries that is, since features never import
+ * each other.
+ */
+export type StaleElsewhere = 'brew-status';
+export const staleElsewhere = (what: StaleElsewhere) => ({ staleElsewhere: what });

@@ -1,4 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { ArrowLeft, Download } from 'lucide-react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { fermentationCsvUrl } from '@/features/fermentation/api/import-csv';
@@ -13,6 +13,7 @@ import { OfflineStatus } from '@/components/offline/offline-status';
 import { QueuedList } from '@/components/offline/queued-list';
 import { ReadingForm } from '@/features/fermentation/components/reading-form';
 import { ReadingsList } from '@/features/fermentation/components/readings-list';
+import { instrumentsQueryOptions } from '@/features/instruments/api/list-instruments';
 import { RemindersToggle } from '@/features/fermentation/components/reminders-toggle';
 import { TemperaturePanel } from '@/features/fermentation/components/temperature-panel';
 import { VerdictBanner } from '@/features/fermentation/components/verdict-banner';
@@ -46,6 +47,8 @@ function Missing({ error }: { error: Error | null }) {
 export function Component() {
   const id = Number(useParams().id);
   const { data: log, isPending, error } = useFermentationLog(id);
+  // The instruments feature's own cache entry, so a calibration saved there reaches the picker at once.
+  const instruments = useQuery({ ...instrumentsQueryOptions(), enabled: log?.brew.isOwner === true });
   if (isPending) return <Loading label="Loading the fermentation log…" />;
   if (error || !log) return <Missing error={error} />;
   const { brew } = log;
@@ -94,7 +97,7 @@ export function Component() {
           {canEdit && (
             <Card>
               <h2 className="mb-3 text-lg font-semibold text-cellar-900">Add a reading</h2>
-              <ReadingForm brewId={brew.id} og={brew.og} pitchedAt={brew.pitchedAt} />
+              <ReadingForm brewId={brew.id} og={brew.og} pitchedAt={brew.pitchedAt} instruments={instruments.data} instrumentsFailed={instruments.isError} />
             </Card>
           )}
         </>

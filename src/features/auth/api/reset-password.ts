@@ -3,12 +3,13 @@ import type { Me } from '@shared/schemas/auth';
 import type { PasswordResetInput, PasswordResetStatus } from '@shared/schemas/password-reset';
 import { api } from '@/lib/api-client';
 import { meQueryOptions } from '@/lib/auth';
+import { authKeys } from './keys';
 
 const path = (token: string) => `/api/auth/password-reset/${encodeURIComponent(token)}`;
 
-export const checkResetLink = (token: string) => api.get<PasswordResetStatus>(path(token));
+export const checkResetLink = (token: string, signal?: AbortSignal) => api.get<PasswordResetStatus>(path(token), { signal });
 
-export const resetLinkQueryOptions = (token: string) => queryOptions({ queryKey: ['password-reset', token], queryFn: () => checkResetLink(token), staleTime: 0 });
+export const resetLinkQueryOptions = (token: string) => queryOptions({ queryKey: authKeys.resetLink(token), queryFn: ({ signal }) => checkResetLink(token, signal), staleTime: 0 });
 
 export function useResetLink(token: string) {
   return useQuery(resetLinkQueryOptions(token));

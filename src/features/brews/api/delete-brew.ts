@@ -13,7 +13,7 @@ export function useDeleteBrew() {
     onSuccess: (_void, id) => {
       queryClient.removeQueries({ queryKey: brewKeys.detail(id) });
       // Lists only: refetching the deleted brew day would only answer 404.
-      return queryClient.invalidateQueries({ queryKey: [...brewKeys.all, 'list'] });
+      return queryClient.invalidateQueries({ queryKey: brewKeys.lists() });
     },
   });
 }

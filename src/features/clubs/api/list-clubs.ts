@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ClubSummary } from '@shared/schemas/clubs';
 import { api } from '@/lib/api-client';
+import { clubKeys } from './keys';
 
-export const listClubs = () => api.get<ClubSummary[]>('/api/clubs');
+export const listClubs = (signal?: AbortSignal) => api.get<ClubSummary[]>('/api/clubs', { signal });
 
-export const clubsQueryOptions = () => queryOptions({ queryKey: ['clubs'], queryFn: listClubs });
+export const clubsQueryOptions = () => queryOptions({ queryKey: clubKeys.all, queryFn: ({ signal }) => listClubs(signal) });
 
 export function useClubs() {
   return useQuery(clubsQueryOptions());

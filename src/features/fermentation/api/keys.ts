@@ -1,6 +1,5 @@
-/** Query keys: a brew's fermentation log, and the brewer's instruments for the picker. */
+/** Query keys: a brew's fermentation log (the instruments for the picker are the instruments feature's, passed in by src/app). */
 export const fermentationKeys = {
   all: ['fermentation'] as const,
   log: (brewId: number) => [...fermentationKeys.all, 'log', brewId] as const,
-  instruments: () => [...fermentationKeys.all, 'instruments'] as const,
 };

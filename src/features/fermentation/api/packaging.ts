@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { FermentationLog, PackagingInput } from '@shared/schemas/fermentation';
 import { api } from '@/lib/api-client';
+import { staleElsewhere } from '@/lib/query-client';
 import { fermentationKeys } from './keys';
 
 export const recordPackaging = (brewId: number, input: PackagingInput) => api.post<FermentationLog>(`/api/brews/${brewId}/fermentation/packaging`, input);
@@ -10,11 +11,9 @@ export function useRecordPackaging(brewId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: PackagingInput) => recordPackaging(brewId, input),
-    onSuccess: (log) => {
-      queryClient.setQueryData(fermentationKeys.log(brewId), log);
-      // The brew day's status changed too.
-      void queryClient.invalidateQueries({ queryKey: ['brews'] });
-    },
+    // The brew day's status changed too (refreshed by src/app/query-links.ts).
+    meta: staleElsewhere('brew-status'),
+    onSuccess: (log) => queryClient.setQueryData(fermentationKeys.log(brewId), log),
   });
 }
 
@@ -22,9 +21,7 @@ export function useUndoPackaging(brewId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => undoPackaging(brewId),
-    onSuccess: (log) => {
-      queryClient.setQueryData(fermentationKeys.log(brewId), log);
-      void queryClient.invalidateQueries({ queryKey: ['brews'] });
-    },
+    meta: staleElsewhere('brew-status'),
+    onSuccess: (log) => queryClient.setQueryData(fermentationKeys.log(brewId), log),
   });
 }

@@ -3,6 +3,7 @@ import { Droplets, Microscope, Thermometer } from 'lucide-react';
 import { useState, useEffect, useRef } from 'react';
 import { DEFAULT_WCF, sgToBrix } from '@shared/brewmath';
 import { fermentationReadingInputSchema, type FermentationMethod, type FermentationReadingInput } from '@shared/schemas/fermentation';
+import type { Instrument } from '@shared/schemas/instruments';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
@@ -10,7 +11,6 @@ import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
 import { useUnits } from '@/lib/units';
 import { useAddFermentationReading } from '../api/add-reading';
-import { useMyInstruments } from '../api/list-instruments';
 import { dayLabel, fromLocalInput, methodLabels, toLocalInput } from './words';
 import { SaveNotice } from '@/components/ui/save-notice';
 
@@ -55,7 +55,13 @@ const methods: { method: FermentationMethod; label: string; Icon: typeof Droplet
 ];
 
 /** Log a gravity or fermenter temperature reading; what was typed stays if the save fails. */
-export function ReadingForm({ brewId, og, pitchedAt }: { brewId: number; og: number | null; pitchedAt: string }) {
+/** The brewer's instruments come from the instruments feature's one cache entry, handed in by src/app. */
+export interface InstrumentChoices {
+  instruments: Instrument[] | undefined;
+  instrumentsFailed: boolean;
+}
+
+export function ReadingForm({ brewId, og, pitchedAt, instruments, instrumentsFailed }: { brewId: number; og: number | null; pitchedAt: string } & InstrumentChoices) {
   const add = useAddFermentationReading(brewId);
   const units = useUnits();
   const [saved, setSaved] = useState<string | null>(null);
@@ -100,7 +106,7 @@ export function ReadingForm({ brewId, og, pitchedAt }: { brewId: number; og: num
       {({ isSubmitting, status, submitForm }) => (
         <Form noValidate className="space-y-4" aria-label="Add a reading">
           <MethodPicker />
-          <InstrumentPicker />
+          <InstrumentPicker instruments={instruments} instrumentsFailed={instrumentsFailed} />
           <MethodFields og={og} />
           <TextField name="takenAt" type="datetime-local" label="Taken at" />
           <TextField name="note" label="Note (optional)" maxLength={500} />
@@ -152,9 +158,8 @@ function MethodPicker() {
   );
 }
 
-function InstrumentPicker() {
+function InstrumentPicker({ instruments, instrumentsFailed: isError }: InstrumentChoices) {
   const { values, handleChange, errors, setFieldValue } = useFormikContext<Values>();
-  const { data: instruments, isError } = useMyInstruments();
   const mine = (instruments ?? []).filter((i) => i.kind === values.method && !i.archived);
   const error = errors.instrumentId;
   // Start from the brewer's own instrument of this kind; "no profile" stays one tap away.

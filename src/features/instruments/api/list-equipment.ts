@@ -1,10 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { EquipmentProfile } from '@shared/schemas/instruments';
 import { api } from '@/lib/api-client';
+import { equipmentKeys } from './keys';
 
-export const listEquipment = () => api.get<EquipmentProfile[]>('/api/equipment');
+export const listEquipment = (signal?: AbortSignal) => api.get<EquipmentProfile[]>('/api/equipment', { signal });
 
-export const equipmentQueryOptions = () => queryOptions({ queryKey: ['equipment', 'list'], queryFn: listEquipment });
+export const equipmentQueryOptions = () => queryOptions({ queryKey: equipmentKeys.list(), queryFn: ({ signal }) => listEquipment(signal) });
 
 export function useEquipment() {
   return useQuery(equipmentQueryOptions());

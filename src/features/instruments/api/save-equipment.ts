@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { EquipmentProfile, EquipmentProfileInput, EquipmentProfileUpdate } from '@shared/schemas/instruments';
 import { api } from '@/lib/api-client';
+import { equipmentKeys } from './keys';
 
 export const createEquipment = (input: EquipmentProfileInput) => api.post<EquipmentProfile>('/api/equipment', input);
 export const updateEquipment = (id: number, input: EquipmentProfileUpdate) => api.patch<EquipmentProfile>(`/api/equipment/${id}`, input);
@@ -11,7 +12,7 @@ export function useSaveEquipment(id: number | null) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: EquipmentProfileInput) => (id === null ? createEquipment(input) : updateEquipment(id, input)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['equipment'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: equipmentKeys.all }),
   });
 }
 
@@ -19,6 +20,6 @@ export function useDeleteEquipment() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: deleteEquipment,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['equipment'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: equipmentKeys.all }),
   });
 }
