@@ -78,6 +78,7 @@ export function Component() {
       <LateBoilCheck
         key={checkKey}
         initialValues={initialValues}
+        recipe={brew.targets}
         onChoose={({ option, input }) => saveDecision(input, toChoice(option))}
         renderAfterOptions={(check) => (
           <DecisionExtras

@@ -2,7 +2,7 @@ import { Field, Form, Formik, useFormikContext } from 'formik';
 import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
-import { gapInWords, optionAction, runBoilCheck, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
+import { gapInWords, optionAction, runBoilCheck, type BalanceRecipe, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
 import { BrewMathError, EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
 import { boilCheckInputSchema, type BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Notice } from '@/components/ui/notice';
@@ -37,6 +37,8 @@ export interface LateBoilCheckProps {
   nudge?: ReactNode;
   /** Rendered after the options, with the current check (or null while it cannot run). */
   renderAfterOptions?: (check: { input: BoilCheckParsed; result: BoilCheckOutcome } | null) => ReactNode;
+  /** The recipe's hops, grist and targets (a brew day's snapshot): each option then shows its bitterness and colour. */
+  recipe?: BalanceRecipe;
 }
 
 const validateForm = (values: LateBoilFormValues) => zodValidate(boilCheckInputSchema)(toCheckInput(values));
@@ -53,7 +55,7 @@ const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
  * and sees, as they type, where the wort is heading and what to do about it. Everything is
  * worked out in the browser with the shared brewing math, so it keeps working on a lost connection.
  */
-export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions }: LateBoilCheckProps) {
+export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions, recipe }: LateBoilCheckProps) {
   const userUnits = useUnits();
   const units = unitsOverride ?? userUnits;
   const start = useMemo(() => toFormValues(initialValues), [initialValues]);
@@ -67,7 +69,7 @@ export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, n
             <Inputs units={units} />
           </div>
           <div className="lg:sticky lg:top-4">
-            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} />
+            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} recipe={recipe} />
           </div>
         </div>
       </Form>
@@ -232,7 +234,8 @@ function Answer({
   onChoose,
   nudge,
   renderAfterOptions,
-}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
+  recipe,
+}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'recipe'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
   const { values } = useFormikContext<LateBoilFormValues>();
   const check = useCheck(values);
   const [choice, setChoice] = useState<ChoiceState | null>(null);
@@ -263,7 +266,7 @@ function Answer({
     <div className="min-w-0 space-y-4">
       <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
         {check.ok ? (
-          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onChoose ? (o) => void choose(o) : undefined} />
+          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onChoose ? (o) => void choose(o) : undefined} recipe={recipe} />
         ) : (
           <NotReady missing={check.missing} problems={check.problems} />
         )}
