@@ -59,7 +59,7 @@ describe('late-boil check on a brew day: bitterness of each option', () => {
 
     const water = page.getByTestId('ibu-water');
     await water.waitFor();
-    const asIs = ibuOf(nbsp(await page.getByTestId('ibu-as-is').textContent()));
+    const asIs = ibuOf(nbsp(await page.getByTestId('ibu-projected').textContent()));
     const diluted = ibuOf(nbsp(await water.textContent()));
     expect(asIs).toBeGreaterThan(30);
     // Shown to 0.1 IBU, so the ratio of the shown figures is good to about ±0.003.

@@ -64,7 +64,7 @@ export function CheckResults({ input, outcome, units, choice, onChoose, recipe }
           />
           <Stat label="ABV" value={formatAbv(result.projected.abvPercent)} />
         </dl>
-        {balance && <BalanceFigures balance={balance.asIs} testId="as-is" />}
+        {balance && <BalanceFigures balance={balance.asIs} testId="projected" />}
         {result.fgAssumed && (
           <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
         )}
