@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useQuery } from '@tanstack/react-query';
 import { FlaskConical, ScrollText } from 'lucide-react';
 import { useMemo, useRef, useState } from 'react';
-import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { brewStages, type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { useAddDecision } from '@/features/brews/api/add-decision';
@@ -100,7 +100,10 @@ export function Component() {
         title={brew.name}
         subtitle={
           <>
-            {brew.brewedOn} · {brew.recipeName}
+            {brew.brewedOn} · {brew.recipeName}{' '}
+            <Link className="underline" to={`/recipes/${brew.targets.recipeId}?version=${brew.targets.recipeVersion}`}>
+              (brewed from version {brew.targets.recipeVersion})
+            </Link>
             {!brew.isOwner && <> · by {brew.ownerName}</>}
           </>
         }
