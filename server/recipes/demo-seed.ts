@@ -28,7 +28,7 @@ export const priyaRecipes: RecipeInput[] = [
     efficiency: 0.72,
     targetOg: 1.05,
     targetFg: 1.011,
-    targetIbu: 28,
+    targetIbu: 25,
     targetColourSrm: 8,
     mashPhTarget: 5.2,
     fermentationTempMinC: 18,
