@@ -126,3 +126,30 @@ describe('describeDeviation', () => {
     expect(describeDeviation(og, { unitSystem: 'metric', gravityUnit: 'sg' })).toBe('OG 1.045 is 5 points short of the target 1.050.');
   });
 });
+
+describe('findDeviations: bitterness and colour of the late-boil choice', () => {
+  const withTargets: DeviationTargets = { ...targets, targetIbu: 35, targetColourSrm: 8 };
+  const decision = (predictedIbu: number | null, predictedColourSrm: number | null) => ({
+    id: 7,
+    choiceKind: 'water',
+    predictedSg: 1.05,
+    predictedIbu,
+    predictedColourSrm,
+    decidedAt: '2025-03-10T11:00:00Z',
+  });
+
+  it('calls out bitterness more than 3 IBU and colour more than 1 SRM off the targets (common practice, no source)', () => {
+    const found = findDeviations({ targets: withTargets, readings: [], decisions: [decision(30.5, 6.8)] });
+    expect(found.map((d) => d.code)).toEqual(['bitterness-low', 'colour-lighter']);
+    expect(found[0]).toMatchObject({ stage: 'boil', decisionId: 7, expected: 35, actual: 30.5, quantity: 'ibu' });
+    expect(found[0].message).toBe("The late-boil choice leaves about 31 IBU, 5 IBU below the recipe's 35 IBU.");
+    expect(found[1].message).toBe("The late-boil choice leaves a colour of about 6.8 SRM, paler than the recipe's 8.0 SRM.");
+    expect(findDeviations({ targets: withTargets, readings: [], decisions: [decision(40, 9.5)] }).map((d) => d.code)).toEqual(['bitterness-high', 'colour-darker']);
+  });
+
+  it('stays quiet within the tolerances, without targets, or without predictions', () => {
+    expect(findDeviations({ targets: withTargets, readings: [], decisions: [decision(32, 7)] })).toEqual([]);
+    expect(findDeviations({ targets, readings: [], decisions: [decision(10, 20)] })).toEqual([]);
+    expect(findDeviations({ targets: withTargets, readings: [], decisions: [decision(null, null)] })).toEqual([]);
+  });
+});

@@ -20,6 +20,9 @@ import { DAY_MS } from './dates';
 export const MASH_TEMP_TOLERANCE_C = 1;
 export const OG_TOLERANCE_POINTS = 2;
 export const VOLUME_TOLERANCE_FRACTION = 0.05;
+/** Bitterness within 3 IBU and colour within 1 SRM (2 EBC) of the recipe's targets (common practice, no source). */
+export const BITTERNESS_TOLERANCE_IBU = 3;
+export const COLOUR_TOLERANCE_SRM = 1;
 
 export interface DeviationTargets {
   targetOg: number;
@@ -29,6 +32,9 @@ export interface DeviationTargets {
   fermentationTempMaxC: number;
   /** The recipe's mash pH target; 5.2 when absent (common practice, no source). */
   mashPhTarget?: number;
+  /** Absent or null when the recipe set no bitterness or colour target. */
+  targetIbu?: number | null;
+  targetColourSrm?: number | null;
 }
 
 export interface DeviationReading {
@@ -45,6 +51,9 @@ export interface DeviationDecision {
   choiceKind: string;
   /** The OG the chosen option predicts (the projection, for "leave as is"); null for the brewer's own action. */
   predictedSg: number | null;
+  /** Bitterness and colour the chosen option predicts (shared/boil-check/balance.ts); null or absent when unknown. */
+  predictedIbu?: number | null;
+  predictedColourSrm?: number | null;
   decidedAt: string;
 }
 
@@ -230,6 +239,44 @@ export function findDeviations(input: {
         quantity: 'gravity',
         instrumentName: null,
         message: `Left as is, the wort was projected to finish at ${d.predictedSg.toFixed(3)}, ${Math.abs(gap).toFixed(0)} points ${gap < 0 ? 'short of' : 'over'} the target ${targets.targetOg.toFixed(3)}.`,
+      });
+    }
+  }
+  for (const d of input.decisions ?? []) out.push(...balanceDeviations(targets, d));
+  return out;
+}
+
+/** Bitterness and colour the chosen late-boil option leaves, against the recipe's targets. */
+function balanceDeviations(targets: DeviationTargets, d: DeviationDecision): BrewDeviation[] {
+  const out: BrewDeviation[] = [];
+  const at = { stage: 'boil', readingId: null, decisionId: d.id, instrumentName: null } as const;
+  const ibu = d.predictedIbu;
+  const targetIbu = targets.targetIbu;
+  if (typeof ibu === 'number' && typeof targetIbu === 'number') {
+    const gapIbu = round(ibu - targetIbu, 1);
+    if (Math.abs(gapIbu) > BITTERNESS_TOLERANCE_IBU) {
+      out.push({
+        ...at,
+        code: gapIbu < 0 ? 'bitterness-low' : 'bitterness-high',
+        expected: targetIbu,
+        actual: ibu,
+        quantity: 'ibu',
+        message: `The late-boil choice leaves about ${ibu.toFixed(0)} IBU, ${Math.abs(gapIbu).toFixed(0)} IBU ${gapIbu < 0 ? 'below' : 'above'} the recipe's ${targetIbu.toFixed(0)} IBU.`,
+      });
+    }
+  }
+  const srm = d.predictedColourSrm;
+  const targetSrm = targets.targetColourSrm;
+  if (typeof srm === 'number' && typeof targetSrm === 'number') {
+    const gapSrm = round(srm - targetSrm, 1);
+    if (Math.abs(gapSrm) > COLOUR_TOLERANCE_SRM) {
+      out.push({
+        ...at,
+        code: gapSrm < 0 ? 'colour-lighter' : 'colour-darker',
+        expected: targetSrm,
+        actual: srm,
+        quantity: 'colour',
+        message: `The late-boil choice leaves a colour of about ${srm.toFixed(1)} SRM, ${gapSrm < 0 ? 'paler' : 'darker'} than the recipe's ${targetSrm.toFixed(1)} SRM.`,
       });
     }
   }

@@ -167,12 +167,21 @@ function predictedSg(decision: BrewDecision): number | null {
   return typeof sg === 'number' ? sg : null;
 }
 
+/** Bitterness and colour of the chosen option (the as-is figures for the brewer's own action), as recomputed with the decision. */
+function predictedBalance(decision: BrewDecision): { predictedIbu: number | null; predictedColourSrm: number | null } {
+  type Figures = { ibu?: unknown; colourSrm?: unknown } | null | undefined;
+  const result = decision.result as { chosenBalance?: Figures; balance?: { asIs?: Figures } | null };
+  const figures = decision.chosen ? result.chosenBalance : result.balance?.asIs;
+  const num = (v: unknown) => (typeof v === 'number' ? v : null);
+  return { predictedIbu: num(figures?.ibu), predictedColourSrm: num(figures?.colourSrm) };
+}
+
 /** Where a brew day left its targets, from its readings and decisions alone (no query): the log, the review and the mentor's queue agree. */
 export function brewDayDeviations(targets: RecipeTargets, readings: readonly BrewReading[], decisions: readonly BrewDecision[]): BrewDeviation[] {
   return findDeviations({
     targets,
     readings: readings.map((r) => ({ id: r.id, kind: r.kind, corrected: r.corrected, volumeL: r.volumeL, instrument: r.instrument, takenAt: r.takenAt })),
-    decisions: decisions.map((d) => ({ id: d.id, choiceKind: d.choice.kind, predictedSg: predictedSg(d), decidedAt: d.decidedAt })),
+    decisions: decisions.map((d) => ({ id: d.id, choiceKind: d.choice.kind, predictedSg: predictedSg(d), ...predictedBalance(d), decidedAt: d.decidedAt })),
   });
 }
 

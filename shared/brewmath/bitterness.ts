@@ -93,6 +93,9 @@ export function ibuTinseth({ hops, boilSg, volumeL, whirlpoolEquivalentMinutes =
     perAddition.push({ ibu: additionIbu, utilisation, whirlpool });
     ibu += additionIbu;
   }
+  if (!Number.isFinite(ibu)) {
+    throw new BrewMathError(`${show(volumeL)} L is too small a volume for these hops; check the units.`, 'out-of-range', 'volumeL');
+  }
   const assumptions = anyWhirlpool
     ? [`Flame-out and whirlpool hops are counted as if boiled ${show(whirlpoolEquivalentMinutes)} minutes (an assumption: Tinseth's formula gives them nothing).`]
     : [];

@@ -65,7 +65,11 @@ export function maltColourUnits(grist: readonly GristColour[], volumeL: number):
     requireMaltColour(g.colourLovibond, `grist.${i}.colourLovibond`);
     lbLovibond += (g.massKg / KG_PER_LB) * g.colourLovibond;
   }
-  return lbLovibond / (volumeL / LITRES_PER_US_GALLON);
+  const mcu = lbLovibond / (volumeL / LITRES_PER_US_GALLON);
+  if (!Number.isFinite(mcu)) {
+    throw new BrewMathError(`${show(volumeL)} L is too small a volume for this grist; check the units.`, 'out-of-range', 'volumeL');
+  }
+  return mcu;
 }
 
 /** Morey's equation on malt colour units. */

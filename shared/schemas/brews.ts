@@ -456,6 +456,10 @@ export type DeviationCode =
   | 'volume-high'
   | 'pitch-too-warm'
   | 'accepted-off-target'
+  | 'bitterness-low'
+  | 'bitterness-high'
+  | 'colour-lighter'
+  | 'colour-darker'
   | 'instrument-uncalibrated'
   | 'instrument-overdue';
 
@@ -467,7 +471,7 @@ export interface BrewDeviation {
   /** SI: °C, SG, pH or litres, per `quantity`. */
   expected: number | null;
   actual: number | null;
-  quantity: 'temperature' | 'gravity' | 'ph' | 'volume' | null;
+  quantity: 'temperature' | 'gravity' | 'ph' | 'volume' | 'ibu' | 'colour' | null;
   /** For instrument deviations. */
   instrumentName: string | null;
   /** A plain sentence in metric units and SG; the client words it in the brewer's units. */

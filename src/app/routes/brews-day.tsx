@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useQuery } from '@tanstack/react-query';
 import { FlaskConical, ScrollText } from 'lucide-react';
 import { useMemo, useRef, useState } from 'react';
-import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { brewStages, type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { useAddDecision } from '@/features/brews/api/add-decision';
@@ -81,6 +81,7 @@ export function Component() {
       <LateBoilCheck
         key={checkKey}
         initialValues={initialValues}
+        recipe={brew.targets}
         onChoose={({ option, input }) => saveDecision(input, toChoice(option))}
         renderBeforeOptions={() => <DecisionReason initial={reason.current} onReasonChange={(text) => (reason.current = text)} />}
         renderAfterOptions={(check) => (
@@ -102,7 +103,10 @@ export function Component() {
         title={brew.name}
         subtitle={
           <>
-            {brew.brewedOn} · {brew.recipeName}
+            {brew.brewedOn} · {brew.recipeName}{' '}
+            <Link className="underline" to={`/recipes/${brew.targets.recipeId}?version=${brew.targets.recipeVersion}`}>
+              (brewed from version {brew.targets.recipeVersion})
+            </Link>
             {!brew.isOwner && <> · by {brew.ownerName}</>}
           </>
         }

@@ -1,8 +1,10 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Copy, Download, Pencil, Printer, Trash2 } from 'lucide-react';
 import { useState } from 'react';
-import { useLocation, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
-import type { RecipeImportResult } from '@shared/schemas/recipes';
+import { useLocation, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { targetAbv, type RecipeImportResult } from '@shared/schemas/recipes';
+import { useRecipeVersion } from '@/features/recipes/api/get-recipe-version';
+import { RecipeHistory } from '@/features/recipes/components/recipe-history';
 import { useCloneRecipe } from '@/features/recipes/api/clone-recipe';
 import { useDeleteRecipe } from '@/features/recipes/api/delete-recipe';
 import { recipeExportUrl } from '@/features/recipes/api/export-recipe';
@@ -47,6 +49,9 @@ export function Component() {
   const clone = useCloneRecipe();
   const remove = useDeleteRecipe();
   const [confirmDelete, setConfirmDelete] = useState(false);
+  const [search] = useSearchParams();
+  const askedVersion = Number(search.get('version'));
+  const oldVersion = useRecipeVersion(id, Number.isInteger(askedVersion) && askedVersion > 0 ? askedVersion : null);
   const imported = (location.state as { imported?: boolean; ignored?: RecipeImportResult['ignored'] } | null) ?? null;
 
   if (isPending) return <Loading label="Loading the recipe…" />;
@@ -108,7 +113,30 @@ export function Component() {
         </Notice>
       )}
 
-      <RecipeView recipe={recipe} />
+      {oldVersion.data && oldVersion.data.version !== recipe.version ? (
+        <>
+          <Notice tone="info" title={`Version ${oldVersion.data.version}, saved ${new Date(oldVersion.data.savedAt).toLocaleString()}`} className="mb-4">
+            <p>
+              An earlier version of this recipe, as it was saved. The current one is version {recipe.version}.{' '}
+              <ButtonLink to={`/recipes/${recipe.id}`} variant="secondary" className="mt-2">
+                Show the current version
+              </ButtonLink>
+            </p>
+          </Notice>
+          <RecipeView
+            recipe={{ ...recipe, ...oldVersion.data.data, version: oldVersion.data.version, abvPercent: targetAbv(oldVersion.data.data.targetOg, oldVersion.data.data.targetFg)?.abvPercent ?? 0 }}
+          />
+        </>
+      ) : (
+        <>
+          {oldVersion.isError && (
+            <Notice tone="caution" className="mb-4">
+              {oldVersion.error.message}
+            </Notice>
+          )}
+          <RecipeView recipe={recipe} />
+        </>
+      )}
 
       <div className="no-print mt-4 grid gap-4 lg:grid-cols-2">
         <Card>
@@ -123,6 +151,7 @@ export function Component() {
             </a>
           </div>
         </Card>
+        <RecipeHistory recipeId={recipe.id} currentVersion={recipe.version} />
         {recipe.permissions.share && (
           <Card>
             <SharingPanel recipe={recipe} clubs={me?.clubs ?? []} />

@@ -6,14 +6,18 @@ import {
   optionTitle,
   reasonInWords,
   wholeMinutes,
+  predictBoilBalance,
+  type BalanceRecipe,
   type BoilCheckOutcome,
   type FeasibleOption,
+  type OptionBalance,
   type InfeasibleOption,
 } from '@shared/boil-check';
-import { formatAbv, type ExtractKind } from '@shared/brewmath';
+import { formatAbv, SRM_TO_EBC, type ExtractKind } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { formatColour, useColourScale } from '@/lib/colour';
 import type { Units } from '@/lib/units';
 
 export type ChoiceState = { key: string; state: 'saving' | 'saved' | 'failed'; message?: string };
@@ -30,6 +34,8 @@ interface ResultsProps {
   onChoose?: (option: FeasibleOption) => void;
   /** Above the option cards, so it is read before choosing (on brew day: why, saved with the choice). */
   beforeOptions?: ReactNode;
+  /** The recipe's hops, grist and targets: bitterness and colour per option when given. */
+  recipe?: BalanceRecipe;
 }
 
 /**
@@ -37,8 +43,9 @@ interface ResultsProps {
  * Memoised: Formik renders the whole form again when a field is marked touched, and this panel is
  * the costly part; it renders only when the check itself changed.
  */
-export const CheckResults = memo(function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions }: ResultsProps) {
+export const CheckResults = memo(function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions, recipe }: ResultsProps) {
   const { result, currentSg, reading, warnings } = outcome;
+  const balance = recipe ? predictBoilBalance(input, outcome, recipe) : null;
   const ordered = orderedOptions(result);
   const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
   const anyExtract = ordered.some((o) => o.kind === 'extract');
@@ -69,6 +76,7 @@ export const CheckResults = memo(function CheckResults({ input, outcome, units, 
             : 'No kettle losses entered: every cooled litre is counted as reaching the fermenter.'}
           {result.maxBoilVolumeL !== null && ` Additions keep about 10 % of the kettle free to boil: at most ${units.format('volume', result.maxBoilVolumeL)} in it.`}
         </p>
+        {balance && <BalanceFigures balance={balance.asIs} testId="projected" />}
         {result.fgAssumed && (
           <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
         )}
@@ -86,10 +94,25 @@ export const CheckResults = memo(function CheckResults({ input, outcome, units, 
       <ul className="space-y-3">
         {ordered.map((option) => (
           <li key={optionKey(option)}>
-            <OptionCard option={option} input={input} outcome={outcome} units={units} choice={choice?.key === optionKey(option) ? choice : null} onChoose={onChoose} />
+            <OptionCard
+              option={option}
+              input={input}
+              outcome={outcome}
+              units={units}
+              choice={choice?.key === optionKey(option) ? choice : null}
+              onChoose={onChoose}
+              balance={balance ? balance.options[result.options.indexOf(option)] : undefined}
+            />
           </li>
         ))}
       </ul>
+
+      {balance && (
+        <p className="text-xs text-ink-faint">
+          Bitterness by Tinseth&apos;s formula from the recipe&apos;s hops, colour by Morey&apos;s equation from its malts. Water added now or in the fermenter dilutes both;
+          extract adds its own colour and, by raising the gravity, bitters a little less; boiling on gives the hops already in more time. {balance.assumptions.join(' ')}
+        </p>
+      )}
 
       {infeasible.length > 0 && (
         <section aria-label="Not possible now" className="rounded-xl bg-cellar-50 p-4">
@@ -164,6 +187,7 @@ function OptionCard({
   units,
   choice,
   onChoose,
+  balance,
 }: {
   option: FeasibleOption;
   input: BoilCheckParsed;
@@ -171,6 +195,7 @@ function OptionCard({
   units: Units;
   choice: ChoiceState | null;
   onChoose?: (option: FeasibleOption) => void;
+  balance?: OptionBalance | null;
 }) {
   const headingId = useId();
   const { before, amount, after } = optionActionParts(option, units.unitSystem);
@@ -200,6 +225,7 @@ function OptionCard({
           <dd className="text-xl font-bold tabular-nums">{formatAbv(option.abvPercent)}</dd>
         </div>
       </dl>
+      {balance && <BalanceFigures balance={balance} testId={optionKey(option)} />}
       {onChoose && (
         <div className="mt-3 space-y-2">
           {choice?.state === 'failed' ? (
@@ -249,5 +275,35 @@ export function NotReady({ missing, problems }: { missing: string[]; problems: {
         </p>
       )}
     </section>
+  );
+}
+
+function signed(value: number, digits: number) {
+  const text = Math.abs(value).toFixed(digits);
+  return Number(text) === 0 ? 'on target' : `${value > 0 ? '+' : '\u2212'}${text} vs target`;
+}
+
+/** Bitterness and colour at the end, with the gap to the recipe's targets; a number only, no colour swatch. */
+function BalanceFigures({ balance, testId }: { balance: OptionBalance; testId: string }) {
+  const scale = useColourScale();
+  const colourGap =
+    balance.colourDeviationSrm === null ? null : scale === 'ebc' ? signed(balance.colourDeviationSrm * SRM_TO_EBC, 0).replace('vs', 'EBC vs') : signed(balance.colourDeviationSrm, 1).replace('vs', 'SRM vs');
+  return (
+    <dl className="mt-2 grid grid-cols-2 gap-2 text-sm">
+      <div className="min-w-0">
+        <dt className="text-ink-faint">Bitterness</dt>
+        <dd className="text-lg font-bold tabular-nums" data-testid={`ibu-${testId}`}>
+          {balance.ibu === null ? 'no hops' : `${balance.ibu.toFixed(1)}\u00a0IBU`}
+        </dd>
+        {balance.ibuDeviation !== null && <dd className="text-xs text-ink-soft">{signed(balance.ibuDeviation, 1).replace('vs', 'IBU vs')}</dd>}
+      </div>
+      <div className="min-w-0">
+        <dt className="text-ink-faint">Colour</dt>
+        <dd className="text-lg font-bold tabular-nums" data-testid={`colour-${testId}`}>
+          {balance.colourSrm === null ? 'malt colours unknown' : formatColour(balance.colourSrm, scale)}
+        </dd>
+        {colourGap && <dd className="text-xs text-ink-soft">{colourGap}</dd>}
+      </div>
+    </dl>
   );
 }

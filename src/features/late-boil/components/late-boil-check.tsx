@@ -2,7 +2,7 @@ import { Field, Form, Formik, useFormikContext } from 'formik';
 import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
-import { gapInWords, optionAction, runBoilCheck, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
+import { gapInWords, optionAction, runBoilCheck, type BalanceRecipe, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
 import { BrewMathError, EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Notice } from '@/components/ui/notice';
@@ -39,6 +39,8 @@ export interface LateBoilCheckProps {
   renderAfterOptions?: (check: { input: BoilCheckParsed; result: BoilCheckOutcome } | null) => ReactNode;
   /** Rendered between the answer and the option cards while there are options to choose from. */
   renderBeforeOptions?: () => ReactNode;
+  /** The recipe's hops, grist and targets (a brew day's snapshot): each option then shows its bitterness and colour. */
+  recipe?: BalanceRecipe;
 }
 
 const validateForm = (values: LateBoilFormValues) => {
@@ -58,7 +60,7 @@ const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
  * and sees, as they type, where the wort is heading and what to do about it. Everything is
  * worked out in the browser with the shared brewing math, so it keeps working on a lost connection.
  */
-export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions, renderBeforeOptions }: LateBoilCheckProps) {
+export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions, renderBeforeOptions, recipe }: LateBoilCheckProps) {
   const userUnits = useUnits();
   const units = unitsOverride ?? userUnits;
   const start = useMemo(() => toFormValues(initialValues), [initialValues]);
@@ -72,7 +74,7 @@ export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, n
             <Inputs units={units} />
           </div>
           <div className="lg:sticky lg:top-4">
-            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} renderBeforeOptions={renderBeforeOptions} />
+            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} renderBeforeOptions={renderBeforeOptions} recipe={recipe} />
           </div>
         </div>
       </Form>
@@ -241,7 +243,8 @@ function Answer({
   nudge,
   renderAfterOptions,
   renderBeforeOptions,
-}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'renderBeforeOptions'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
+  recipe,
+}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'renderBeforeOptions' | 'recipe'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
   const { values } = useFormikContext<LateBoilFormValues>();
   const check = useCheck(values, units.unitSystem);
   const [choice, setChoice] = useState<ChoiceState | null>(null);
@@ -280,7 +283,7 @@ function Answer({
     <div className="min-w-0 space-y-4">
       <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
         {check.ok ? (
-          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} />
+          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} recipe={recipe} />
         ) : (
           <NotReady missing={check.missing} problems={check.problems} />
         )}

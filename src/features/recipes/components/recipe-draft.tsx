@@ -11,7 +11,24 @@ export function recipeDraftKey(recipeId: number | undefined) {
   return `wortwise:recipe-draft:${recipeId ?? 'new'}`;
 }
 
-interface StoredDraft {
+/**
+ * This tab's id, kept in sessionStorage (it survives a reload, not a new tab): a draft comes back
+ * by itself only in the tab that wrote it; another tab is offered it instead of having it forced on it.
+ */
+export function currentTabId(): string {
+  try {
+    const existing = globalThis.sessionStorage?.getItem('wortwise:tab');
+    if (existing) return existing;
+    const id = Math.random().toString(36).slice(2);
+    globalThis.sessionStorage?.setItem('wortwise:tab', id);
+    return id;
+  } catch {
+    return 'no-session-storage';
+  }
+}
+
+export interface StoredDraft {
+  tabId?: string;
   version: number;
   savedAt: string;
   values: RecipeFormValues;
@@ -44,7 +61,7 @@ export function RecipeDraftKeeper({ recipeId, version }: { recipeId: number | un
     if (!dirty) return;
     const timer = setTimeout(() => {
       try {
-        const draft: StoredDraft = { version, savedAt: new Date().toISOString(), values };
+        const draft: StoredDraft = { tabId: currentTabId(), version, savedAt: new Date().toISOString(), values };
         globalThis.localStorage?.setItem(recipeDraftKey(recipeId), JSON.stringify(draft));
       } catch {
         // Quota or private mode: the form still works, only the draft is not kept.

@@ -37,7 +37,7 @@ import { useUpdateRecipe } from '../api/update-recipe';
 import { NumberField } from '@/components/ui/number-field';
 import { TextAreaField } from '@/components/ui/text-area-field';
 import { emptyFermentable, emptyHop, emptyMashStep, newRecipeValues, toFormValues, toRecipeInput, type RecipeFormValues } from './recipe-form-values';
-import { clearRecipeDraft, readRecipeDraft, RecipeDraftKeeper } from './recipe-draft';
+import { clearRecipeDraft, currentTabId, readRecipeDraft, RecipeDraftKeeper } from './recipe-draft';
 import { colourFieldProps, formatColour, useColourScale } from '@/lib/colour';
 
 /** 1 point per pound per US gallon in points·L/kg: from the exact gallon and pound. */
@@ -64,6 +64,8 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
   const queryClient = useQueryClient();
   const [version, setVersion] = useState(recipe?.version ?? 0);
   const [draft, setDraft] = useState(() => readRecipeDraft(recipe?.id, recipe?.version ?? 0));
+  // Only the tab that wrote the draft gets it back by itself (a reload); another tab is offered it.
+  const [restored, setRestored] = useState(() => draft !== null && draft.tabId === currentTabId());
 
   async function save(values: RecipeFormValues, asNew = false) {
     const data = recipeInputSchema.parse(toRecipeInput(values)) as RecipeData;
@@ -73,7 +75,7 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
 
   return (
     <Formik<RecipeFormValues>
-      initialValues={draft?.values ?? (recipe ? toFormValues(recipe) : newRecipeValues())}
+      initialValues={restored && draft ? draft.values : recipe ? toFormValues(recipe) : newRecipeValues()}
       validate={validate}
       onSubmit={async (values, helpers) => {
         helpers.setStatus(undefined);
@@ -107,8 +109,21 @@ export function RecipeForm({ recipe, onSaved }: RecipeFormProps) {
           <Form noValidate className="space-y-4 pb-24" aria-label={recipe ? `Edit ${recipe.name}` : 'New recipe'}>
             <RecipeDraftKeeper recipeId={recipe?.id} version={version} />
             {draft && (
-              <Notice tone="info" title="Your unsaved changes are back">
+              <Notice tone="info" title={restored ? 'Your unsaved changes are back' : 'There are unsaved changes from another tab or an earlier visit'}>
                 <p>Kept in this browser since {new Date(draft.savedAt).toLocaleString()}. Save to keep them for good.</p>
+                {!restored && (
+                  <Button
+                    variant="secondary"
+                    className="mr-2 mt-2"
+                    icon={<RefreshCw aria-hidden className="size-5" />}
+                    onClick={() => {
+                      setRestored(true);
+                      resetForm({ values: draft.values, status: undefined });
+                    }}
+                  >
+                    Restore them
+                  </Button>
+                )}
                 <Button
                   variant="secondary"
                   className="mt-2"
