@@ -7,7 +7,7 @@ import type { Me } from '@shared/schemas/auth';
 import { meQueryOptions } from '@/lib/auth';
 import { RootLayout } from './root-layout';
 
-const me: Me = { id: 1, email: 'brewer@example.org', displayName: 'Test Brewer', unitSystem: 'metric', gravityUnit: 'sg', colourScale: 'srm', siteRole: 'user', clubs: [] };
+const me: Me = { id: 1, email: 'brewer@example.org', displayName: 'Test Brewer', unitSystem: 'metric', gravityUnit: 'sg', colourScale: 'srm', gallonUnit: 'us', siteRole: 'user', clubs: [] };
 
 function renderLayout() {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity } } });

@@ -32,7 +32,7 @@ export function useAddReading(brewId: number) {
       const had = queryClient.getQueryData<BrewDetail>(brewKeys.detail(brewId));
       if (had) queryClient.setQueryData(brewKeys.detail(brewId), withReading(had, outcome.data));
       else void queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) });
-      return queryClient.invalidateQueries({ queryKey: [...brewKeys.all, 'list'] });
+      return queryClient.invalidateQueries({ queryKey: brewKeys.lists() });
     },
   });
 }

@@ -25,7 +25,7 @@ const log = {
 
 function renderChart(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'>) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity } } });
-  const me: Me = { id: 1, email: 'b@example.org', displayName: 'B', colourScale: 'srm', siteRole: 'user', clubs: [], ...prefs };
+  const me: Me = { id: 1, email: 'b@example.org', displayName: 'B', colourScale: 'srm', gallonUnit: 'us', siteRole: 'user', clubs: [], ...prefs };
   queryClient.setQueryData(meQueryOptions().queryKey, me);
   render(
     <QueryClientProvider client={queryClient}>
