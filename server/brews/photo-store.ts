@@ -1,6 +1,6 @@
 /**
  * Where the bytes of reading photos live: an S3-compatible object store through the AWS SDK
- * (docs/decisions/0011-photos-in-object-storage.md). MariaDB keeps each photo's row (type, size,
+ * (docs/decisions/0018-photos-in-object-storage.md). MariaDB keeps each photo's row (type, size,
  * SHA-256, who may see it) and its `storage_key`; the store keeps only bytes. Locally and in tests
  * the store is the fake S3 server our scripts start (server/lib/fake-s3.ts).
  */

@@ -1,7 +1,7 @@
 /**
  * Photos of a reading (a hydrometer in its trial jar, a refractometer's scale). The row (type,
  * size, SHA-256) is in MariaDB, the bytes in object storage (./photo-store.ts), so every API
- * instance serves the same photo: see docs/decisions/0011-photos-in-object-storage.md. The type
+ * instance serves the same photo: see docs/decisions/0018-photos-in-object-storage.md. The type
  * is read from the file's first bytes; the name and Content-Type the client sends are not trusted.
  */
 import { createHash } from 'node:crypto';

@@ -2,7 +2,7 @@
  * Bitterness and colour at the end of the boil for each late-boil option, from the recipe's hop
  * schedule and grist (the brew day's snapshot). Pure and shared: the options panel shows these
  * figures and the server recomputes them with a decision. Model
- * (docs/decisions/0011-bitterness-colour-and-recipe-history.md):
+ * (docs/decisions/0017-bitterness-colour-and-recipe-history.md):
  * - Bitterness: Tinseth (shared/brewmath/bitterness.ts) over the hop schedule, in the option's
  *   volume into the fermenter, at the average of the gravity now and the option's end gravity.
  *   Water is added at the end of the boil or in the fermenter, after the hops have done their

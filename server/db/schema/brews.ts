@@ -146,7 +146,7 @@ export const brewNotes = mysqlTable(
 
 /**
  * Photos of a reading: the row here, the bytes in object storage under `storage_key`
- * (docs/decisions/0011-photos-in-object-storage.md). The type is the one the bytes show, not the client's.
+ * (docs/decisions/0018-photos-in-object-storage.md). The type is the one the bytes show, not the client's.
  */
 export const readingPhotos = mysqlTable(
   'reading_photos',

@@ -121,7 +121,7 @@ export const recipeClubShares = mysqlTable(
 );
 
 /**
- * Every saved version of a recipe, as the author saved it (docs/decisions/0011-bitterness-colour-and-recipe-history.md).
+ * Every saved version of a recipe, as the author saved it (docs/decisions/0017-bitterness-colour-and-recipe-history.md).
  * Written in the same transaction as the save, so the latest row always equals the recipe.
  */
 export const recipeVersions = mysqlTable(
