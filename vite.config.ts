@@ -52,7 +52,7 @@ export default defineConfig({
     tailwindcss(),
     precompress(),
     // The installable app: our manifest, and a Workbox service worker that precaches the built
-    // shell, route chunks and fonts. No API response is cached by the worker (see decision 0011).
+    // shell, route chunks and fonts. No API response is cached by the worker (see decision 0015).
     VitePWA({
       registerType: 'prompt',
       injectRegister: false,

@@ -9,7 +9,7 @@ afterEach(() => {
   else process.env.TZ = originalTz;
 });
 
-describe('which day the brewer sees (decision 0011)', () => {
+describe('which day the brewer sees (decision 0016)', () => {
   it('is the day on their own clock, not the UTC day', () => {
     const instant = new Date('2026-01-01T12:30:00Z');
     process.env.TZ = 'Pacific/Auckland';

@@ -1,5 +1,5 @@
 /**
- * Days and dates, one way (decision 0011). Spans (days since pitching, the FG wait, reminders) are
+ * Days and dates, one way (decision 0016). Spans (days since pitching, the FG wait, reminders) are
  * exact 24-hour multiples of DAY_MS, so a daylight-saving change never moves a verdict. A calendar
  * day a brewer sees or types is the day on their own clock (`localDay`); the server, which does
  * not know the brewer's time zone, stamps a day only where the client sent none, in UTC (`utcDay`).

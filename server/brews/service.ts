@@ -312,7 +312,7 @@ export async function listBrews(db: DbOrTx, actor: Actor, scope: 'mine' | 'share
   );
 }
 
-/** The client sends the brewer's own day; without one, the UTC day (decision 0011). */
+/** The client sends the brewer's own day; without one, the UTC day (decision 0016). */
 const todayIso = () => utcDay();
 
 /** Starts a brew day from a recipe the brewer may read: snapshots its targets and the equipment profile. */
