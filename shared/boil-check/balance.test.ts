@@ -91,3 +91,24 @@ describe('predictBoilBalance: bitterness and colour of each late-boil option (wo
     });
   });
 });
+
+describe('predictBoilBalance with kettle losses', () => {
+  // Trub and dead space hold back wort at the same concentration as the rest (common practice,
+  // no source): 2 L left in the kettle changes the volume into the fermenter, not the IBU or SRM.
+  // The figures are the hand-worked ones above (27.54 IBU and 8.842 SRM as is, 22.36 IBU with water).
+  const withLosses: BoilCheckInput = { ...strong, kettleLossL: 2 };
+  const outcome = runBoilCheck(withLosses);
+  const balance = predictBoilBalance(withLosses, outcome, recipe)!;
+
+  it('keeps the as-is bitterness and colour of the same wort without losses', () => {
+    expect(outcome.result.projected.fermenterVolumeL).toBeCloseTo(24.32 - 2, 2);
+    expect(balance.asIs.ibu).toBeCloseTo(27.54, 1);
+    expect(balance.asIs.colourSrm).toBeCloseTo(8.842, 2);
+  });
+
+  it('dilutes by the same proportion when water is added', () => {
+    const water = outcome.result.options.findIndex((o) => o.kind === 'water' && o.feasible);
+    expect(water).toBeGreaterThan(-1);
+    expect(balance.options[water]!.ibu).toBeCloseTo(22.36, 1);
+  });
+});

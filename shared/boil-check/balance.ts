@@ -51,7 +51,12 @@ export interface BoilBalance {
 
 interface EndOf {
   endSg: number;
-  fermenterVolumeL: number;
+  /**
+   * The cooled wort the bitterness and colour are dissolved in, before kettle losses: trub and
+   * dead space take wort away at the same concentration, so they change the volume into the
+   * fermenter, not its IBU or SRM.
+   */
+  wortVolumeL: number;
   extraMinutes: number;
   extract?: { kind: ExtractKind; kg: number };
   /** For water: the as-is end gravity the hops boiled at. */
@@ -83,7 +88,7 @@ export function predictBoilBalance(input: Pick<BoilCheckInput, 'minutesLeft'>, o
           boilMinutes: h.minutes > input.minutesLeft ? h.minutes + end.extraMinutes : h.minutes,
         })),
         boilSg: (outcome.currentSg + end.boilEndSg) / 2,
-        volumeL: end.fermenterVolumeL,
+        volumeL: end.wortVolumeL,
       });
       estimate.assumptions.forEach((a) => assumptions.add(a));
       ibu = estimate.ibu;
@@ -92,9 +97,9 @@ export function predictBoilBalance(input: Pick<BoilCheckInput, 'minutesLeft'>, o
     if (colourKnown) {
       let mcu = maltColourUnits(
         grist.map((g) => ({ massKg: g.amountKg, colourLovibond: g.colourLovibond! })),
-        end.fermenterVolumeL,
+        end.wortVolumeL,
       );
-      if (end.extract) mcu += maltColourUnits([{ massKg: end.extract.kg, colourLovibond: EXTRACT_COLOUR_LOVIBOND[end.extract.kind] }], end.fermenterVolumeL);
+      if (end.extract) mcu += maltColourUnits([{ massKg: end.extract.kg, colourLovibond: EXTRACT_COLOUR_LOVIBOND[end.extract.kind] }], end.wortVolumeL);
       colourSrm = moreySrmFromMcu(mcu);
     }
     return { ibu, colourSrm, ibuDeviation: deviation(ibu, recipe?.targetIbu), colourDeviationSrm: deviation(colourSrm, recipe?.targetColourSrm) };
@@ -102,12 +107,12 @@ export function predictBoilBalance(input: Pick<BoilCheckInput, 'minutesLeft'>, o
 
   try {
     const { projected } = outcome.result;
-    const asIs = predict({ endSg: projected.endSg, boilEndSg: projected.endSg, fermenterVolumeL: projected.fermenterVolumeL, extraMinutes: 0 });
+    const asIs = predict({ endSg: projected.endSg, boilEndSg: projected.endSg, wortVolumeL: projected.cooledVolumeL, extraMinutes: 0 });
     const options = outcome.result.options.map((o) => {
       if (!o.feasible) return null;
-      if (o.kind === 'extract') return predict({ endSg: o.endSg, boilEndSg: o.endSg, fermenterVolumeL: o.fermenterVolumeL, extraMinutes: 0, extract: { kind: o.extract, kg: o.kg } });
-      if (o.kind === 'water') return predict({ endSg: o.endSg, boilEndSg: projected.endSg, fermenterVolumeL: o.fermenterVolumeL, extraMinutes: 0 });
-      if (o.kind === 'boil-longer') return predict({ endSg: o.endSg, boilEndSg: o.endSg, fermenterVolumeL: o.fermenterVolumeL, extraMinutes: o.extraMinutes });
+      if (o.kind === 'extract') return predict({ endSg: o.endSg, boilEndSg: o.endSg, wortVolumeL: o.cooledVolumeL, extraMinutes: 0, extract: { kind: o.extract, kg: o.kg } });
+      if (o.kind === 'water') return predict({ endSg: o.endSg, boilEndSg: projected.endSg, wortVolumeL: o.cooledVolumeL, extraMinutes: 0 });
+      if (o.kind === 'boil-longer') return predict({ endSg: o.endSg, boilEndSg: o.endSg, wortVolumeL: o.cooledVolumeL, extraMinutes: o.extraMinutes });
       return asIs;
     });
     return { asIs, options, assumptions: [...assumptions] };
