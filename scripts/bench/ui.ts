@@ -8,7 +8,8 @@
  *   built with the same Vite and served gzipped (level 9, as Wortwise's precompressed files) by a
  *   tiny node:http server in this process.
  * - Debian's Chromium through playwright-core. JavaScript transferred = the sum of the encoded
- *   (on-the-wire) sizes of script responses on a cold load, requested with Accept-Encoding gzip;
+ *   (on-the-wire) body sizes of script responses on a cold load, headers left out (Wortwise's security
+ *   headers would otherwise count against it), requested with Accept-Encoding gzip;
  *   service workers are blocked, so the worker's precache of every chunk is not counted.
  * - Keystroke latency on the late-boil check at 4× CPU throttling: from keydown to the first frame
  *   after the answer's text changed (MutationObserver on #late-boil-answer, then
@@ -114,16 +115,19 @@ interface Transfer {
   encodings: Set<string>;
 }
 
-/** Loads urlPath cold in the page and sums the wire size of every script response until the network is idle. */
+/** Loads urlPath cold in the page and sums the encoded body size of every script response until the network is idle. */
 async function scriptTransfer(page: Page, urlPath: string, ready: (page: Page) => Promise<unknown>): Promise<Transfer> {
   const cdp = await page.context().newCDPSession(page);
   await cdp.send('Network.enable');
   await cdp.send('Network.setCacheDisabled', { cacheDisabled: true });
   const scripts = new Map<string, string>();
   const sizes = new Map<string, number>();
+  // Bytes on the wire when the headers arrived: taken off the total so only the (encoded) body counts.
+  const headerBytes = new Map<string, number>();
   cdp.on('Network.responseReceived', (e) => {
     const encoding = Object.entries(e.response.headers).find(([k]) => k.toLowerCase() === 'content-encoding')?.[1] ?? 'identity';
     if (e.type === 'Script') scripts.set(e.requestId, String(encoding));
+    headerBytes.set(e.requestId, e.response.encodedDataLength);
   });
   cdp.on('Network.loadingFinished', (e) => sizes.set(e.requestId, e.encodedDataLength));
   await page.goto(urlPath, { waitUntil: 'networkidle' });
@@ -131,7 +135,7 @@ async function scriptTransfer(page: Page, urlPath: string, ready: (page: Page) =
   await page.waitForLoadState('networkidle');
   await cdp.detach();
   let bytes = 0;
-  for (const id of scripts.keys()) bytes += sizes.get(id) ?? 0;
+  for (const id of scripts.keys()) bytes += Math.max(0, (sizes.get(id) ?? 0) - (headerBytes.get(id) ?? 0));
   return { bytes, scripts: scripts.size, encodings: new Set(scripts.values()) };
 }
 
