@@ -27,6 +27,7 @@ import { addMember, makeClub, makeUser } from '../../server/db/factories';
 import { migrateDatabase } from '../../server/db/migrate';
 import { loadEnv } from '../../server/env';
 import { createMailer } from '../../server/mail/mailer';
+import { freePort, waitFor } from './processes';
 import { databaseUrl, ensureDatabase, ensureMariadb, projectRoot } from '../lib/mariadb';
 
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 4);
@@ -74,29 +75,6 @@ function recordOn(pool: Pool) {
 // ---------------------------------------------------------------------------------------------
 // Small helpers
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer();
-    s.once('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitFor(url: string, child: ChildProcess) {
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error(`${url}: the process exited (${child.exitCode})`);
-    try {
-      await fetch(url);
-      return;
-    } catch {
-      await new Promise((r) => setTimeout(r, 200));
-    }
-  }
-  throw new Error(`${url} did not answer within 60 s`);
-}
 
 function cpuTicks(pid: number): number {
   const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');

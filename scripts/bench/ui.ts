@@ -32,6 +32,7 @@ import { demoPassword, demoPeople, seedDemo } from '../../server/db/seed';
 import '../../server/demo-seeds';
 import { DEMO_BREW_NAME } from '../../server/brews/demo-seed';
 import { chromiumArgs, chromiumPath, ensureChromium } from '../lib/chromium';
+import { freePort, waitFor } from './processes';
 import { databaseUrl, dataRoot, ensureDatabase, ensureMariadb, projectRoot } from '../lib/mariadb';
 
 const KEYSTROKES = Number(process.env.BENCH_KEYSTROKES ?? 40);
@@ -39,29 +40,6 @@ const LOAD_ROUNDS = Number(process.env.BENCH_ROUNDS ?? 2);
 const CPU_THROTTLE = 4;
 const jwtSecret = 'bench-only-secret-of-at-least-thirty-two-characters';
 
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer();
-    s.once('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitFor(url: string, child: ChildProcess) {
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error(`${url}: the process exited (${child.exitCode})`);
-    try {
-      await fetch(url);
-      return;
-    } catch {
-      await new Promise((r) => setTimeout(r, 200));
-    }
-  }
-  throw new Error(`${url} did not answer within 60 s`);
-}
 
 const quantile = (xs: number[], q: number) => {
   const s = [...xs].sort((a, b) => a - b);
