@@ -434,6 +434,21 @@ export interface FermentationLog {
   now: string;
 }
 
+/**
+ * The answer to a new reading: the reading and the parts of the log it changes (verdict,
+ * temperature summary, progress, reminders), never the whole readings list.
+ */
+export interface FermentationReadingCreated {
+  reading: FermentationReading;
+  /** The same reading was already saved (a retry after a lost answer). */
+  duplicate: boolean;
+  verdict: FermentationVerdict | null;
+  temperature: TemperatureSummary;
+  progress: FermentationProgress;
+  reminders: ScheduledReminder[];
+  now: string;
+}
+
 export interface CsvRowError {
   /** Spreadsheet row number: the header is row 1. */
   row: number;
