@@ -81,6 +81,25 @@ describe('the fermentation log', () => {
     expect(log.body.verdict.state).toBe(res.body.verdict.state);
   });
 
+  it('counts every reading outside the recipe range but lists only the latest twenty', async () => {
+    const s = await makeFermentationScene(h);
+    const { brew } = (await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200)).body;
+    expect(brew.fermentationTempMaxC).not.toBeNull();
+    let res;
+    for (let i = 0; i < 22; i++) {
+      res = await s.owner.agent
+        .post(`/api/brews/${s.brewId}/fermentation/readings`)
+        .send({ method: 'thermometer', tempC: brew.fermentationTempMaxC + 3, takenAt: new Date(s.pitchedAt.getTime() + (i + 1) * 3_600_000).toISOString() })
+        .expect(201);
+    }
+    expect(res!.body.temperature.excursionCount).toBe(22);
+    expect(res!.body.temperature.excursions).toHaveLength(20);
+    expect(res!.body.temperature.excursions.at(-1).readingId).toBe(res!.body.reading.id);
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.temperature.excursionCount).toBe(22);
+    expect(log.body.temperature.excursions).toHaveLength(20);
+  });
+
   it('never calls refractometer estimates alone stable', async () => {
     const s = await makeFermentationScene(h);
     for (const day of [12, 14, 16]) {

@@ -12,6 +12,7 @@ import { findFermentationDeviations, type FermentationDeviation } from '@shared/
 import type { BrewDeviation } from '@shared/schemas/brews';
 import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
 import {
+  EXCURSIONS_LISTED,
   methodKind,
   type FermentationBrew,
   type FermentationLog,
@@ -24,6 +25,7 @@ import {
   type PackagingBody,
   type PackagingRecord,
   type ScheduledReminder,
+  type TemperatureSummary,
 } from '@shared/schemas/fermentation';
 import type { InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { RecipeTargets } from '@shared/schemas/recipes';
@@ -299,13 +301,18 @@ const toScheduled = (r: { kind: ScheduledReminder['kind']; dueAt: Date; sentAt: 
   outcome: r.outcome,
 });
 
+/** A logger left in a warm room can put thousands of readings out of range: the answer lists the latest few and counts them all. */
+function listedOnly(summary: TemperatureSummary): TemperatureSummary {
+  return summary.excursions.length <= EXCURSIONS_LISTED ? summary : { ...summary, excursions: summary.excursions.slice(-EXCURSIONS_LISTED) };
+}
+
 /** What the readings decide: the verdict, the temperature summary and the progress figures. */
 function derivedParts(stored: StoredBrew, brew: FermentationBrew, og: number | null, rows: readonly DerivedRow[], now: Date) {
   let latest: DerivedRow | null = null;
   for (const r of rows) if (r.kind === 'gravity') latest = r;
   return {
     verdict: verdictFor(rows, stored.row.pitchedAt, now, expectedFgOf(stored)),
-    temperature: temperatureOf(rows, rangeOf(brew), now),
+    temperature: listedOnly(temperatureOf(rows, rangeOf(brew), now)),
     progress: fermentationProgress({
       og,
       targetOg: brew.targetOg,
