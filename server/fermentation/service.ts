@@ -5,7 +5,7 @@
  * writes, everyone else gets a 404.
  */
 import { createHash } from 'node:crypto';
-import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, inArray, sql } from 'drizzle-orm';
 import { expectedFinalGravity, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
 import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
 import { findFermentationDeviations, type FermentationDeviation } from '@shared/brew-deviations';
@@ -199,9 +199,11 @@ export function expectedFgOf(stored: StoredBrew): number | null {
 }
 
 /** The columns the verdict and the temperature summary read: a write asks for these, not whole rows. */
-export type DerivedRow = Pick<FermentationReadingRow, 'id' | 'kind' | 'takenAt' | 'correctedValue' | 'estimate' | 'instrumentSnapshot'>;
+export type DerivedRow = Pick<FermentationReadingRow, 'id' | 'kind' | 'takenAt' | 'correctedValue' | 'estimate'> &
+  (Pick<FermentationReadingRow, 'instrumentSnapshot'> | { resolutionSg: number | null });
 
 function resolutionOf(row: DerivedRow): number | null {
+  if ('resolutionSg' in row) return row.resolutionSg;
   const snapshot = row.instrumentSnapshot as InstrumentSnapshot | null;
   return snapshot?.kind === 'hydrometer' ? (snapshot.resolutionSg ?? null) : null;
 }
@@ -226,7 +228,8 @@ async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRow[]> {
       takenAt: fermentationReadings.takenAt,
       correctedValue: fermentationReadings.correctedValue,
       estimate: fermentationReadings.estimate,
-      instrumentSnapshot: fermentationReadings.instrumentSnapshot,
+      // The one figure the verdict reads from the snapshot, not thousands of snapshots parsed.
+      resolutionSg: sql<number | null>`CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE)`,
     })
     .from(fermentationReadings)
     .where(eq(fermentationReadings.brewId, brewId))
