@@ -28,7 +28,7 @@ describe('the fermentation log', () => {
     expect(res.body.reading.corrected).toBeCloseTo((1.01 * 998.2071) / 995.6502, 5);
     expect(res.body.reading.instrument).toMatchObject({ instrumentId: hydrometer, name: 'Trial-jar hydrometer', calibrationTempC: 20 });
     expect(res.body.reading.day).toBeCloseTo(12, 6);
-    expect(res.body.log.verdict.state).toBe('too-early');
+    expect(res.body.verdict.state).toBe('too-early');
   });
 
   it('labels a refractometer reading as an alcohol-corrected estimate and keeps the original Brix it used', async () => {
@@ -48,16 +48,56 @@ describe('the fermentation log', () => {
     const s = await makeFermentationScene(h);
     const add = (day: number, sg: number) =>
       s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg, sampleTempC: 20, takenAt: s.day(day) });
-    expect((await add(3, 1.02)).body.log.verdict.state).toBe('no-reading');
-    expect((await add(12, 1.016)).body.log.verdict.state).toBe('too-early');
+    expect((await add(3, 1.02)).body.verdict.state).toBe('no-reading');
+    expect((await add(12, 1.016)).body.verdict.state).toBe('too-early');
     const moving = await add(14, 1.012);
-    expect(moving.body.log.verdict.state).toBe('moving');
-    expect(moving.body.log.verdict.reason).toMatch(/still going/);
+    expect(moving.body.verdict.state).toBe('moving');
+    expect(moving.body.verdict.reason).toMatch(/still going/);
     const stable = await add(16, 1.012);
-    expect(stable.body.log.verdict).toMatchObject({ state: 'stable', needsHydrometer: false });
+    expect(stable.body.verdict).toMatchObject({ state: 'stable', needsHydrometer: false });
     // Apparent attenuation against the brew day's OG 1.050: (1.050 − 1.012) / 0.050 = 76 %.
-    expect(stable.body.log.progress.current.apparentAttenuation).toBeCloseTo(0.76, 6);
-    expect(stable.body.log.progress.current.abvSimple).toBeCloseTo((1.05 - 1.012) * 131.25, 6);
+    expect(stable.body.progress.current.apparentAttenuation).toBeCloseTo(0.76, 6);
+    expect(stable.body.progress.current.abvSimple).toBeCloseTo((1.05 - 1.012) * 131.25, 6);
+  });
+
+  // Common practice, no source: a stable verdict needs two agreeing hydrometer readings after day 12.
+  it('answers a new reading with that reading and what it changed, not the whole log', async () => {
+    const s = await makeFermentationScene(h);
+    const add = (body: Record<string, unknown>) => s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send(body).expect(201);
+    await add({ method: 'hydrometer', sg: 1.012, sampleTempC: 20, takenAt: s.day(14) });
+    await add({ method: 'thermometer', tempC: 19, takenAt: s.day(15) });
+    const res = await add({ method: 'hydrometer', sg: 1.012, sampleTempC: 20, takenAt: s.day(17), note: 'third' });
+    expect(res.body).not.toHaveProperty('readings');
+    expect(res.body).not.toHaveProperty('log');
+    expect(JSON.stringify(res.body)).not.toMatch(/"readings"/);
+    expect(res.body.reading).toMatchObject({ brewId: s.brewId, kind: 'gravity', corrected: 1.012, note: 'third' });
+    expect(res.body.verdict.state).toBe('stable');
+    expect(res.body.progress.current.sg).toBe(1.012);
+    expect(res.body.temperature.latest.tempC).toBe(19);
+    // The full log still holds all three, in time order.
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.readings.map((r: { id: number }) => r.id).at(-1)).toBe(res.body.reading.id);
+    expect(log.body.readings).toHaveLength(3);
+    expect(log.body.verdict.state).toBe(res.body.verdict.state);
+  });
+
+  it('counts every reading outside the recipe range but lists only the latest twenty', async () => {
+    const s = await makeFermentationScene(h);
+    const { brew } = (await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200)).body;
+    expect(brew.fermentationTempMaxC).not.toBeNull();
+    let res;
+    for (let i = 0; i < 22; i++) {
+      res = await s.owner.agent
+        .post(`/api/brews/${s.brewId}/fermentation/readings`)
+        .send({ method: 'thermometer', tempC: brew.fermentationTempMaxC + 3, takenAt: new Date(s.pitchedAt.getTime() + (i + 1) * 3_600_000).toISOString() })
+        .expect(201);
+    }
+    expect(res!.body.temperature.excursionCount).toBe(22);
+    expect(res!.body.temperature.excursions).toHaveLength(20);
+    expect(res!.body.temperature.excursions.at(-1).readingId).toBe(res!.body.reading.id);
+    const log = await s.owner.agent.get(`/api/brews/${s.brewId}/fermentation`).expect(200);
+    expect(log.body.temperature.excursionCount).toBe(22);
+    expect(log.body.temperature.excursions).toHaveLength(20);
   });
 
   it('never calls refractometer estimates alone stable', async () => {
@@ -189,8 +229,8 @@ describe('the final-gravity verdict, state by state', () => {
     const s = await makeFermentationScene(h);
     await hydrometerAt(s, 14, 1.012).expect(201);
     const res = await hydrometerAt(s, 17, 1.011).expect(201);
-    expect(res.body.log.verdict.state).toBe('moving');
-    expect(res.body.log.verdict.reason).toMatch(/^1\.012 on day 14 and 1\.011 on day 17, 3 days apart: the gravity fell by 0\.001/);
+    expect(res.body.verdict.state).toBe('moving');
+    expect(res.body.verdict.reason).toMatch(/^1\.012 on day 14 and 1\.011 on day 17, 3 days apart: the gravity fell by 0\.001/);
   });
 
   it('moving: a steady fall of 0.45 points a day on a 0.002 hydrometer (1.0128, 1.0119, 1.0110 on days 12, 14, 16)', async () => {
@@ -204,16 +244,16 @@ describe('the final-gravity verdict, state by state', () => {
     }
     const res = await hydrometerAt(s, 16, 1.011, coarse).expect(201);
     expect(res.body.reading.instrument).toMatchObject({ resolutionSg: 0.002 });
-    expect(res.body.log.verdict.state).toBe('moving');
-    expect(res.body.log.verdict.reason).toMatch(/fell steadily/);
+    expect(res.body.verdict.state).toBe('moving');
+    expect(res.body.verdict.reason).toMatch(/fell steadily/);
   });
 
   it('stuck: steady at 1.030 when the recipe expects 1.011, and packaging needs the override', async () => {
     const s = await makeFermentationScene(h);
     await hydrometerAt(s, 14, 1.03).expect(201);
     const res = await hydrometerAt(s, 17, 1.03).expect(201);
-    expect(res.body.log.verdict.state).toBe('stuck');
-    expect(res.body.log.verdict.reason).toMatch(/steady, but 0\.019 above the 1\.011 this recipe should finish at/);
+    expect(res.body.verdict.state).toBe('stuck');
+    expect(res.body.verdict.reason).toMatch(/steady, but 0\.019 above the 1\.011 this recipe should finish at/);
     const refused = await s.owner.agent
       .post(`/api/brews/${s.brewId}/fermentation/packaging`)
       .send({ container: 'bottles', volumeL: 19, warmestTempC: 20, targetCo2Volumes: 2.4, sugar: 'sucrose' });
@@ -225,8 +265,8 @@ describe('the final-gravity verdict, state by state', () => {
     const s = await makeFermentationScene(h);
     await hydrometerAt(s, 14, 1.012).expect(201);
     const res = await hydrometerAt(s, 17, 1.012).expect(201);
-    expect(res.body.log.verdict.state).toBe('stable');
-    expect(res.body.log.verdict.reason).toBe('1.012 on day 14 and 1.012 on day 17, 3 days apart: the same reading. Final gravity is stable.');
+    expect(res.body.verdict.state).toBe('stable');
+    expect(res.body.verdict.reason).toBe('1.012 on day 14 and 1.012 on day 17, 3 days apart: the same reading. Final gravity is stable.');
   });
 });
 

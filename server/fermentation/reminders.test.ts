@@ -62,8 +62,8 @@ describe('fermentation reminders by e-mail', () => {
       s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'hydrometer', sg, sampleTempC: 20, takenAt: s.day(day) }).expect(201);
     await add(12, 1.018);
     const moving = await add(14, 1.013);
-    expect(moving.body.log.verdict.state).toBe('moving');
-    const recheck = moving.body.log.reminders.find((r: { kind: string }) => r.kind === 'recheck');
+    expect(moving.body.verdict.state).toBe('moving');
+    const recheck = moving.body.reminders.find((r: { kind: string }) => r.kind === 'recheck');
     expect(recheck.dueAt).toBe(s.day(16));
 
     // Nothing is due yet: the day-12 check is skipped because the brewer is already checking.

@@ -5,13 +5,14 @@
  * writes, everyone else gets a 404.
  */
 import { createHash } from 'node:crypto';
-import { and, asc, desc, eq, gt, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, inArray, sql } from 'drizzle-orm';
 import { expectedFinalGravity, residualCo2Volumes, primingSugarG } from '@shared/brewmath';
 import { dedupeMaterial, fermentationProgress, fermentationVerdict, temperatureSummary } from '@shared/fermentation';
 import { findFermentationDeviations, type FermentationDeviation } from '@shared/brew-deviations';
 import type { BrewDeviation } from '@shared/schemas/brews';
 import { correctReading, defaultSnapshot, type CorrectedReading } from '@shared/instruments';
 import {
+  EXCURSIONS_LISTED,
   methodKind,
   type FermentationBrew,
   type FermentationLog,
@@ -19,10 +20,12 @@ import {
   type FermentationRaw,
   type FermentationReading,
   type FermentationReadingBody,
+  type FermentationReadingCreated,
   type FermentationVerdict,
   type PackagingBody,
   type PackagingRecord,
   type ScheduledReminder,
+  type TemperatureSummary,
 } from '@shared/schemas/fermentation';
 import type { InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { RecipeTargets } from '@shared/schemas/recipes';
@@ -195,12 +198,17 @@ export function expectedFgOf(stored: StoredBrew): number | null {
   return expectedFinalGravity({ fgSg: typeof t.targetFg === 'number' ? t.targetFg : null });
 }
 
-function resolutionOf(row: FermentationReadingRow): number | null {
+/** The columns the verdict and the temperature summary read: a write asks for these, not whole rows. */
+export type DerivedRow = Pick<FermentationReadingRow, 'id' | 'kind' | 'takenAt' | 'correctedValue' | 'estimate'> &
+  (Pick<FermentationReadingRow, 'instrumentSnapshot'> | { resolutionSg: number | null });
+
+function resolutionOf(row: DerivedRow): number | null {
+  if ('resolutionSg' in row) return row.resolutionSg;
   const snapshot = row.instrumentSnapshot as InstrumentSnapshot | null;
   return snapshot?.kind === 'hydrometer' ? (snapshot.resolutionSg ?? null) : null;
 }
 
-export function verdictFor(rows: readonly FermentationReadingRow[], pitchedAt: Date | null, now: Date, expectedFgSg: number | null = null): FermentationVerdict | null {
+export function verdictFor(rows: readonly DerivedRow[], pitchedAt: Date | null, now: Date, expectedFgSg: number | null = null): FermentationVerdict | null {
   if (!pitchedAt) return null;
   const gravity = rows
     .filter((r) => r.kind === 'gravity')
@@ -212,11 +220,27 @@ export async function readingRows(db: DbOrTx, brewId: number) {
   return db.select().from(fermentationReadings).where(eq(fermentationReadings.brewId, brewId)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id));
 }
 
+async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRow[]> {
+  return db
+    .select({
+      id: fermentationReadings.id,
+      kind: fermentationReadings.kind,
+      takenAt: fermentationReadings.takenAt,
+      correctedValue: fermentationReadings.correctedValue,
+      estimate: fermentationReadings.estimate,
+      // The one figure the verdict reads from the snapshot, not thousands of snapshots parsed.
+      resolutionSg: sql<number | null>`CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE)`,
+    })
+    .from(fermentationReadings)
+    .where(eq(fermentationReadings.brewId, brewId))
+    .orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id));
+}
+
 function rangeOf(brew: FermentationBrew): { minC: number; maxC: number } | null {
   return brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
 }
 
-function temperatureOf(rows: readonly FermentationReadingRow[], range: { minC: number; maxC: number } | null, now: Date) {
+function temperatureOf(rows: readonly DerivedRow[], range: { minC: number; maxC: number } | null, now: Date) {
   const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
   return temperatureSummary(temps, range, now);
 }
@@ -261,29 +285,63 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
   const pitchedAt = stored.row.pitchedAt;
   const brew = brewOf(actor, stored, ogRead);
   const og = ogRead.og;
-  const range = rangeOf(brew);
-  const gravity = rows.filter((r) => r.kind === 'gravity');
-  const latest = gravity.length ? gravity[gravity.length - 1] : null;
-  const reminders: ScheduledReminder[] = reminderRows.map((r) => ({
-    kind: r.kind,
-    dueAt: iso(r.dueAt),
-    sentAt: r.sentAt ? iso(r.sentAt) : null,
-    outcome: r.outcome,
-  }));
+  const reminders = reminderRows;
   return {
     brew,
     readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
-    verdict: verdictFor(rows, pitchedAt, now, expectedFgOf(stored)),
-    temperature: temperatureOf(rows, range, now),
+    ...derivedParts(stored, brew, og, rows, now),
+    packaging: packagingRow ? toPackaging(packagingRow) : null,
+    remindersEnabled: enabled,
+    reminders: reminders.map(toScheduled),
+    now: iso(now),
+  };
+}
+
+const toScheduled = (r: { kind: ScheduledReminder['kind']; dueAt: Date; sentAt: Date | null; outcome: ScheduledReminder['outcome'] }): ScheduledReminder => ({
+  kind: r.kind,
+  dueAt: iso(r.dueAt),
+  sentAt: r.sentAt ? iso(r.sentAt) : null,
+  outcome: r.outcome,
+});
+
+/** A logger left in a warm room can put thousands of readings out of range: the answer lists the latest few and counts them all. */
+function listedOnly(summary: TemperatureSummary): TemperatureSummary {
+  return summary.excursions.length <= EXCURSIONS_LISTED ? summary : { ...summary, excursions: summary.excursions.slice(-EXCURSIONS_LISTED) };
+}
+
+/** What the readings decide: the verdict, the temperature summary and the progress figures. */
+function derivedParts(stored: StoredBrew, brew: FermentationBrew, og: number | null, rows: readonly DerivedRow[], now: Date) {
+  let latest: DerivedRow | null = null;
+  for (const r of rows) if (r.kind === 'gravity') latest = r;
+  return {
+    verdict: verdictFor(rows, stored.row.pitchedAt, now, expectedFgOf(stored)),
+    temperature: listedOnly(temperatureOf(rows, rangeOf(brew), now)),
     progress: fermentationProgress({
       og,
       targetOg: brew.targetOg,
       targetFg: brew.targetFg,
       current: latest ? { sg: latest.correctedValue, estimate: latest.estimate, takenAt: iso(latest.takenAt) } : null,
     }),
-    packaging: packagingRow ? toPackaging(packagingRow) : null,
-    remindersEnabled: enabled,
-    reminders,
+  };
+}
+
+/**
+ * The answer to a new reading: the reading and the parts of the log it changes. The whole list
+ * is never sent back (a long log is megabytes of JSON); the page adds the reading to what it has.
+ */
+async function assembleChange(db: DbOrTx, actor: Actor, stored: StoredBrew, readingId: number, duplicate: boolean, rows: readonly DerivedRow[], now: Date): Promise<FermentationReadingCreated> {
+  const brewId = stored.row.id;
+  const [[row], ogRead, reminderRows] = await Promise.all([
+    db.select().from(fermentationReadings).where(eq(fermentationReadings.id, readingId)),
+    ogReading(db, brewId),
+    db.select().from(fermentationReminders).where(eq(fermentationReminders.brewId, brewId)).orderBy(asc(fermentationReminders.dueAt)),
+  ]);
+  const brew = brewOf(actor, stored, ogRead);
+  return {
+    reading: toFermentationReading(row, stored.row.pitchedAt),
+    duplicate,
+    ...derivedParts(stored, brew, ogRead.og, rows, now),
+    reminders: reminderRows.map(toScheduled),
     now: iso(now),
   };
 }
@@ -382,10 +440,9 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
       .where(and(eq(fermentationReadings.brewId, brewId), eq(fermentationReadings.dedupeKey, key)));
     id = existing.id;
   }
-  if (!duplicate) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), pitchedAt, now, expectedFgOf(stored)), now);
-  const log = await assembleLog(db, actor, stored, now);
-  const reading = log.readings.find((r) => r.id === id)!;
-  return { reading, duplicate, log };
+  const rows = await derivedRows(db, brewId);
+  if (!duplicate) await scheduleAfterReadings(db, stored, verdictFor(rows, pitchedAt, now, expectedFgOf(stored)), now);
+  return assembleChange(db, actor, stored, id, duplicate, rows, now);
 }
 
 export async function deleteReading(db: Db, actor: Actor, brewId: number, readingId: number) {

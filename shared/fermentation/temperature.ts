@@ -71,6 +71,7 @@ export function temperatureSummary(
     overall: rangeOf(points),
     latest: latest ? { takenAt: iso(latest.t), tempC: latest.c } : null,
     excursions,
+    excursionCount: excursions.length,
     largestSwing24hC: largest,
     swingFlagged: largest !== null && largest > SWING_FLAG_C,
   };

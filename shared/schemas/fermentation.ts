@@ -335,6 +335,9 @@ export interface TemperatureExcursion {
   byC: number;
 }
 
+/** An API answer lists at most this many temperature excursions, the latest; the count covers them all. */
+export const EXCURSIONS_LISTED = 20;
+
 export interface TemperatureRange {
   minC: number;
   maxC: number;
@@ -349,7 +352,10 @@ export interface TemperatureSummary {
   last24h: TemperatureRange | null;
   overall: TemperatureRange | null;
   latest: { takenAt: string; tempC: number } | null;
+  /** Readings outside the range, oldest first; an API answer lists only the latest few (EXCURSIONS_LISTED). */
   excursions: TemperatureExcursion[];
+  /** How many readings were outside the range, listed or not. */
+  excursionCount: number;
   /** Within any 24 hours the temperature moved by more than this. */
   largestSwing24hC: number | null;
   swingFlagged: boolean;
@@ -431,6 +437,21 @@ export interface FermentationLog {
   remindersEnabled: boolean | null;
   reminders: ScheduledReminder[];
   /** The server's clock, so "day N" on the page matches the verdict. */
+  now: string;
+}
+
+/**
+ * The answer to a new reading: the reading and the parts of the log it changes (verdict,
+ * temperature summary, progress, reminders), never the whole readings list.
+ */
+export interface FermentationReadingCreated {
+  reading: FermentationReading;
+  /** The same reading was already saved (a retry after a lost answer). */
+  duplicate: boolean;
+  verdict: FermentationVerdict | null;
+  temperature: TemperatureSummary;
+  progress: FermentationProgress;
+  reminders: ScheduledReminder[];
   now: string;
 }
 

@@ -1,6 +1,7 @@
 import { scaleLinear, scaleTime } from 'd3-scale';
 import { line } from 'd3-shape';
 import { useEffect, useId, useRef, useState } from 'react';
+import { Button } from './button';
 
 /**
  * One chart for the brew day and for fermentation: a line per series against time or days, a left
@@ -73,6 +74,8 @@ export interface ChartProps {
 }
 
 const HEIGHT = 240;
+/** Rows of the numbers table drawn at first, and added by each "Show more". */
+const TABLE_ROWS = 100;
 const M = { left: 52, right: 52, top: 16, bottom: 44 };
 const tones = {
   cellar: { stroke: 'stroke-cellar-700', fill: 'fill-cellar-700', text: 'fill-cellar-700', swatch: 'bg-cellar-700' },
@@ -105,6 +108,8 @@ function yScale(values: number[], plotH: number) {
 }
 
 export function Chart({ title, summary, x, left, right, series, targets = [], bands = [], table, testId }: ChartProps) {
+  // Thousands of rows would be drawn even while the table is folded: they come a hundred at a time.
+  const [tableLimit, setTableLimit] = useState(TABLE_ROWS);
   const { ref, width } = useWidth();
   const titleId = useId();
   const summaryId = useId();
@@ -262,7 +267,7 @@ export function Chart({ title, summary, x, left, right, series, targets = [], ba
               </tr>
             </thead>
             <tbody>
-              {table.rows.map((r) => (
+              {table.rows.slice(0, tableLimit).map((r) => (
                 <tr key={r.key} className="border-b border-cellar-50">
                   {r.cells.map((c, i) => (
                     <td key={i} className="py-1 pr-3 tabular-nums">
@@ -274,6 +279,11 @@ export function Chart({ title, summary, x, left, right, series, targets = [], ba
             </tbody>
           </table>
         </div>
+        {table.rows.length > tableLimit && (
+          <Button variant="secondary" className="mt-2 w-full sm:w-auto" onClick={() => setTableLimit(tableLimit + TABLE_ROWS)}>
+            {`Show ${Math.min(TABLE_ROWS, table.rows.length - tableLimit)} more rows (${table.rows.length - tableLimit} not shown)`}
+          </Button>
+        )}
       </details>
     </figure>
   );

@@ -23,13 +23,13 @@ const log = {
   progress: { og: 1.05 },
 } as unknown as FermentationLog;
 
-function renderChart(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'>) {
+function renderChart(prefs: Pick<Me, 'unitSystem' | 'gravityUnit'>, shown: FermentationLog = log) {
   const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity } } });
   const me: Me = { id: 1, email: 'b@example.org', displayName: 'B', colourScale: 'srm', gallonUnit: 'us', siteRole: 'user', clubs: [], ...prefs };
   queryClient.setQueryData(meQueryOptions().queryKey, me);
   render(
     <QueryClientProvider client={queryClient}>
-      <FermentationChart log={log} />
+      <FermentationChart log={shown} />
     </QueryClientProvider>,
   );
 }
@@ -53,5 +53,17 @@ describe('the fermentation chart’s text alternative', () => {
     const table = screen.getByRole('table', { name: 'Fermentation readings by day since pitching' });
     const rows = within(table).getAllByRole('row').map((r) => r.textContent!.replace(/\u00a0/g, ' '));
     expect(rows).toEqual(['DayWhatValue', '0Gravity1.050', '1Fermenter temperature20.0 °C', '12Gravity1.012']);
+  });
+
+  it('draws a long table a hundred rows at a time', async () => {
+    const readings = Array.from({ length: 150 }, (_, i) => ({ kind: 'temperature', takenAt: day(i / 10), corrected: 19, estimate: false }));
+    renderChart({ unitSystem: 'metric', gravityUnit: 'sg' }, { ...log, readings } as unknown as FermentationLog);
+    await userEvent.click(screen.getByText('The numbers as a table'));
+    const table = screen.getByRole('table', { name: 'Fermentation readings by day since pitching' });
+    // A header row and the first hundred readings.
+    expect(within(table).getAllByRole('row')).toHaveLength(101);
+    await userEvent.click(screen.getByRole('button', { name: 'Show 50 more rows (50 not shown)' }));
+    expect(within(table).getAllByRole('row')).toHaveLength(151);
+    expect(screen.queryByRole('button', { name: /more rows/ })).toBeNull();
   });
 });

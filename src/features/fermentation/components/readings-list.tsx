@@ -13,10 +13,12 @@ export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId:
   const units = useUnits();
   const remove = useDeleteFermentationReading(brewId);
   const [confirm, setConfirm] = useState<number | null>(null);
-  const [all, setAll] = useState(false);
+  const [limit, setLimit] = useState(SHOWN);
   if (readings.length === 0) return <p className="text-ink-soft">No readings yet.</p>;
-  const newestFirst = [...readings].reverse();
-  const shown = all ? newestFirst : newestFirst.slice(0, SHOWN);
+  // Only the rows shown are copied and drawn: a long log (thousands of readings) opens at once.
+  const shown: FermentationReading[] = [];
+  for (let i = readings.length - 1; i >= 0 && shown.length < limit; i--) shown.push(readings[i]);
+  const hidden = readings.length - shown.length;
   return (
     <>
       {remove.error && <Notice tone="error">{remove.error.message}</Notice>}
@@ -65,10 +67,19 @@ export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId:
           );
         })}
       </ol>
-      {newestFirst.length > SHOWN && (
-        <Button variant="secondary" className="mt-2 w-full sm:w-auto" onClick={() => setAll(!all)}>
-          {all ? 'Show the latest only' : `Show all ${countOf(newestFirst.length, 'reading')}`}
-        </Button>
+      {readings.length > SHOWN && (
+        <div className="mt-2 flex flex-col gap-2 sm:flex-row">
+          {hidden > 0 && (
+            <Button variant="secondary" className="w-full sm:w-auto" onClick={() => setLimit(limit + MORE)}>
+              {`Show ${Math.min(MORE, hidden)} more (${countOf(hidden, 'reading')} not shown)`}
+            </Button>
+          )}
+          {limit > SHOWN && (
+            <Button variant="quiet" className="w-full sm:w-auto" onClick={() => setLimit(SHOWN)}>
+              Show the latest only
+            </Button>
+          )}
+        </div>
       )}
     </>
   );
@@ -76,6 +87,8 @@ export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId:
 
 /** The latest few; a phone should not scroll past a month of temperatures to reach packaging. */
 const SHOWN = 6;
+/** Each "Show more" adds this many older readings. */
+const MORE = 100;
 
 function describe(r: FermentationReading, units: ReturnType<typeof useUnits>) {
   switch (r.raw.method) {

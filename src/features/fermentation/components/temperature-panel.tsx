@@ -17,8 +17,9 @@ export function TemperaturePanel({ summary }: { summary: TemperatureSummary }) {
         <Figure label="Recipe range" value={summary.target ? `${t(summary.target.minC)} – ${t(summary.target.maxC)}` : '—'} />
         <Figure label="Latest" value={summary.latest ? t(summary.latest.tempC) : '—'} hint={summary.latest ? shortDateTime(summary.latest.takenAt) : undefined} />
       </dl>
-      {summary.excursions.length > 0 && (
-        <Notice tone="caution" title={`${countOf(summary.excursions.length, 'reading')} outside the recipe's range`}>
+      {summary.excursionCount > 0 && (
+        <Notice tone="caution" title={`${countOf(summary.excursionCount, 'reading')} outside the recipe's range`}>
+          {summary.excursionCount > summary.excursions.length && <p>The latest {summary.excursions.length} are listed here.</p>}
           <ul className="mt-1 space-y-0.5">
             {summary.excursions.map((e) => (
               <li key={`${e.takenAt}-${e.tempC}`}>
