@@ -122,6 +122,7 @@ function instrumentDeviation(reading: DeviationReading, stage: BrewDeviation['st
 const stageOf: Record<ReadingKind, BrewDeviation['stage']> = {
   mash_temp: 'mash',
   mash_ph: 'mash',
+  souring_ph: 'souring',
   pre_boil_gravity: 'boil',
   late_boil_gravity: 'boil',
   pitch_temp: 'chill',

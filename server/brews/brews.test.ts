@@ -161,7 +161,7 @@ describe('stages', () => {
     expect(res.body.status).toBe('fermenting');
     const bad = await agent.post(`/api/brews/${id}/stages/sparge`).send({ action: 'start' });
     expect(bad.status).toBe(400);
-    expect(bad.body.fields.stage).toBe('Unknown stage: use mash, boil, chill or og.');
+    expect(bad.body.fields.stage).toBe('Unknown stage: use mash, souring, boil, chill or og.');
   });
 
   it('takes today’s boil-off rate when the brewer changes it', async () => {

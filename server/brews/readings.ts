@@ -29,6 +29,7 @@ function splitRaw(body: ReadingBody): { raw: ReadingRaw; volumeL: number | null 
     case 'mash_temp':
       return { raw: { tempC: body.tempC }, volumeL: null };
     case 'mash_ph':
+    case 'souring_ph':
       return { raw: { ph: body.ph }, volumeL: null };
     case 'pitch_temp':
       return { raw: { tempC: body.tempC, pitched: body.pitched }, volumeL: null };
@@ -80,6 +81,10 @@ async function snapshotFor(db: Db, actor: Actor, kind: InstrumentKind, instrumen
 
 export async function addReading(db: Db, actor: Actor, brewId: number, body: ReadingBody): Promise<ReadingCreated> {
   const stored = await loadBrewForActor(db, actor, brewId, 'update');
+  if (body.kind === 'souring_ph' && stored.row.targetsSnapshot.souringTargetPh == null) {
+    const message = 'This brew day has no souring stage: its recipe sets no souring target pH.';
+    throw new BadRequest(message, { kind: message });
+  }
   const kind = instrumentKindFor(body);
   const snapshot = await snapshotFor(db, actor, kind, body.instrumentId);
   const takenAt = body.takenAt ? new Date(body.takenAt) : new Date();

@@ -7,7 +7,7 @@
 import { and, asc, desc, eq, inArray, ne } from 'drizzle-orm';
 import { findDeviations } from '@shared/brew-deviations';
 import {
-  brewStages,
+  stagesFor,
   readingQuantity,
   type BrewDayChange,
   type BrewDecision,
@@ -185,8 +185,8 @@ export function brewDayDeviations(targets: RecipeTargets, readings: readonly Bre
   });
 }
 
-function stagesOf(stageRows: readonly (typeof brewStagesTable.$inferSelect)[]): BrewStageState[] {
-  return brewStages.map((stage) => {
+function stagesOf(targets: RecipeTargets, stageRows: readonly (typeof brewStagesTable.$inferSelect)[]): BrewStageState[] {
+  return stagesFor(targets).map((stage) => {
     const s = stageRows.find((r) => r.stage === stage);
     return { stage, startedAt: iso(s?.startedAt ?? null), completedAt: iso(s?.completedAt ?? null), skippedAt: iso(s?.skippedAt ?? null) };
   });
@@ -209,7 +209,7 @@ export async function brewDayChange(db: DbOrTx, brewId: number): Promise<BrewDay
     pitchedAt: iso(row.pitchedAt),
     currentStage: row.currentStage,
     updatedAt: row.updatedAt.toISOString(),
-    stages: stagesOf(stageRows),
+    stages: stagesOf(row.targetsSnapshot, stageRows),
     deviations: brewDayDeviations(row.targetsSnapshot as RecipeTargets, readings, decisionRows.map(toDecision)),
   };
 }
@@ -242,7 +242,7 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
   const decisions = decisionRows.map(toDecision);
   const targets = stored.row.targetsSnapshot;
   const equipment = stored.row.equipmentSnapshot;
-  const stages = stagesOf(stageRows);
+  const stages = stagesOf(targets, stageRows);
   const og = [...readings].reverse().find((r) => r.kind === 'og')?.corrected ?? null;
   const resource = { ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds };
   return {
@@ -336,7 +336,7 @@ export async function startBrew(db: DbOrTx, actor: Actor, input: StartBrewInput,
         updatedAt: now,
       })
       .$returningId();
-    await tx.insert(brewStagesTable).values(brewStages.map((stage) => ({ brewId: id, stage, startedAt: stage === 'mash' ? now : null })));
+    await tx.insert(brewStagesTable).values(stagesFor(targets).map((stage) => ({ brewId: id, stage, startedAt: stage === 'mash' ? now : null })));
     return id;
   });
 }
@@ -360,6 +360,11 @@ export async function deleteBrew(db: DbOrTx, actor: Actor, id: number): Promise<
 /** Marks a stage started (it is returned to when it was done or skipped), completed or skipped; times are kept. */
 export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: BrewStage, action: BrewStageAction, now = new Date()): Promise<void> {
   const stored = await loadBrewForActor(db, actor, id, 'update');
+  const stages = stagesFor(stored.row.targetsSnapshot);
+  if (!stages.includes(stage)) {
+    const message = 'This brew day has no souring stage: its recipe sets no souring target pH.';
+    throw new BadRequest(message, { stage: message });
+  }
   await db.transaction(async (tx) => {
     await lockBrewRow(tx, id);
     const rows = await tx.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)).for('update');
@@ -381,8 +386,8 @@ export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: Brew
         const r = rows.find((x) => x.stage === s);
         return Boolean(r?.completedAt || r?.skippedAt);
       };
-      const after = brewStages.slice(brewStages.indexOf(stage) + 1).find((s) => !done(s));
-      currentStage = after ?? brewStages.find((s) => !done(s)) ?? stage;
+      const after = stages.slice(stages.indexOf(stage) + 1).find((s) => !done(s));
+      currentStage = after ?? stages.find((s) => !done(s)) ?? stage;
     }
     const set: Partial<typeof brews.$inferInsert> = { currentStage, updatedAt: now };
     // The last stage done on brew day: the beer is fermenting now.

@@ -110,6 +110,7 @@ export {
   type PrimingSugar,
   type PrimingInput,
 } from './priming';
+export { SOURING_PH_BAND, souringProgress, souringTargetReached, type SouringReadingIn, type SouringStep } from './souring';
 export { MASH_PH_TARGET, MASH_PH_BAND, MASH_PH_TOLERANCE, mashPhStatus, mashPhVerdict, type MashPhStatus, type MashPhVerdict } from './mash';
 export {
   LITRES_PER_US_GALLON,

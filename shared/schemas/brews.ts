@@ -13,12 +13,18 @@ import type { RecipeTargets } from './recipes';
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
 
-/** The stages of a brew day, in the order they happen. */
-export const brewStages = ['mash', 'boil', 'chill', 'og'] as const;
+/** The stages of a brew day, in the order they happen. Souring is optional: see `stagesFor`. */
+export const brewStages = ['mash', 'souring', 'boil', 'chill', 'og'] as const;
 export type BrewStage = (typeof brewStages)[number];
+
+/** A brew day's stages: souring (kettle souring before the boil) only when its recipe set a souring target pH. */
+export function stagesFor(targets: { souringTargetPh?: number | null } | null | undefined): readonly BrewStage[] {
+  return targets?.souringTargetPh != null ? brewStages : brewStages.filter((s) => s !== 'souring');
+}
 
 export const brewStageLabels: Record<BrewStage, string> = {
   mash: 'Mash',
+  souring: 'Souring',
   boil: 'Boil',
   chill: 'Chill and pitch',
   og: 'Original gravity',
@@ -36,12 +42,13 @@ export const brewStatusLabels: Record<BrewStatus, string> = {
   packaged: 'Packaged',
 };
 
-export const readingKinds = ['mash_temp', 'mash_ph', 'pre_boil_gravity', 'late_boil_gravity', 'pitch_temp', 'og'] as const;
+export const readingKinds = ['mash_temp', 'mash_ph', 'souring_ph', 'pre_boil_gravity', 'late_boil_gravity', 'pitch_temp', 'og'] as const;
 export type ReadingKind = (typeof readingKinds)[number];
 
 export const readingKindLabels: Record<ReadingKind, string> = {
   mash_temp: 'Mash temperature',
   mash_ph: 'Mash pH',
+  souring_ph: 'Souring pH',
   pre_boil_gravity: 'Pre-boil gravity',
   late_boil_gravity: 'Late-boil gravity',
   pitch_temp: 'Pitch temperature',
@@ -52,6 +59,7 @@ export const readingKindLabels: Record<ReadingKind, string> = {
 export const readingStage: Record<ReadingKind, BrewStage> = {
   mash_temp: 'mash',
   mash_ph: 'mash',
+  souring_ph: 'souring',
   pre_boil_gravity: 'boil',
   late_boil_gravity: 'boil',
   pitch_temp: 'chill',
@@ -62,6 +70,7 @@ export const readingStage: Record<ReadingKind, BrewStage> = {
 export const readingInstrumentKinds: Record<ReadingKind, readonly InstrumentKind[]> = {
   mash_temp: ['thermometer'],
   mash_ph: ['ph_meter'],
+  souring_ph: ['ph_meter'],
   pre_boil_gravity: ['refractometer', 'hydrometer'],
   late_boil_gravity: ['refractometer', 'hydrometer'],
   pitch_temp: ['thermometer'],
@@ -73,6 +82,7 @@ export type ReadingQuantity = 'temperature' | 'ph' | 'gravity';
 export const readingQuantity: Record<ReadingKind, ReadingQuantity> = {
   mash_temp: 'temperature',
   mash_ph: 'ph',
+  souring_ph: 'ph',
   pre_boil_gravity: 'gravity',
   late_boil_gravity: 'gravity',
   pitch_temp: 'temperature',
@@ -94,6 +104,8 @@ export const READING_LIMITS = {
   mashTempC: { min: 0, max: 100 },
   pitchTempC: { min: -5, max: 60 },
   ph: { min: 3, max: 9 },
+  /** Wort being soured: from the mash's pH down past any kettle-sour target (recipes allow 2.8 to 4.6). */
+  souringPh: { min: 2.5, max: 7 },
   brix: { min: 0, max: 40 },
   sg: { min: 1, max: 1.2 },
   sampleTempC: { min: 0, max: 60 },
@@ -125,6 +137,14 @@ export const phSchema = ranged(
   L.ph.min,
   L.ph.max,
   `A mash reads between pH ${L.ph.min} and ${L.ph.max}; anything else is a misreading or a meter fault. Check the meter.`,
+);
+
+export const souringPhSchema = ranged(
+  'the pH',
+  'pH',
+  L.souringPh.min,
+  L.souringPh.max,
+  `Souring wort reads between pH ${L.souringPh.min} and ${L.souringPh.max}; anything else is a misreading or a meter fault. Check the meter.`,
 );
 
 export const brixSchema = ranged(
@@ -202,6 +222,7 @@ function requireGravity(v: { method?: GravityMethod; brix?: number; sg?: number;
 
 export const mashTempReadingSchema = z.object({ ...base, kind: z.literal('mash_temp'), tempC: mashTempSchema });
 export const mashPhReadingSchema = z.object({ ...base, kind: z.literal('mash_ph'), ph: phSchema });
+export const souringPhReadingSchema = z.object({ ...base, kind: z.literal('souring_ph'), ph: souringPhSchema });
 export const preBoilReadingSchema = z
   .object({ ...base, kind: z.literal('pre_boil_gravity'), ...gravityFields, volumeL: kettleVolumeSchema.optional() })
   .superRefine(requireGravity);
@@ -226,8 +247,8 @@ export const ogReadingSchema = z.object({
 
 export const readingInputSchema = z.discriminatedUnion(
   'kind',
-  [mashTempReadingSchema, mashPhReadingSchema, preBoilReadingSchema, lateBoilReadingSchema, pitchTempReadingSchema, ogReadingSchema],
-  { error: 'Choose what was read: mash temperature, mash pH, pre-boil or late-boil gravity, pitch temperature or OG.' },
+  [mashTempReadingSchema, mashPhReadingSchema, souringPhReadingSchema, preBoilReadingSchema, lateBoilReadingSchema, pitchTempReadingSchema, ogReadingSchema],
+  { error: 'Choose what was read: mash temperature, mash pH, souring pH, pre-boil or late-boil gravity, pitch temperature or OG.' },
 );
 export type ReadingInput = z.input<typeof readingInputSchema>;
 export type ReadingBody = z.output<typeof readingInputSchema>;
@@ -273,7 +294,7 @@ export const stageActionSchema = z.object({
 });
 export const stageParamsSchema = z.object({
   id: idSchema,
-  stage: z.enum(brewStages, { error: 'Unknown stage: use mash, boil, chill or og.' }),
+  stage: z.enum(brewStages, { error: 'Unknown stage: use mash, souring, boil, chill or og.' }),
 });
 
 export const listBrewsQuerySchema = z.object({

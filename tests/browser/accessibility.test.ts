@@ -5,6 +5,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { demoPassword, demoPeople } from '../../server/db/seed';
 import { DEMO_BREW_NAME } from '../../server/brews/demo-seed';
+import { testRecipe } from '../../server/brews/test-scene';
 import { newPage, phone, signInViaApi, useBrowser } from '../support/browser';
 
 const b = useBrowser();
@@ -104,6 +105,10 @@ for (const [size, viewport] of [
     it('finds no serious or critical violation on the brewer’s pages', async () => {
       const { page, context, errors } = await signedIn(b.browser, demoPeople.brewer.email, viewport);
       const { recipeId, brewId, clubId } = await ids(context);
+      // A kettle sour with one souring pH in, so the souring stage and its progress are judged too.
+      const sour = await (await context.request.post('/api/recipes', { data: { ...testRecipe, name: `Axe sour ${size}`, souringTargetPh: 3.4 } })).json();
+      const sourBrew = await (await context.request.post('/api/brews', { data: { recipeId: sour.id } })).json();
+      expect((await context.request.post(`/api/brews/${sourBrew.id}/readings`, { data: { kind: 'souring_ph', ph: 4.4 } })).status()).toBe(201);
       const found: Found[] = [];
       const paths = [
         '/',
@@ -115,6 +120,7 @@ for (const [size, viewport] of [
         ...['mash', 'boil', 'chill', 'og'].map((stage) => `/brews/${brewId}?stage=${stage}`),
         `/brews/${brewId}/log`,
         `/brews/${brewId}/fermentation`,
+        `/brews/${sourBrew.id}?stage=souring`,
         '/instruments',
         '/clubs',
         `/clubs/${clubId}`,

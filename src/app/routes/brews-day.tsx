@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { FlaskConical, ScrollText } from 'lucide-react';
 import { useMemo, useRef, useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { brewStages, type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
+import { type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { useAddDecision } from '@/features/brews/api/add-decision';
 import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
@@ -71,7 +71,7 @@ export function Component() {
   if (brew.permissions.edit && instruments.isPending) return <Loading label="Loading your instruments…" />;
 
   const stageParam = params.get('stage') as BrewStage | null;
-  const selected = stageParam && brewStages.includes(stageParam) ? stageParam : brew.currentStage;
+  const selected = stageParam && brew.stages.some((s) => s.stage === stageParam) ? stageParam : brew.currentStage;
   const select = (stage: BrewStage) => setParams({ stage }, { replace: true });
 
   const saveDecision = (input: BoilCheckParsed, choice: DecisionChoice) => addDecision.mutateAsync({ input, choice, note: reason.current });

@@ -1,7 +1,7 @@
 import { Check, CircleDashed, SkipForward, Undo2 } from 'lucide-react';
 import type { ReactNode } from 'react';
-import { MASH_PH_BAND } from '@shared/brewmath';
-import { brewStageLabels, brewStages, readingKindInSentence, readingStage, type BrewDetail, type BrewStage, type BrewStageState, type ReadingKind } from '@shared/schemas/brews';
+import { MASH_PH_BAND, SOURING_PH_BAND } from '@shared/brewmath';
+import { brewStageLabels, readingKindInSentence, readingStage, type BrewDetail, type BrewStage, type BrewStageState, type ReadingKind } from '@shared/schemas/brews';
 import type { Instrument } from '@shared/schemas/instruments';
 import { Button } from '@/components/ui/button';
 import { cautionTexts } from '@/components/ui/cautions';
@@ -14,11 +14,13 @@ import { timeText } from './describe';
 import { NoteForm } from './note-form';
 import { ReadingCard } from './reading-card';
 import { ReadingForm } from './reading-form';
+import { SouringProgress } from './souring-progress';
 
-const shortLabels: Record<BrewStage, string> = { mash: 'Mash', boil: 'Boil', chill: 'Chill', og: 'OG' };
+const shortLabels: Record<BrewStage, string> = { mash: 'Mash', souring: 'Sour', boil: 'Boil', chill: 'Chill', og: 'OG' };
 
 const stageKinds: Record<BrewStage, readonly ReadingKind[][]> = {
   mash: [['mash_temp'], ['mash_ph']],
+  souring: [['souring_ph']],
   boil: [['pre_boil_gravity', 'late_boil_gravity']],
   chill: [['pitch_temp']],
   og: [['og']],
@@ -40,10 +42,10 @@ function statusOf(s: BrewStageState): StageStatus {
 
 const statusWords: Record<StageStatus, string> = { done: 'done', skipped: 'skipped', started: 'under way', 'not-started': 'not started' };
 
-/** Four big stage tabs, each saying whether it is done, skipped or under way. */
+/** Big stage tabs (four, or five with souring), each saying whether it is done, skipped or under way. */
 export function StageTabs({ brew, selected, onSelect }: { brew: BrewDetail; selected: BrewStage; onSelect: (stage: BrewStage) => void }) {
   return (
-    <div role="tablist" aria-label="Stages" className="no-print grid grid-cols-4 gap-1">
+    <div role="tablist" aria-label="Stages" className={`no-print grid gap-1 ${brew.stages.length > 4 ? 'grid-cols-5' : 'grid-cols-4'}`}>
       {brew.stages.map((s, i) => {
         const status = statusOf(s);
         const active = s.stage === selected;
@@ -77,6 +79,8 @@ function Targets({ brew, stage, units }: { brew: BrewDetail; stage: BrewStage; u
   if (stage === 'mash') {
     if (t.mashSteps.length > 0) lines.push(`Steps: ${t.mashSteps.map((s) => `${units.format('temperature', s.tempC)} for ${s.minutes} min`).join(', then ')}`);
     lines.push(`Mash pH ${MASH_PH_BAND.min.toFixed(1)}–${MASH_PH_BAND.max.toFixed(1)} (recipe aims ${t.mashPhTarget.toFixed(2)})`);
+  } else if (stage === 'souring') {
+    lines.push(`Sour to pH ${t.souringTargetPh?.toFixed(2) ?? '—'} or below before the boil (common practice ${SOURING_PH_BAND.min.toFixed(1)}–${SOURING_PH_BAND.max.toFixed(1)})`);
   } else if (stage === 'boil') {
     lines.push(`${t.boilMinutes} min boil, ${units.format('volume', t.preBoilVolumeL)} before, ${units.format('volume', t.postBoilVolumeL)} after`);
     lines.push(`Boil-off today: ${units.format('rate', brew.boilOffLPerHour)}`);
@@ -99,6 +103,10 @@ function Targets({ brew, stage, units }: { brew: BrewDetail; stage: BrewStage; u
 
 const cautions: Partial<Record<BrewStage, { title: string; body: string }>> = {
   mash: { title: 'Hot mash', body: 'Stir and sample with a long spoon. Keep the pH electrode in its storage solution between readings.' },
+  souring: {
+    title: 'Soured wort is acidic',
+    body: `Keep it covered, and keep it warm only as your souring method says. Wear eye protection when sampling, and clean and sanitise everything it touched afterwards. ${cautionTexts.chemicals} Follow the product labels and local rules.`,
+  },
   boil: { title: 'Hot wort and steam burn', body: 'Sample with a long spoon or tube, keep your face out of the steam, and never put a hydrometer in boiling wort.' },
   chill: { title: 'Clean from here on', body: `Anything that touches cooled wort must be sanitised. Yeast pitched into wort that is too hot dies. ${cautionTexts.chemicals}` },
 };
@@ -153,7 +161,8 @@ export function BrewDay({ brew, instruments, selected, onSelect, boilCheck }: Br
   const canEdit = brew.permissions.edit;
   // The late-boil check carries its own hot-wort caution; say it once.
   const caution = selected === 'boil' && boilCheck ? undefined : cautions[selected];
-  const next = brewStages[brewStages.indexOf(selected) + 1];
+  const stageList = brew.stages.map((s) => s.stage);
+  const next = stageList[stageList.indexOf(selected) + 1];
   return (
     <div className="space-y-4">
       <StageTabs brew={brew} selected={selected} onSelect={onSelect} />
@@ -184,6 +193,8 @@ export function BrewDay({ brew, instruments, selected, onSelect, boilCheck }: Br
             ))}
           </section>
         )}
+
+        {selected === 'souring' && brew.targets.souringTargetPh != null && <SouringProgress readings={readings} targetPh={brew.targets.souringTargetPh} />}
 
         {readings.length > 0 && (
           <section aria-label="Readings" className="space-y-2">

@@ -62,6 +62,7 @@ export function toReadingInput(v: ReadingFormValues): Record<string, unknown> {
     case 'mash_temp':
       return { ...base, tempC: v.tempC };
     case 'mash_ph':
+    case 'souring_ph':
       return { ...base, ph: v.ph };
     case 'pitch_temp':
       return { ...base, tempC: v.tempC, pitched: v.pitched };
@@ -253,6 +254,8 @@ function ValueFields({ units }: { units: Units }) {
       return <QuantityField name="tempC" kind="temperature" label="Mash temperature, as read" size="large" units={units} hint="Stir first: the top, middle and bottom differ." />;
     case 'mash_ph':
       return <NumberField name="ph" label="Mash pH, as read" size="large" hint="Read a sample cooled to room temperature." />;
+    case 'souring_ph':
+      return <NumberField name="ph" label="Souring pH, as read" size="large" hint="Read a sample cooled to room temperature, with the meter calibrated in two buffers." />;
     case 'pitch_temp':
       return (
         <>
