@@ -28,6 +28,11 @@ CREATE TABLE `revoked_sessions` (
 	CONSTRAINT `revoked_sessions_session_id` PRIMARY KEY(`session_id`)
 );
 --> statement-breakpoint
+ALTER TABLE `brew_notes` MODIFY COLUMN `stage` enum('mash','souring','boil','chill','og');--> statement-breakpoint
+ALTER TABLE `brew_readings` MODIFY COLUMN `stage` enum('mash','souring','boil','chill','og') NOT NULL;--> statement-breakpoint
+ALTER TABLE `brew_readings` MODIFY COLUMN `kind` enum('mash_temp','mash_ph','souring_ph','pre_boil_gravity','late_boil_gravity','pitch_temp','og') NOT NULL;--> statement-breakpoint
+ALTER TABLE `brew_stages` MODIFY COLUMN `stage` enum('mash','souring','boil','chill','og') NOT NULL;--> statement-breakpoint
+ALTER TABLE `brews` MODIFY COLUMN `current_stage` enum('mash','souring','boil','chill','og') NOT NULL DEFAULT 'mash';--> statement-breakpoint
 ALTER TABLE `reading_photos` MODIFY COLUMN `data` mediumblob;--> statement-breakpoint
 ALTER TABLE `packaging_records` MODIFY COLUMN `verdict_state` enum('no-reading','too-early','moving','stuck','stable') NOT NULL;--> statement-breakpoint
 ALTER TABLE `users` ADD `colour_scale` enum('srm','ebc') DEFAULT 'srm' NOT NULL;--> statement-breakpoint
