@@ -70,7 +70,12 @@ export function isDatabaseUnavailable(error: unknown) {
 /** A short description for the log line: code and errno of the innermost driver error. */
 export function describeDbError(error: unknown) {
   let last: DriverError | undefined;
-  for (const e of causes(error)) if (e.code !== undefined || e.errno !== undefined) last = e;
-  if (!last) return String((error as Error)?.message ?? error);
-  return [last.code, last.errno].filter((x) => x !== undefined).join(' ');
+  let innermost: unknown = error;
+  for (const e of causes(error)) {
+    innermost = e;
+    if (e.code !== undefined || e.errno !== undefined) last = e;
+  }
+  if (last) return [last.code, last.errno].filter((x) => x !== undefined).join(' ');
+  // No driver code (a rollback on a connection already gone, say): the innermost message, on one line.
+  return String((innermost as Error)?.message ?? innermost).split('\n')[0].trim() || 'no detail';
 }
