@@ -2,6 +2,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { demoPassword, demoPeople } from '../../server/db/seed';
 import { mailTo, newPage, signInViaApi, useBrowser, goToSection } from '../support/browser';
+import { DEMO_SHARED_RECIPE_NAME } from '../../server/recipes/demo-seed';
 
 const b = useBrowser();
 
@@ -25,8 +26,9 @@ const lateBoilInput = {
 
 /** A brew day of the demo brewer's, with a late-boil reading and an "as is" decision, shared with her club. */
 async function sharedBrewDay(context: BrowserContext, name: string) {
-  const recipes = ((await (await context.request.get('/api/recipes?scope=mine')).json()) as { items: { id: number; targetOg: number }[] }).items;
-  const recipe = recipes.find((r) => r.targetOg === 1.05)!;
+  // The demo recipe by name: other browser tests add recipes of their own to the same brewer.
+  const recipes = ((await (await context.request.get('/api/recipes?scope=mine')).json()) as { items: { id: number; name: string }[] }).items;
+  const recipe = recipes.find((r) => r.name === DEMO_SHARED_RECIPE_NAME)!;
   const started = await context.request.post('/api/brews', { data: { recipeId: recipe.id, name } });
   expect(started.status()).toBe(201);
   const brewId = ((await started.json()) as { id: number }).id;
