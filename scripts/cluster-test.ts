@@ -6,6 +6,7 @@
  * were acknowledged but are missing afterwards. Exits 1 on any 500 or any lost write.
  * Not part of `npm test`: it starts a dozen processes and takes a few minutes.
  */
+import { randomUUID } from 'node:crypto';
 import { createDb } from '../server/db/client';
 import { migrateDatabase } from '../server/db/migrate';
 import { seedDemo } from '../server/db/seed';
@@ -45,12 +46,12 @@ const stats = { requests: 0, byStatus: new Map<string, number>(), retried: 0, ga
 const count = (key: string) => stats.byStatus.set(key, (stats.byStatus.get(key) ?? 0) + 1);
 const acknowledged: { brewId: number; readingId: number }[] = [];
 
-async function call(method: string, path: string, cookie: string, body?: unknown): Promise<Response | null> {
+async function call(method: string, path: string, cookie: string, body?: unknown, idempotencyKey?: string): Promise<Response | null> {
   stats.requests += 1;
   try {
     const res = await fetch(`${base}${path}`, {
       method,
-      headers: { 'content-type': 'application/json', cookie },
+      headers: { 'content-type': 'application/json', cookie, ...(idempotencyKey && { 'idempotency-key': idempotencyKey }) },
       body: body === undefined ? undefined : JSON.stringify(body),
       signal: AbortSignal.timeout(10_000),
     });
@@ -62,14 +63,18 @@ async function call(method: string, path: string, cookie: string, body?: unknown
   }
 }
 
-/** A write as a careful client sends it: a 502/503 or a dropped connection is tried again, up to 5 times. */
+/**
+ * A write as a careful client sends it: a 502/503 or a dropped connection is tried again, up to 5
+ * times, with the same Idempotency-Key, so a retry whose first answer was lost stores nothing new.
+ */
 async function write(path: string, cookie: string, body: unknown): Promise<Response | null> {
+  const key = randomUUID();
   for (let attempt = 0; attempt < 6; attempt++) {
     if (attempt > 0) {
       stats.retried += 1;
       await new Promise((r) => setTimeout(r, 300 * attempt));
     }
-    const res = await call('POST', path, cookie, body);
+    const res = await call('POST', path, cookie, body, key);
     if (res && res.status !== 502 && res.status !== 503 && res.status !== 504) return res;
   }
   stats.gaveUp += 1;
