@@ -5,28 +5,10 @@
  * read back), and prints CPU milliseconds per request from process.cpuUsage(). A benchmark that
  * prints figures, never a pass/fail test.
  */
-import request from 'supertest';
-import { createApp } from '../server/app';
-import { createDb } from '../server/db/client';
-import { migrateDatabase } from '../server/db/migrate';
-import { seedDemo } from '../server/db/seed';
-import '../server/demo-seeds';
-import { loadEnv } from '../server/env';
-import { createMailer } from '../server/mail/mailer';
-import { databaseUrl, ensureDatabase, ensureMariadb } from './lib/mariadb';
+import { startInProcessApp } from './bench/in-process';
 
 const rounds = Number(process.env.BENCH_ROUNDS ?? 300);
-const mariadb = await ensureMariadb();
-const url = databaseUrl(`wortwise_bench_${process.pid}`, mariadb.port);
-await ensureDatabase(url, { fresh: true });
-await migrateDatabase(url);
-const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: url, AUTH_RATE_LIMIT_MAX: '100000', CALC_RATE_LIMIT_MAX: '100000' });
-const { db, pool } = createDb(url);
-await seedDemo(db);
-const app = createApp({ env, db, pool, mailer: createMailer(env) });
-const agent = request.agent(app);
-await agent.post('/api/auth/login').send({ email: 'priya@hollow-oak.example', password: 'wortwise-demo' }).expect(200);
-const recipeId = (await agent.get('/api/recipes').expect(200)).body.items[0].id as number;
+const { pool, agent, recipeId, stop } = await startInProcessApp('wortwise_bench');
 
 async function measure(label: string, one: (i: number) => Promise<unknown>) {
   for (let i = 0; i < 20; i++) await one(i); // warm up
@@ -62,6 +44,4 @@ for (const r of rows as { name: string; n: number; avgRow: number; idx: number; 
 const [[json]] = (await pool.query('SELECT AVG(LENGTH(instrument_snapshot) + LENGTH(correction) + LENGTH(warnings)) AS jsonBytes FROM brew_readings')) as unknown as [[{ jsonBytes: number }]];
 console.log(`JSON in a reading row               ${Math.round(Number(json.jsonBytes))} bytes`);
 
-await pool.query(`DROP DATABASE \`${new URL(url).pathname.slice(1)}\``);
-await pool.end();
-await mariadb.stop();
+await stop();

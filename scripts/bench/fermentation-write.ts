@@ -4,34 +4,16 @@
  * milliseconds per request (process.cpuUsage) and the bytes of each answer. A benchmark that
  * prints figures, never a pass/fail test.
  */
-import request from 'supertest';
 import { defaultSnapshot } from '@shared/instruments';
-import { createApp } from '../../server/app';
-import { createDb } from '../../server/db/client';
-import { migrateDatabase } from '../../server/db/migrate';
 import { fermentationReadings } from '../../server/db/schema';
-import { seedDemo } from '../../server/db/seed';
-import '../../server/demo-seeds';
-import { loadEnv } from '../../server/env';
 import { dedupeKey } from '../../server/fermentation/service';
 import { MAX_READINGS_PER_LOG } from '../../server/lib/reading-limit';
-import { createMailer } from '../../server/mail/mailer';
-import { databaseUrl, ensureDatabase, ensureMariadb } from '../lib/mariadb';
+import { startInProcessApp } from './in-process';
 
 const writes = 100;
 const reads = 20;
 const HOUR_MS = 3_600_000;
-const mariadb = await ensureMariadb();
-const url = databaseUrl(`wortwise_bench_ferm_${process.pid}`, mariadb.port);
-await ensureDatabase(url, { fresh: true });
-await migrateDatabase(url);
-const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: url, AUTH_RATE_LIMIT_MAX: '100000', CALC_RATE_LIMIT_MAX: '100000' });
-const { db, pool } = createDb(url);
-await seedDemo(db);
-const app = createApp({ env, db, pool, mailer: createMailer(env) });
-const agent = request.agent(app);
-await agent.post('/api/auth/login').send({ email: 'priya@hollow-oak.example', password: 'wortwise-demo' }).expect(200);
-const recipeId = (await agent.get('/api/recipes').expect(200)).body.items[0].id as number;
+const { db, agent, recipeId, stop } = await startInProcessApp('wortwise_bench_ferm');
 const brewId = (await agent.post('/api/brews').send({ recipeId }).expect(201)).body.id as number;
 const prefill = MAX_READINGS_PER_LOG - writes - 40;
 // Pitched long enough ago for an hourly logger to have filled the log.
@@ -74,6 +56,4 @@ await measure(`POST a reading (log of ${prefill}+ readings)`, writes, (i) =>
 );
 await measure(`GET the whole log (${prefill + writes} readings)`, reads, () => agent.get(`/api/brews/${brewId}/fermentation`).expect(200));
 
-await pool.query(`DROP DATABASE \`${new URL(url).pathname.slice(1)}\``);
-await pool.end();
-await mariadb.stop();
+await stop();

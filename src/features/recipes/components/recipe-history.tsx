@@ -82,30 +82,8 @@ export function RecipeHistory({ recipeId, currentVersion }: { recipeId: number; 
         <div className="mt-4">
           <h3 className="text-sm font-semibold uppercase tracking-wide text-ink-faint">What changed</h3>
           <div className="mt-2 flex flex-wrap gap-3">
-            <div>
-              <label htmlFor={fromId} className="mb-1 block text-sm font-semibold text-ink-soft">
-                From version
-              </label>
-              <select id={fromId} className="min-h-touch rounded-lg border border-cellar-300 bg-white px-3" value={fromVersion ?? ''} onChange={(e) => setFrom(Number(e.target.value))}>
-                {list.map((v) => (
-                  <option key={v.version} value={v.version}>
-                    {v.version}
-                  </option>
-                ))}
-              </select>
-            </div>
-            <div>
-              <label htmlFor={toId} className="mb-1 block text-sm font-semibold text-ink-soft">
-                To version
-              </label>
-              <select id={toId} className="min-h-touch rounded-lg border border-cellar-300 bg-white px-3" value={toVersion ?? ''} onChange={(e) => setTo(Number(e.target.value))}>
-                {list.map((v) => (
-                  <option key={v.version} value={v.version}>
-                    {v.version}
-                  </option>
-                ))}
-              </select>
-            </div>
+            <VersionSelect id={fromId} label="From version" versions={list} value={fromVersion} onChange={setFrom} />
+            <VersionSelect id={toId} label="To version" versions={list} value={toVersion} onChange={setTo} />
           </div>
           {(a.isError || b.isError) && <p className="mt-2 text-sm text-ink-soft">One of these versions was saved before history was kept.</p>}
           {changes && changes.length === 0 && <p className="mt-2 text-sm text-ink-soft">No differences.</p>}
@@ -144,5 +122,23 @@ export function RecipeHistory({ recipeId, currentVersion }: { recipeId: number; 
         </div>
       )}
     </Card>
+  );
+}
+
+/** One end of the comparison: a labelled choice among the saved versions. */
+function VersionSelect({ id, label, versions, value, onChange }: { id: string; label: string; versions: readonly { version: number }[]; value: number | null | undefined; onChange: (version: number) => void }) {
+  return (
+    <div>
+      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
+        {label}
+      </label>
+      <select id={id} className="min-h-touch rounded-lg border border-cellar-300 bg-white px-3" value={value ?? ''} onChange={(e) => onChange(Number(e.target.value))}>
+        {versions.map((v) => (
+          <option key={v.version} value={v.version}>
+            {v.version}
+          </option>
+        ))}
+      </select>
+    </div>
   );
 }
