@@ -37,11 +37,16 @@ describe('the API edge', () => {
     expect(res.body.error).toBe('not_found');
   });
 
-  it('sends helmet headers', async () => {
-    const res = await request(h.app).get('/api/health');
-    expect(res.headers['x-content-type-options']).toBe('nosniff');
-    expect(res.headers['content-security-policy']).toContain("default-src 'self'");
-    expect(res.headers['x-powered-by']).toBeUndefined();
+  it('sends the API security headers on JSON answers, helmet-made', async () => {
+    for (const res of [await request(h.app).get('/api/health'), await request(h.app).get('/api/no-such-thing')]) {
+      expect(res.headers['x-content-type-options']).toBe('nosniff');
+      // OWASP REST Security Cheat Sheet, "Security headers": an API answer frames nothing and loads nothing.
+      expect(res.headers['content-security-policy']).toBe("default-src 'none';frame-ancestors 'none'");
+      expect(res.headers['x-frame-options']).toBe('DENY');
+      expect(res.headers['strict-transport-security']).toMatch(/^max-age=\d+/);
+      expect(res.headers['x-powered-by']).toBeUndefined();
+      expect(res.headers.etag).toBeUndefined();
+    }
   });
 });
 

@@ -17,6 +17,7 @@ import { equipmentRouter } from './equipment/router';
 import { fermentationRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
+import { apiSecurityHeaders } from './lib/security-headers';
 import { crossSiteGuard, noStoreWhenSignedIn } from './lib/cross-site';
 import { apiNotFound, errorMiddleware } from './lib/error-middleware';
 import { idempotency } from './lib/idempotency';
@@ -34,18 +35,22 @@ export function createApp(ctx: AppContext) {
   app.disable('x-powered-by');
   if (env.TRUST_PROXY) app.set('trust proxy', env.TRUST_PROXY);
 
-  app.use(helmet());
-  // JSON and the HTML fallback are compressed on the fly (brotli when the browser takes it); the
-  // built files come precompressed (the precompress plugin in vite.config.ts) and are left alone here.
-  app.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
-  app.use(express.json({ limit: '100kb' }));
-  app.use(cookieParser());
+  // JSON answers carry their own ETag-free, no-store semantics: hashing every body for an ETag
+  // nobody revalidates is waste (the built files keep theirs, from serve-static).
+  app.set('etag', false);
 
+  // The API's pipeline is ordered cheapest-first: the health check and the public calculators
+  // pass only what they need, the signed-in routes the rest (issue 14: per-request cost).
   const limits = createRateLimits(env, ctx.redis);
   const api = express.Router();
+  api.use(apiSecurityHeaders());
   api.use(crossSiteGuard(env));
   api.use('/health', healthRouter(pool));
+  api.use(express.json({ limit: '100kb' }));
+  // JSON is compressed on the fly (brotli when the browser takes it) above 1 kB.
+  api.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
   api.use('/calc', calcRouter(limits.calc));
+  api.use(cookieParser());
   api.use(loadUser(db, env));
   api.use(noStoreWhenSignedIn);
   api.use(idempotency(db));
@@ -62,6 +67,11 @@ export function createApp(ctx: AppContext) {
   api.use('/brews', brewsRouter(ctx));
   api.use(apiNotFound);
   app.use('/api', api);
+
+  // Pages and files: helmet's defaults, and the HTML fallback compressed on the fly; the built
+  // files come precompressed (the precompress plugin in vite.config.ts) and are left alone.
+  app.use(helmet());
+  app.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
 
   // The built client, with every other GET falling back to index.html for client-side routing.
   if (existsSync(path.join(clientDist, 'index.html'))) {

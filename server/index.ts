@@ -9,7 +9,7 @@ import { createMailer } from './mail/mailer';
 /** Starts the HTTP server; resolves with a function that shuts it down gracefully. */
 export async function startServer(env = loadEnv()) {
   assertSafeToListen(env);
-  const { db, pool } = createDb(env.DATABASE_URL, { poolSize: env.DB_POOL_SIZE });
+  const { db, pool } = createDb(env.DATABASE_URL, { poolSize: env.DB_POOL_SIZE, trace: env.NODE_ENV !== 'production' });
   const redis = env.REDIS_URL ? await connectRedis(env.REDIS_URL) : null;
   const ctx: AppContext = { env, db, pool, mailer: createMailer(env), redis };
   const app = createApp(ctx);

@@ -57,6 +57,9 @@ describe('serving the built client', () => {
     const page = await request(h.app).get('/recipes').expect(200);
     expect(page.headers['cache-control']).toBe('no-cache');
     expect(page.text).toContain('<div id="root">');
+    // Pages get helmet's default policy (helmet's README: "default-src 'self'" first).
+    expect(page.headers['content-security-policy']).toMatch(/^default-src 'self'/);
+    expect(page.headers['x-content-type-options']).toBe('nosniff');
   });
 
   it('compresses larger API answers for clients that accept it', async () => {
