@@ -1,7 +1,7 @@
 import type { CookieOptions, NextFunction, Request, RequestHandler, Response } from 'express';
 import jwt from 'jsonwebtoken';
 import { createSecretKey, randomBytes, type KeyObject } from 'node:crypto';
-import { asc, eq, lt, sql } from 'drizzle-orm';
+import { asc, eq, lt, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { clubMemberships, clubs, revokedSessions, users, type User } from '../db/schema';
 import type { Env } from '../env';
@@ -80,9 +80,10 @@ export function clearSession(res: Response, env: Env) {
 
 /**
  * The user, their clubs and (given a session id) whether that session was signed out, in one
- * query, without the password hash.
+ * query, without the password hash. It runs on every signed-in request, so its SQL is built once
+ * per database handle (Drizzle's prepared queries, with placeholders) rather than per request.
  */
-async function loadSessionRows(db: Db, userId: number, sessionId: string | null) {
+function buildSessionQuery(db: Db, revoked: SQL<number>) {
   return db
     .select({
       id: users.id,
@@ -97,13 +98,28 @@ async function loadSessionRows(db: Db, userId: number, sessionId: string | null)
       clubId: clubs.id,
       clubName: clubs.name,
       role: clubMemberships.role,
-      revoked: sessionId === null ? sql<number>`0` : sql<number>`exists(select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${sessionId})`,
+      revoked,
     })
     .from(users)
     .leftJoin(clubMemberships, eq(clubMemberships.userId, users.id))
     .leftJoin(clubs, eq(clubs.id, clubMemberships.clubId))
-    .where(eq(users.id, userId))
-    .orderBy(asc(clubs.name));
+    .where(eq(users.id, sql.placeholder('userId')))
+    .orderBy(asc(clubs.name))
+    .prepare();
+}
+
+const sessionQueries = new WeakMap<Db, { withSession: ReturnType<typeof buildSessionQuery>; withoutSession: ReturnType<typeof buildSessionQuery> }>();
+
+async function loadSessionRows(db: Db, userId: number, sessionId: string | null) {
+  let queries = sessionQueries.get(db);
+  if (!queries) {
+    queries = {
+      withSession: buildSessionQuery(db, sql<number>`exists(select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${sql.placeholder('sessionId')})`),
+      withoutSession: buildSessionQuery(db, sql<number>`0`),
+    };
+    sessionQueries.set(db, queries);
+  }
+  return sessionId === null ? queries.withoutSession.execute({ userId }) : queries.withSession.execute({ userId, sessionId });
 }
 
 function toSessionUser(rows: Awaited<ReturnType<typeof loadSessionRows>>): SessionUser | null {
