@@ -248,6 +248,8 @@ async function main() {
     }
     // The health check pings the pool rather than running a statement through it.
     if (statements.health.length === 0) statements.health = [{ sql: 'select 1', params: [] }];
+    // BENCH_SHOW_SQL=1 prints what each request ran, for finding statements to save.
+    if (process.env.BENCH_SHOW_SQL) for (const [name, list] of Object.entries(statements)) console.log(`\n${name}:\n${list.map((st) => `  ${st.sql.slice(0, 220)}`).join('\n')}`);
     const statementsFile = path.join(tmp, 'statements.json');
     writeFileSync(statementsFile, JSON.stringify(statements));
     // Growth, small side, measured on the in-process app would mix CPU with this script: use the child below.
