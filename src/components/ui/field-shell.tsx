@@ -22,14 +22,16 @@ interface FieldShellProps {
   /** A unit shown inside the input's right edge. */
   suffix?: ReactNode;
   className?: string;
+  /** The label is read out but not drawn (a field whose row or column already says what it is). */
+  hideLabel?: boolean;
   children: ReactNode;
 }
 
 /** Label above, the input (with an optional unit inside its right edge), then a hint or the error. */
-export function FieldShell({ id, label, hint, error, suffix, className = '', children }: FieldShellProps) {
+export function FieldShell({ id, label, hint, error, suffix, className = '', hideLabel = false, children }: FieldShellProps) {
   return (
     <div className={className}>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
+      <label htmlFor={id} className={hideLabel ? 'sr-only' : 'mb-1 block text-sm font-semibold text-ink-soft'}>
         {label}
       </label>
       <div className="relative">

@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { FieldArray, Form, Formik, getIn, useField, useFormikContext, type FormikErrors } from 'formik';
+import { FieldArray, Form, Formik, getIn, useFormikContext, type FormikErrors } from 'formik';
 import { Plus, RefreshCw, Save, Trash2 } from 'lucide-react';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
@@ -23,9 +23,11 @@ import {
   type RecipeFermentableKind,
 } from '@shared/schemas/recipes';
 import { Button } from '@/components/ui/button';
+import { Figure } from '@/components/ui/figure';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { QuantityField } from '@/components/ui/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { SaveNotice } from '@/components/ui/save-notice';
 import { toSaveFailure } from '@/lib/save-failure';
@@ -330,10 +332,10 @@ export function TargetsPanel({
   return (
     <div className="space-y-3" aria-live="polite">
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <Figure label="Estimated OG" value={estimate.og === null ? '—' : units.format('gravity', estimate.og)} />
-        {!estimateOnly && <Figure label="Target OG" value={target === null ? '—' : units.format('gravity', target)} />}
-        {!estimateOnly && <Figure label="ABV (simple)" value={abv ? `${abv.abvPercent.toFixed(1)}\u00a0%` : '—'} />}
-        <Figure label="Apparent attenuation" value={abv ? `${Math.round(abv.apparentAttenuation * 100)}\u00a0%` : '—'} />
+        <Tile label="Estimated OG" value={estimate.og === null ? '—' : units.format('gravity', estimate.og)} />
+        {!estimateOnly && <Tile label="Target OG" value={target === null ? '—' : units.format('gravity', target)} />}
+        {!estimateOnly && <Tile label="ABV (simple)" value={abv ? `${abv.abvPercent.toFixed(1)}\u00a0%` : '—'} />}
+        <Tile label="Apparent attenuation" value={abv ? `${Math.round(abv.apparentAttenuation * 100)}\u00a0%` : '—'} />
       </dl>
       {estimate.og === null && <p className="text-sm text-ink-faint">{estimate.reason}</p>}
       {agreement}
@@ -361,11 +363,11 @@ function BitternessColourFigures({ values, estimateOnly }: { values: PanelValues
   return (
     <>
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <Figure label="Estimated bitterness" value={ibu.ibu === null ? '—' : `${Math.round(ibu.ibu)}\u00a0IBU`} />
-        {!estimateOnly && <Figure label="Target bitterness" value={targetIbu === null ? '—' : `${Math.round(targetIbu)}\u00a0IBU`} />}
-        <Figure label="BU:GU" value={buGu === null ? '—' : buGu.toFixed(2)} />
-        <Figure label="Estimated colour" value={formatColour(colour.srm, scale)} />
-        {!estimateOnly && <Figure label="Target colour" value={formatColour(targetSrm, scale)} />}
+        <Tile label="Estimated bitterness" value={ibu.ibu === null ? '—' : `${Math.round(ibu.ibu)}\u00a0IBU`} />
+        {!estimateOnly && <Tile label="Target bitterness" value={targetIbu === null ? '—' : `${Math.round(targetIbu)}\u00a0IBU`} />}
+        <Tile label="BU:GU" value={buGu === null ? '—' : buGu.toFixed(2)} />
+        <Tile label="Estimated colour" value={formatColour(colour.srm, scale)} />
+        {!estimateOnly && <Tile label="Target colour" value={formatColour(targetSrm, scale)} />}
       </dl>
       <p className="text-sm text-ink-faint">
         Bitterness by Tinseth&apos;s formula, colour by Morey&apos;s equation; BU:GU is bitterness over the OG&apos;s gravity points (about 0.5 is balanced, common practice).
@@ -379,13 +381,9 @@ function BitternessColourFigures({ values, estimateOnly }: { values: PanelValues
   );
 }
 
-function Figure({ label, value }: { label: string; value: string }) {
-  return (
-    <div className="rounded-lg bg-cellar-50 p-3">
-      <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{label}</dt>
-      <dd className="mt-1 text-2xl font-bold tabular-nums text-cellar-900">{value}</dd>
-    </div>
-  );
+/** A tinted tile: the panel's figures, readable at a glance. */
+function Tile({ label, value }: { label: string; value: string }) {
+  return <Figure className="rounded-lg bg-cellar-50 p-3" size="2xl" tone="strong" label={label} value={value} />;
 }
 
 function GravitySection() {
@@ -420,42 +418,27 @@ function RowError({ name }: { name: string }) {
 
 function KindSelect({ index }: { index: number }) {
   const name = `fermentables.${index}.kind`;
-  const [field, meta] = useField<RecipeFermentableKind>(name);
   const { setFieldValue, values } = useFormikContext<RecipeFormValues>();
-  const id = useId();
-  const invalid = Boolean(meta.touched && meta.error);
   return (
-    <div>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
-        Kind
-      </label>
-      <select
-        id={id}
-        {...field}
-        onChange={(e) => {
-          const next = e.target.value as RecipeFermentableKind;
-          const current = values.fermentables[index];
-          // Swap in the new kind's usual potential unless the author typed their own.
-          if (current.potentialPointsLPerKg === '' || current.potentialPointsLPerKg === defaultPotentialPointsLPerKg[current.kind]) {
-            void setFieldValue(`fermentables.${index}.potentialPointsLPerKg`, defaultPotentialPointsLPerKg[next] ?? '');
-          }
-          void setFieldValue(name, next);
-        }}
-        aria-invalid={invalid || undefined}
-        className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base"
-      >
-        {fermentableKinds.map((k) => (
-          <option key={k} value={k}>
-            {fermentableKindLabels[k]}
-          </option>
-        ))}
-      </select>
-      {invalid && (
-        <p role="alert" className="mt-1 text-sm font-semibold text-alert-700">
-          {meta.error}
-        </p>
-      )}
-    </div>
+    <SelectField
+      name={name}
+      label="Kind"
+      onChange={(e) => {
+        const next = e.target.value as RecipeFermentableKind;
+        const current = values.fermentables[index];
+        // Swap in the new kind's usual potential unless the author typed their own.
+        if (current.potentialPointsLPerKg === '' || current.potentialPointsLPerKg === defaultPotentialPointsLPerKg[current.kind]) {
+          void setFieldValue(`fermentables.${index}.potentialPointsLPerKg`, defaultPotentialPointsLPerKg[next] ?? '');
+        }
+        void setFieldValue(name, next);
+      }}
+    >
+      {fermentableKinds.map((k) => (
+        <option key={k} value={k}>
+          {fermentableKindLabels[k]}
+        </option>
+      ))}
+    </SelectField>
   );
 }
 
