@@ -48,7 +48,7 @@ describe('Select', () => {
 });
 
 describe('SelectField', () => {
-  function Harness({ validate }: { validate?: (values: { unit: string }) => Record<string, string> }) {
+  function Harness({ validate }: { validate?: (values: { unit: string }) => { unit?: string } }) {
     return (
       <Formik initialValues={{ unit: '' }} validate={validate} onSubmit={() => {}}>
         {({ values }) => (
