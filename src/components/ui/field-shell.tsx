@@ -22,7 +22,7 @@ interface FieldShellProps {
   /** A unit shown inside the input's right edge. */
   suffix?: ReactNode;
   className?: string;
-  /** The label is read out but not drawn (a field whose row or column already says what it is). */
+  /** No drawn label: the input names itself with `aria-label` (its row already says what it is for). */
   hideLabel?: boolean;
   children: ReactNode;
 }
@@ -31,9 +31,11 @@ interface FieldShellProps {
 export function FieldShell({ id, label, hint, error, suffix, className = '', hideLabel = false, children }: FieldShellProps) {
   return (
     <div className={className}>
-      <label htmlFor={id} className={hideLabel ? 'sr-only' : 'mb-1 block text-sm font-semibold text-ink-soft'}>
-        {label}
-      </label>
+      {!hideLabel && (
+        <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
+          {label}
+        </label>
+      )}
       <div className="relative">
         {children}
         {suffix && <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm font-semibold text-ink-faint">{suffix}</span>}

@@ -2,18 +2,19 @@ import { useField } from 'formik';
 import { useId, type ReactNode, type SelectHTMLAttributes } from 'react';
 import { FieldShell, fieldAria, inputClass } from './field-shell';
 
-interface SelectProps extends Omit<SelectHTMLAttributes<HTMLSelectElement>, 'children'> {
-  label: ReactNode;
+type SelectProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'children'> & {
   hint?: ReactNode;
   /** Shown, and announced, only when present. */
   error?: string | null;
-  /** The label is read out but not drawn (a row that already says what the choice is for). */
-  hideLabel?: boolean;
   /** The `<option>`s. */
   children: ReactNode;
   /** Classes of the wrapper (label, select, hint). */
   className?: string;
-}
+} & (
+    | { label: ReactNode; hideLabel?: false }
+    /** Not drawn, only read out (`aria-label`): the row already says what the choice is for. */
+    | { label: string; hideLabel: true }
+  );
 
 /**
  * A labelled choice among a few options, for use outside a form or under its own state: the
@@ -24,17 +25,26 @@ export function Select({ id: givenId, label, hint, error = null, hideLabel, clas
   const id = givenId ?? generated;
   return (
     <FieldShell id={id} label={label} hint={hint} error={error} hideLabel={hideLabel} className={className}>
-      <select {...rest} {...fieldAria(id, { invalid: Boolean(error), hint })} className={inputClass(Boolean(error), 'min-h-touch px-3 py-2 text-base')}>
+      <select
+        {...rest}
+        aria-label={hideLabel ? (label as string) : undefined}
+        {...fieldAria(id, { invalid: Boolean(error), hint })}
+        className={inputClass(Boolean(error), 'min-h-touch px-3 py-2 text-base')}
+      >
         {children}
       </select>
     </FieldShell>
   );
 }
 
-interface SelectFieldProps extends Omit<SelectProps, 'name' | 'value' | 'error'> {
+type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'children' | 'name' | 'value'> & {
   /** The Formik field holding the chosen option's value (a string). */
   name: string;
-}
+  label: ReactNode;
+  hint?: ReactNode;
+  children: ReactNode;
+  className?: string;
+};
 
 /**
  * The same select bound to a Formik field. Its error shows once the field was touched (a submit
