@@ -4,6 +4,7 @@ import { LateBoilCheck } from '@/features/late-boil/components/late-boil-check';
 import type { LateBoilInitialValues } from '@/features/late-boil/components/form-values';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page';
+import { SegmentedControl } from '@/components/ui/segmented-control';
 import { useMe } from '@/lib/auth';
 import { unitsFor, useUnits, type UnitPrefs } from '@/lib/units';
 
@@ -31,25 +32,6 @@ const example: LateBoilInitialValues = {
   targetSg: 1.05,
   targetVolumeL: 23,
 };
-
-function Toggle<T extends string>({ label, value, options, onChange }: { label: string; value: T; options: [T, string][]; onChange: (v: T) => void }) {
-  return (
-    <div role="radiogroup" aria-label={label} className="inline-flex rounded-lg bg-white p-0.5 ring-1 ring-cellar-300">
-      {options.map(([v, text]) => (
-        <button
-          key={v}
-          type="button"
-          role="radio"
-          aria-checked={value === v}
-          onClick={() => onChange(v)}
-          className={`min-h-touch min-w-touch rounded-md px-3 text-sm font-semibold ${value === v ? 'bg-cellar-700 text-white' : 'text-cellar-700'}`}
-        >
-          {text}
-        </button>
-      ))}
-    </div>
-  );
-}
 
 export function Component() {
   const { data: me } = useMe();
@@ -81,8 +63,8 @@ export function Component() {
       />
       {!me && (
         <div className="mb-4 flex flex-wrap gap-2">
-          <Toggle<UnitSystem> label="Units" value={prefs.unitSystem} options={[['metric', 'Litres, kg'], ['us', 'Gallons, lb']]} onChange={(unitSystem) => choose({ unitSystem })} />
-          <Toggle<GravityUnit> label="Gravity" value={prefs.gravityUnit} options={[['sg', 'SG'], ['plato', '°Plato']]} onChange={(gravityUnit) => choose({ gravityUnit })} />
+          <SegmentedControl<UnitSystem> label="Units" value={prefs.unitSystem} options={[['metric', 'Litres, kg'], ['us', 'Gallons, lb']]} onChange={(unitSystem) => choose({ unitSystem })} />
+          <SegmentedControl<GravityUnit> label="Gravity" value={prefs.gravityUnit} options={[['sg', 'SG'], ['plato', '°Plato']]} onChange={(gravityUnit) => choose({ gravityUnit })} />
         </div>
       )}
       <LateBoilCheck

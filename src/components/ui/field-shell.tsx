@@ -22,16 +22,20 @@ interface FieldShellProps {
   /** A unit shown inside the input's right edge. */
   suffix?: ReactNode;
   className?: string;
+  /** No drawn label: the input names itself with `aria-label` (its row already says what it is for). */
+  hideLabel?: boolean;
   children: ReactNode;
 }
 
 /** Label above, the input (with an optional unit inside its right edge), then a hint or the error. */
-export function FieldShell({ id, label, hint, error, suffix, className = '', children }: FieldShellProps) {
+export function FieldShell({ id, label, hint, error, suffix, className = '', hideLabel = false, children }: FieldShellProps) {
   return (
     <div className={className}>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
-        {label}
-      </label>
+      {!hideLabel && (
+        <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
+          {label}
+        </label>
+      )}
       <div className="relative">
         {children}
         {suffix && <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-sm font-semibold text-ink-faint">{suffix}</span>}

@@ -1,5 +1,6 @@
 import { useField } from 'formik';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
+import { parseDecimal } from '@/lib/decimal';
 import { FieldShell, fieldAria, inputClass } from './field-shell';
 
 interface NumberFieldProps {
@@ -48,9 +49,8 @@ export function NumberField({ name, label, unit, hint, scale = 1, toShown, shown
 
   function onChange(next: string) {
     setText(next);
-    const trimmed = next.trim().replace(',', '.');
-    const shown = Number(trimmed);
-    const value = trimmed === '' ? '' : !Number.isFinite(shown) ? Number.NaN : shownToStored ? shownToStored(shown) : shown / scale;
+    const shown = parseDecimal(next);
+    const value = shown === undefined ? '' : Number.isNaN(shown) ? Number.NaN : shownToStored ? shownToStored(shown) : shown / scale;
     lastSet.current = value;
     void helpers.setValue(value);
   }

@@ -1,5 +1,6 @@
 import { useField } from 'formik';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
+import { parseDecimal } from '@/lib/decimal';
 import { displayDecimals, useUnits, type QuantityKind, type Units } from '@/lib/units';
 import { FieldShell, fieldAria, inputClass } from './field-shell';
 
@@ -57,12 +58,11 @@ export function QuantityField({ name, kind, label, hint, className = '', size = 
 
   function onChange(next: string) {
     setText(next);
-    const trimmed = next.trim().replace(',', '.');
+    const shown = parseDecimal(next);
     let value: number | '' = '';
     setConversionError(null);
-    if (trimmed !== '') {
-      const shown = Number(trimmed);
-      if (!Number.isFinite(shown)) {
+    if (shown !== undefined) {
+      if (Number.isNaN(shown)) {
         value = Number.NaN;
         setConversionError('Enter a number.');
       } else {

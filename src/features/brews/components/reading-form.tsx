@@ -23,6 +23,9 @@ import { useAddReading } from '../api/add-reading';
 import { NotSaved } from './not-saved';
 import { NumberField } from '@/components/ui/number-field';
 import { SaveNotice } from '@/components/ui/save-notice';
+import { Figure } from '@/components/ui/figure';
+import { SegmentedControl } from '@/components/ui/segmented-control';
+import { SelectField } from '@/components/ui/select-field';
 
 type NumberValue = number | '' | null;
 
@@ -181,7 +184,8 @@ function Fields({ kinds, instruments }: Pick<ReadingFormProps, 'kinds' | 'instru
   return (
     <>
       {kinds.length > 1 && (
-        <Segmented
+        <SegmentedControl
+          look="tiles"
           label="What did you read?"
           value={kind}
           options={kinds.map((k) => [k, readingKindLabels[k]])}
@@ -189,7 +193,8 @@ function Fields({ kinds, instruments }: Pick<ReadingFormProps, 'kinds' | 'instru
         />
       )}
       {isGravity(kind) && (
-        <Segmented<GravityMethod>
+        <SegmentedControl<GravityMethod>
+          look="tiles"
           label="Read with"
           value={values.method}
           options={[
@@ -210,40 +215,17 @@ function Fields({ kinds, instruments }: Pick<ReadingFormProps, 'kinds' | 'instru
   );
 }
 
-function Segmented<T extends string>({ label, value, options, onChange }: { label: string; value: T; options: [T, string][]; onChange: (v: T) => void }) {
-  return (
-    <div role="radiogroup" aria-label={label} className="grid auto-cols-fr grid-flow-col gap-2">
-      {options.map(([v, text]) => (
-        <button
-          key={v}
-          type="button"
-          role="radio"
-          aria-checked={value === v}
-          onClick={() => onChange(v)}
-          className={`min-h-touch rounded-lg px-2 py-2 text-sm font-semibold ring-1 ${value === v ? 'bg-cellar-700 text-white ring-cellar-700' : 'bg-white text-cellar-700 ring-cellar-300'}`}
-        >
-          {text}
-        </button>
-      ))}
-    </div>
-  );
-}
-
 function InstrumentPicker({ kind, choices }: { kind: InstrumentKind; choices: readonly Instrument[] }) {
   const label = instrumentKindLabels[kind];
   return (
-    <label className="block">
-      <span className="mb-1 block text-sm font-semibold text-ink-soft">{label}</span>
-      <Field as="select" name="instrumentId" className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base">
-        {choices.map((i) => (
-          <option key={i.id} value={String(i.id)}>
-            {i.name}
-          </option>
-        ))}
-        <option value="">None of mine: common-practice defaults</option>
-      </Field>
-      {choices.length === 0 && <span className="mt-1 block text-sm text-ink-faint">Add your {label.toLowerCase()} on the instruments page to use its calibration.</span>}
-    </label>
+    <SelectField name="instrumentId" label={label} hint={choices.length === 0 ? `Add your ${label.toLowerCase()} on the instruments page to use its calibration.` : undefined}>
+      {choices.map((i) => (
+        <option key={i.id} value={String(i.id)}>
+          {i.name}
+        </option>
+      ))}
+      <option value="">None of mine: common-practice defaults</option>
+    </SelectField>
   );
 }
 
@@ -350,18 +332,8 @@ function Preview({ units, instruments }: { units: Units; instruments: readonly I
   return (
     <div aria-live="polite" className="space-y-2">
       <dl className="grid grid-cols-2 gap-2 rounded-xl bg-cellar-50 p-3">
-        <div className="min-w-0">
-          <dt className="text-sm text-ink-faint">As read</dt>
-          <dd className="text-2xl font-bold tabular-nums text-ink" data-testid="raw-value">
-            {rawShown}
-          </dd>
-        </div>
-        <div className="min-w-0">
-          <dt className="text-sm text-ink-faint">Corrected</dt>
-          <dd className="text-2xl font-bold tabular-nums text-cellar-900" data-testid="corrected-value">
-            {corrected ? show(corrected.value) : '—'}
-          </dd>
-        </div>
+        <Figure className="min-w-0" labelStyle="plain" size="2xl" label="As read" value={rawShown} valueTestId="raw-value" />
+        <Figure className="min-w-0" labelStyle="plain" size="2xl" tone="strong" label="Corrected" value={corrected ? show(corrected.value) : '—'} valueTestId="corrected-value" />
       </dl>
       {problem && <Notice tone="error">{problem}</Notice>}
       {corrected?.warnings.map((w) => (

@@ -1,4 +1,4 @@
-import { Field, Form, Formik } from 'formik';
+import { Form, Formik } from 'formik';
 import { startBrewSchema, type BrewDetail } from '@shared/schemas/brews';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
@@ -6,6 +6,7 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import { useStartBrew } from '../api/start-brew';
 import { SaveNotice } from '@/components/ui/save-notice';
 import { localDay } from '@shared/dates';
+import { SelectField } from '@/components/ui/select-field';
 
 export interface RecipeChoice {
   id: number;
@@ -45,23 +46,15 @@ export function StartBrewForm({ recipes, onStarted }: { recipes: readonly Recipe
         }
       }}
     >
-      {({ isSubmitting, status, submitForm, errors }) => (
+      {({ isSubmitting, status, submitForm }) => (
         <Form noValidate aria-label="Start a brew day" className="space-y-4">
-          <label className="block">
-            <span className="mb-1 block text-sm font-semibold text-ink-soft">Recipe</span>
-            <Field as="select" name="recipeId" className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base">
-              {recipes.map((r) => (
-                <option key={r.id} value={String(r.id)}>
-                  {r.isOwner ? r.name : `${r.name} (by ${r.ownerName})`}
-                </option>
-              ))}
-            </Field>
-            {errors.recipeId && (
-              <span role="alert" className="mt-1 block text-sm font-semibold text-alert-700">
-                {errors.recipeId}
-              </span>
-            )}
-          </label>
+          <SelectField name="recipeId" label="Recipe">
+            {recipes.map((r) => (
+              <option key={r.id} value={String(r.id)}>
+                {r.isOwner ? r.name : `${r.name} (by ${r.ownerName})`}
+              </option>
+            ))}
+          </SelectField>
           <div className="grid gap-3 sm:grid-cols-2">
             <TextField name="name" label="Name (optional)" hint="The recipe’s name if left empty." />
             <TextField name="brewedOn" type="date" label="Brew date" />

@@ -17,8 +17,8 @@ import { ApiError } from '@/lib/api-client';
 import { useUnits } from '@/lib/units';
 import { useImportCsv, usePreviewCsv } from '../api/import-csv';
 import { shortDateTime } from './words';
+import { Select } from '@/components/ui/select-field';
 
-const selectClass = 'block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base';
 
 /** Upload, map the columns, look at the preview, then import all or nothing. */
 export function CsvImport({ brewId }: { brewId: number }) {
@@ -132,61 +132,45 @@ function MappingEditor({ preview, onChange }: { preview: CsvPreview; onChange: (
       </label>
       <div className="grid gap-3 sm:grid-cols-2">
         {csvFields.map((field) => (
-          <div key={field}>
-            <label htmlFor={`map-${field}`} className="mb-1 block text-sm font-semibold text-ink-soft">
-              {csvFieldLabels[field]}
-            </label>
-            <select id={`map-${field}`} className={selectClass} value={mapping.columns[field] ?? ''} onChange={(e) => setColumn(field, e.target.value)}>
-              <option value="">Not in the file</option>
-              {columns.map((name, i) => (
-                <option key={i} value={i}>
-                  {name}
-                </option>
-              ))}
-            </select>
-            {errorFor(`columns.${field}`) && <p className="mt-1 text-sm font-semibold text-alert-700">{errorFor(`columns.${field}`)}</p>}
-          </div>
+          <Select key={field} id={`map-${field}`} label={csvFieldLabels[field]} error={errorFor(`columns.${field}`)} value={mapping.columns[field] ?? ''} onChange={(e) => setColumn(field, e.target.value)}>
+            <option value="">Not in the file</option>
+            {columns.map((name, i) => (
+              <option key={i} value={i}>
+                {name}
+              </option>
+            ))}
+          </Select>
         ))}
         {mapping.columns.unit === null && (
-          <div>
-            <label htmlFor="map-default-unit" className="mb-1 block text-sm font-semibold text-ink-soft">
-              Every value is in
-            </label>
-            <select
-              id="map-default-unit"
-              className={selectClass}
-              value={mapping.defaults.unit ?? ''}
-              onChange={(e) => onChange({ ...mapping, defaults: { ...mapping.defaults, unit: (e.target.value || null) as CsvMapping['defaults']['unit'] } })}
-            >
-              <option value="">Choose…</option>
-              {csvUnits.map((u) => (
-                <option key={u} value={u}>
-                  {({ sg: 'SG', plato: '°Plato', brix: '°Brix', c: '°C', f: '°F' } as const)[u]}
-                </option>
-              ))}
-            </select>
-            {errorFor('defaults.unit') && <p className="mt-1 text-sm font-semibold text-alert-700">{errorFor('defaults.unit')}</p>}
-          </div>
+          <Select
+            id="map-default-unit"
+            label="Every value is in"
+            error={errorFor('defaults.unit')}
+            value={mapping.defaults.unit ?? ''}
+            onChange={(e) => onChange({ ...mapping, defaults: { ...mapping.defaults, unit: (e.target.value || null) as CsvMapping['defaults']['unit'] } })}
+          >
+            <option value="">Choose…</option>
+            {csvUnits.map((u) => (
+              <option key={u} value={u}>
+                {({ sg: 'SG', plato: '°Plato', brix: '°Brix', c: '°C', f: '°F' } as const)[u]}
+              </option>
+            ))}
+          </Select>
         )}
         {mapping.columns.kind === null && (
-          <div>
-            <label htmlFor="map-default-kind" className="mb-1 block text-sm font-semibold text-ink-soft">
-              Every row is
-            </label>
-            <select
-              id="map-default-kind"
-              className={selectClass}
-              value={mapping.defaults.kind ?? ''}
-              onChange={(e) => onChange({ ...mapping, defaults: { ...mapping.defaults, kind: (e.target.value || null) as CsvMapping['defaults']['kind'] } })}
-            >
-              <option value="">Whatever the unit says</option>
-              {fermentationReadingKinds.map((k) => (
-                <option key={k} value={k}>
-                  {k === 'gravity' ? 'Gravity' : 'Temperature'}
-                </option>
-              ))}
-            </select>
-          </div>
+          <Select
+            id="map-default-kind"
+            label="Every row is"
+            value={mapping.defaults.kind ?? ''}
+            onChange={(e) => onChange({ ...mapping, defaults: { ...mapping.defaults, kind: (e.target.value || null) as CsvMapping['defaults']['kind'] } })}
+          >
+            <option value="">Whatever the unit says</option>
+            {fermentationReadingKinds.map((k) => (
+              <option key={k} value={k}>
+                {k === 'gravity' ? 'Gravity' : 'Temperature'}
+              </option>
+            ))}
+          </Select>
         )}
       </div>
     </fieldset>

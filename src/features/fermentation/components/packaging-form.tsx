@@ -19,7 +19,9 @@ import { applyApiError, zodValidate } from '@/lib/form';
 import { useUnits } from '@/lib/units';
 import { useRecordPackaging } from '../api/packaging';
 import { fromLocalInput, toLocalInput, verdictTitles } from './words';
+import { parseDecimal } from '@/lib/decimal';
 import { SaveNotice } from '@/components/ui/save-notice';
+import { SelectField } from '@/components/ui/select-field';
 
 interface Values {
   container: PackagingContainer;
@@ -33,17 +35,13 @@ interface Values {
   note: string;
 }
 
-const num = (t: string) => {
-  const s = t.trim().replace(',', '.');
-  return s === '' ? undefined : Number.isFinite(Number(s)) ? Number(s) : (s as unknown as number);
-};
 
 function toInput(v: Values): PackagingInput {
   return {
     container: v.container,
     volumeL: v.volumeL === '' ? (undefined as unknown as number) : v.volumeL,
     warmestTempC: v.warmestTempC === '' ? (undefined as unknown as number) : v.warmestTempC,
-    targetCo2Volumes: num(v.targetCo2Volumes) as number,
+    targetCo2Volumes: parseDecimal(v.targetCo2Volumes) as number,
     sugar: v.sugar,
     packagedAt: fromLocalInput(v.packagedAt),
     override: v.override,
@@ -176,20 +174,14 @@ function ContainerPicker() {
 }
 
 function SugarPicker() {
-  const { values, handleChange } = useFormikContext<Values>();
   return (
-    <div>
-      <label htmlFor="packaging-sugar" className="mb-1 block text-sm font-semibold text-ink-soft">
-        Priming sugar
-      </label>
-      <select id="packaging-sugar" name="sugar" value={values.sugar} onChange={handleChange} className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base">
-        {packagingSugars.map((s) => (
-          <option key={s} value={s}>
-            {packagingSugarLabels[s]}
-          </option>
-        ))}
-      </select>
-    </div>
+    <SelectField id="packaging-sugar" name="sugar" label="Priming sugar">
+      {packagingSugars.map((s) => (
+        <option key={s} value={s}>
+          {packagingSugarLabels[s]}
+        </option>
+      ))}
+    </SelectField>
   );
 }
 
@@ -197,7 +189,7 @@ function SugarPicker() {
 function SugarResult() {
   const { values } = useFormikContext<Values>();
   const units = useUnits();
-  const co2 = num(values.targetCo2Volumes);
+  const co2 = parseDecimal(values.targetCo2Volumes);
   let text: string | null = null;
   let problem: string | null = null;
   let residual: number | null = null;

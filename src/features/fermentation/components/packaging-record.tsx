@@ -5,6 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { useUnits } from '@/lib/units';
 import { useUndoPackaging } from '../api/packaging';
 import { shortDateTime, verdictTitles } from './words';
+import { Figure } from '@/components/ui/figure';
 
 /** How the beer was packaged; an override is shown plainly, for the brewer and a mentor alike. */
 export function PackagingRecordView({ brewId, record, canEdit }: { brewId: number; record: PackagingRecord; canEdit: boolean }) {
@@ -26,12 +27,12 @@ export function PackagingRecordView({ brewId, record, canEdit }: { brewId: numbe
         <Notice tone="success">Packaged with a stable final gravity.</Notice>
       )}
       <dl className="grid grid-cols-2 gap-3 text-sm">
-        <Item label="Into" value={record.container === 'bottles' ? 'Bottles' : 'Keg'} />
-        <Item label="When" value={shortDateTime(record.packagedAt)} />
-        <Item label="Volume" value={units.format('volume', record.volumeL)} />
-        <Item label="Warmest temperature" value={units.format('temperature', record.warmestTempC)} />
-        <Item label="Carbonation wanted" value={`${record.targetCo2Volumes} volumes`} />
-        <Item label="Priming sugar" value={record.primingSugarG === null ? 'None (CO2)' : `${units.format('smallMass', record.primingSugarG)} ${packagingSugarLabels[record.sugar].toLowerCase()}`} />
+        <Figure labelStyle="plain" size="sm" label="Into" value={record.container === 'bottles' ? 'Bottles' : 'Keg'} />
+        <Figure labelStyle="plain" size="sm" label="When" value={shortDateTime(record.packagedAt)} />
+        <Figure labelStyle="plain" size="sm" label="Volume" value={units.format('volume', record.volumeL)} />
+        <Figure labelStyle="plain" size="sm" label="Warmest temperature" value={units.format('temperature', record.warmestTempC)} />
+        <Figure labelStyle="plain" size="sm" label="Carbonation wanted" value={`${record.targetCo2Volumes} volumes`} />
+        <Figure labelStyle="plain" size="sm" label="Priming sugar" value={record.primingSugarG === null ? 'None (CO2)' : `${units.format('smallMass', record.primingSugarG)} ${packagingSugarLabels[record.sugar].toLowerCase()}`} />
       </dl>
       {record.note && <p className="text-sm">{record.note}</p>}
       {canEdit &&
@@ -50,15 +51,6 @@ export function PackagingRecordView({ brewId, record, canEdit }: { brewId: numbe
           </Button>
         ))}
       {undo.error && <Notice tone="error">{undo.error.message}</Notice>}
-    </div>
-  );
-}
-
-function Item({ label, value }: { label: string; value: string }) {
-  return (
-    <div>
-      <dt className="text-ink-soft">{label}</dt>
-      <dd className="font-semibold">{value}</dd>
     </div>
   );
 }

@@ -9,10 +9,12 @@ import { Notice } from '@/components/ui/notice';
 import { QuantityField } from '@/components/ui/quantity-field';
 import { TextField } from '@/components/ui/text-field';
 import { applyApiError, zodValidate } from '@/lib/form';
+import { parseDecimal } from '@/lib/decimal';
 import { useUnits } from '@/lib/units';
 import { useAddFermentationReading } from '../api/add-reading';
 import { dayLabel, fromLocalInput, methodLabels, toLocalInput } from './words';
 import { SaveNotice } from '@/components/ui/save-notice';
+import { SelectField } from '@/components/ui/select-field';
 
 interface Values {
   method: FermentationMethod;
@@ -26,12 +28,6 @@ interface Values {
   note: string;
 }
 
-const numberOf = (text: string) => {
-  const t = text.trim().replace(',', '.');
-  if (t === '') return undefined;
-  const n = Number(t);
-  return Number.isFinite(n) ? n : (t as unknown as number);
-};
 const orUndefined = (v: number | '') => (v === '' ? undefined : v);
 
 export function toReadingInput(v: Values): FermentationReadingInput {
@@ -40,7 +36,7 @@ export function toReadingInput(v: Values): FermentationReadingInput {
     case 'hydrometer':
       return { ...base, method: 'hydrometer', sg: orUndefined(v.sg) as number, sampleTempC: orUndefined(v.sampleTempC) as number };
     case 'refractometer':
-      return { ...base, method: 'refractometer', brix: numberOf(v.brix) as number, originalBrix: numberOf(v.originalBrix) as number };
+      return { ...base, method: 'refractometer', brix: parseDecimal(v.brix) as number, originalBrix: parseDecimal(v.originalBrix) as number };
     case 'thermometer':
       return { ...base, method: 'thermometer', tempC: orUndefined(v.tempC) as number };
   }
@@ -159,9 +155,8 @@ function MethodPicker() {
 }
 
 function InstrumentPicker({ instruments, instrumentsFailed: isError }: InstrumentChoices) {
-  const { values, handleChange, errors, setFieldValue } = useFormikContext<Values>();
+  const { values, setFieldValue } = useFormikContext<Values>();
   const mine = (instruments ?? []).filter((i) => i.kind === values.method && !i.archived);
-  const error = errors.instrumentId;
   // Start from the brewer's own instrument of this kind; "no profile" stays one tap away.
   const chosenFor = useRef<string | null>(null);
   const firstId = mine[0] ? String(mine[0].id) : '';
@@ -171,32 +166,19 @@ function InstrumentPicker({ instruments, instrumentsFailed: isError }: Instrumen
     if (values.instrumentId === '') void setFieldValue('instrumentId', firstId, false);
   }, [values.method, values.instrumentId, firstId, setFieldValue]);
   return (
-    <div>
-      <label htmlFor="reading-instrument" className="mb-1 block text-sm font-semibold text-ink-soft">
-        {methodLabels[values.method]}
-      </label>
-      <select
-        id="reading-instrument"
-        name="instrumentId"
-        value={values.instrumentId}
-        onChange={handleChange}
-        aria-invalid={Boolean(error) || undefined}
-        className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base"
-      >
-        <option value="">No profile: common-practice defaults</option>
-        {mine.map((i) => (
-          <option key={i.id} value={String(i.id)}>
-            {i.name}
-          </option>
-        ))}
-      </select>
-      {isError && <p className="mt-1 text-sm text-ink-faint">Your instruments could not be loaded; the defaults still work.</p>}
-      {error && (
-        <p role="alert" className="mt-1 text-sm font-semibold text-alert-700">
-          {error}
-        </p>
-      )}
-    </div>
+    <SelectField
+      id="reading-instrument"
+      name="instrumentId"
+      label={methodLabels[values.method]}
+      hint={isError ? 'Your instruments could not be loaded; the defaults still work.' : undefined}
+    >
+      <option value="">No profile: common-practice defaults</option>
+      {mine.map((i) => (
+        <option key={i.id} value={String(i.id)}>
+          {i.name}
+        </option>
+      ))}
+    </SelectField>
   );
 }
 

@@ -3,6 +3,9 @@ import { countOf } from '@/lib/plural';
 import { Notice } from '@/components/ui/notice';
 import { useUnits } from '@/lib/units';
 import { shortDateTime } from './words';
+import { Figure } from '@/components/ui/figure';
+
+const tile = { className: 'rounded-lg bg-cellar-50 p-3', labelStyle: 'plain', size: 'lg', tone: 'strong' } as const;
 
 /** Fermenter temperature: the last 24 hours, the whole fermentation, and every swing beyond the recipe's range. */
 export function TemperaturePanel({ summary }: { summary: TemperatureSummary }) {
@@ -12,10 +15,10 @@ export function TemperaturePanel({ summary }: { summary: TemperatureSummary }) {
   return (
     <div className="space-y-3">
       <dl className="grid grid-cols-2 gap-3">
-        <Figure label="Last 24 hours" value={range(summary.last24h)} hint={summary.last24h ? countOf(summary.last24h.count, 'reading') : 'No reading in the last 24 hours'} />
-        <Figure label="Whole fermentation" value={range(summary.overall)} hint={summary.overall ? countOf(summary.overall.count, 'reading') : 'No readings yet'} />
-        <Figure label="Recipe range" value={summary.target ? `${t(summary.target.minC)} – ${t(summary.target.maxC)}` : '—'} />
-        <Figure label="Latest" value={summary.latest ? t(summary.latest.tempC) : '—'} hint={summary.latest ? shortDateTime(summary.latest.takenAt) : undefined} />
+        <Figure {...tile} label="Last 24 hours" value={range(summary.last24h)} hint={summary.last24h ? countOf(summary.last24h.count, 'reading') : 'No reading in the last 24 hours'} />
+        <Figure {...tile} label="Whole fermentation" value={range(summary.overall)} hint={summary.overall ? countOf(summary.overall.count, 'reading') : 'No readings yet'} />
+        <Figure {...tile} label="Recipe range" value={summary.target ? `${t(summary.target.minC)} – ${t(summary.target.maxC)}` : '—'} />
+        <Figure {...tile} label="Latest" value={summary.latest ? t(summary.latest.tempC) : '—'} hint={summary.latest ? shortDateTime(summary.latest.takenAt) : undefined} />
       </dl>
       {summary.excursionCount > 0 && (
         <Notice tone="caution" title={`${countOf(summary.excursionCount, 'reading')} outside the recipe's range`}>
@@ -34,16 +37,6 @@ export function TemperaturePanel({ summary }: { summary: TemperatureSummary }) {
           The temperature moved by {units.format('temperatureDelta', summary.largestSwing24hC)} within one day. Yeast works best when it stays steady.
         </Notice>
       )}
-    </div>
-  );
-}
-
-function Figure({ label, value, hint }: { label: string; value: string; hint?: string }) {
-  return (
-    <div className="rounded-lg bg-cellar-50 p-3">
-      <dt className="text-sm font-semibold text-ink-soft">{label}</dt>
-      <dd className="text-lg font-bold tabular-nums text-cellar-900">{value}</dd>
-      {hint && <dd className="text-xs text-ink-faint">{hint}</dd>}
     </div>
   );
 }

@@ -2,6 +2,7 @@ import { CircleCheck, Hourglass, OctagonPause, TrendingDown } from 'lucide-react
 import type { FermentationVerdict } from '@shared/schemas/fermentation';
 import { useUnits } from '@/lib/units';
 import { shortDate, verdictTitles } from './words';
+import { Figure } from '@/components/ui/figure';
 
 const looks = {
   'no-reading': { box: 'bg-cellar-50 ring-cellar-300 text-cellar-900', Icon: Hourglass },
@@ -29,24 +30,9 @@ export function VerdictBanner({ verdict, now }: { verdict: FermentationVerdict; 
             {verdict.reason}
           </p>
           <dl className="mt-2 flex flex-wrap gap-x-6 gap-y-1 text-sm text-ink-soft">
-            <div>
-              <dt className="inline">Since pitching: </dt>
-              <dd className="inline font-semibold text-ink">
-                {day} {day === 1 ? 'day' : 'days'}
-              </dd>
-            </div>
-            {verdict.latestSg !== null && (
-              <div>
-                <dt className="inline">Latest gravity: </dt>
-                <dd className="inline font-semibold tabular-nums text-ink">{units.format('gravity', verdict.latestSg)}</dd>
-              </div>
-            )}
-            {verdict.nextCheckAt && (
-              <div>
-                <dt className="inline">Next gravity reading: </dt>
-                <dd className="inline font-semibold text-ink">{Date.parse(verdict.nextCheckAt) <= Date.parse(now) ? 'now' : shortDate(verdict.nextCheckAt)}</dd>
-              </div>
-            )}
+            <Figure inline label="Since pitching" value={`${day} ${day === 1 ? 'day' : 'days'}`} />
+            {verdict.latestSg !== null && <Figure inline label="Latest gravity" value={units.format('gravity', verdict.latestSg)} />}
+            {verdict.nextCheckAt && <Figure inline label="Next gravity reading" value={Date.parse(verdict.nextCheckAt) <= Date.parse(now) ? 'now' : shortDate(verdict.nextCheckAt)} />}
           </dl>
         </div>
       </div>

@@ -19,6 +19,7 @@ import { useCreateInstrument } from '../api/create-instrument';
 import { formNumber, type FormNumber } from './describe';
 import { kindIcons } from './instrument-card';
 import { NumberField } from '@/components/ui/number-field';
+import { SelectField } from '@/components/ui/select-field';
 
 interface AddValues {
   kind: InstrumentKind;
@@ -115,14 +116,11 @@ export function AddInstrumentForm({ units, onAdded, onCancel }: { units: Units; 
           )}
           {values.kind === 'ph_meter' && (
             <div className="grid gap-3 sm:grid-cols-3">
-              <label className="block">
-                <span className="mb-1 block text-sm font-semibold text-ink-soft">Resolution</span>
-                <Field as="select" name="resolutionPh" className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3">
-                  <option value="0.1">0.1 pH (too coarse)</option>
-                  <option value="0.01">0.01 pH</option>
-                  <option value="0.001">0.001 pH</option>
-                </Field>
-              </label>
+              <SelectField name="resolutionPh" label="Resolution">
+                <option value="0.1">0.1 pH (too coarse)</option>
+                <option value="0.01">0.01 pH</option>
+                <option value="0.001">0.001 pH</option>
+              </SelectField>
               <NumberField name="reminderDays" label="Calibrate every" unit="days" />
               <TextField name="calibratedOn" type="date" label="Last calibrated (optional)" />
             </div>

@@ -8,6 +8,7 @@ import { QuantityField } from '@/components/ui/quantity-field';
 import type { Units } from '@/lib/units';
 import { correctionInWords, formNumber, type FormNumber } from './describe';
 import { NumberField } from '@/components/ui/number-field';
+import { Figure } from '@/components/ui/figure';
 
 interface CheckValues {
   sg: FormNumber;
@@ -103,20 +104,15 @@ function CheckReadingBody({ snapshot, units }: { snapshot: InstrumentSnapshot; u
       </div>
 
       <dl className="mt-3 grid grid-cols-2 gap-2" aria-live="polite">
-        <div className="rounded-lg bg-white p-2">
-          <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Raw</dt>
-          <dd className="text-xl font-bold tabular-nums text-ink" data-testid="raw">
-            {outcome && 'raw' in outcome ? outcome.raw : '—'}
-          </dd>
-        </div>
-        <div className="rounded-lg bg-white p-2 ring-2 ring-cellar-300">
-          <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">
-            {outcome && 'result' in outcome && outcome.result.correction.kind === 'wcf-alcohol' && outcome.result.correction.rough ? 'Rough estimate' : 'Corrected'}
-          </dt>
-          <dd className="text-xl font-bold tabular-nums text-cellar-900" data-testid="corrected">
-            {outcome && 'corrected' in outcome ? outcome.corrected : '—'}
-          </dd>
-        </div>
+        <Figure className="rounded-lg bg-white p-2" label="Raw" value={outcome && 'raw' in outcome ? outcome.raw : '—'} size="xl" valueTestId="raw" />
+        <Figure
+          className="rounded-lg bg-white p-2 ring-2 ring-cellar-300"
+          label={outcome && 'result' in outcome && outcome.result.correction.kind === 'wcf-alcohol' && outcome.result.correction.rough ? 'Rough estimate' : 'Corrected'}
+          value={outcome && 'corrected' in outcome ? outcome.corrected : '—'}
+          size="xl"
+          tone="strong"
+          valueTestId="corrected"
+        />
       </dl>
       {outcome && 'result' in outcome && (
         <>

@@ -1,5 +1,5 @@
-import { Field } from 'formik';
 import { HYDROMETER_RESOLUTION_PRESETS_SG } from '@shared/schemas/instruments';
+import { SelectField } from '@/components/ui/select-field';
 
 const labels: Record<(typeof HYDROMETER_RESOLUTION_PRESETS_SG)[number], string> = {
   0.0005: '0.0005 (a fine lab hydrometer)',
@@ -13,15 +13,12 @@ const labels: Record<(typeof HYDROMETER_RESOLUTION_PRESETS_SG)[number], string> 
  */
 export function HydrometerResolutionChoice() {
   return (
-    <label className="block max-w-80">
-      <span className="mb-1 block text-sm font-semibold text-ink-soft">Scale step (gap between two marks)</span>
-      <Field as="select" name="resolutionSg" className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3">
-        {HYDROMETER_RESOLUTION_PRESETS_SG.map((step) => (
-          <option key={step} value={String(step)}>
-            {labels[step]}
-          </option>
-        ))}
-      </Field>
-    </label>
+    <SelectField name="resolutionSg" label="Scale step (gap between two marks)" className="max-w-80">
+      {HYDROMETER_RESOLUTION_PRESETS_SG.map((step) => (
+        <option key={step} value={String(step)}>
+          {labels[step]}
+        </option>
+      ))}
+    </SelectField>
   );
 }

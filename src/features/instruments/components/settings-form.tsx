@@ -11,6 +11,7 @@ import type { Units } from '@/lib/units';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, type FormNumber } from './describe';
 import { NumberField } from '@/components/ui/number-field';
+import { SelectField } from '@/components/ui/select-field';
 
 interface SettingsValues {
   preset: string;
@@ -116,14 +117,11 @@ export function SettingsForm({ instrument, units, onDone }: { instrument: Instru
           )}
           {instrument.kind === 'ph_meter' && (
             <div className="grid gap-3 sm:grid-cols-2">
-              <label className="block">
-                <span className="mb-1 block text-sm font-semibold text-ink-soft">Resolution (smallest step shown)</span>
-                <Field as="select" name="resolutionPh" className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3">
-                  <option value="0.1">0.1 pH (not good enough for mash pH)</option>
-                  <option value="0.01">0.01 pH</option>
-                  <option value="0.001">0.001 pH</option>
-                </Field>
-              </label>
+              <SelectField name="resolutionPh" label="Resolution (smallest step shown)">
+                <option value="0.1">0.1 pH (not good enough for mash pH)</option>
+                <option value="0.01">0.01 pH</option>
+                <option value="0.001">0.001 pH</option>
+              </SelectField>
               <NumberField name="reminderDays" label="Remind me to calibrate every" unit="days" />
             </div>
           )}

@@ -11,6 +11,7 @@ import type { Units } from '@/lib/units';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, signedDelta, type FormNumber } from './describe';
 import { NumberField } from '@/components/ui/number-field';
+import { Figure } from '@/components/ui/figure';
 
 interface CheckValues {
   iceReadingC: FormNumber;
@@ -100,26 +101,23 @@ function CheckForm({ units, onCancel }: { units: Units; onCancel: () => void }) 
       {result && 'ok' in result && (
         <div className="rounded-lg bg-white p-3 ring-2 ring-cellar-300">
           <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3">
-            {result.ok.iceOffsetC !== null && (
-              <div>
-                <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">In ice</dt>
-                <dd className="text-lg font-bold tabular-nums">{signedDelta(units, result.ok.iceOffsetC)}</dd>
-              </div>
-            )}
+            {result.ok.iceOffsetC !== null && <Figure label="In ice" value={signedDelta(units, result.ok.iceOffsetC)} size="lg" />}
             {result.ok.boilingOffsetC !== null && (
-              <div>
-                <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">At the boil</dt>
-                <dd className="text-lg font-bold tabular-nums">{signedDelta(units, result.ok.boilingOffsetC)}</dd>
-                <dd className="text-xs text-ink-faint">water boils at {units.format('temperature', result.ok.expectedBoilingC!)} here</dd>
-              </div>
+              <Figure
+                label="At the boil"
+                value={signedDelta(units, result.ok.boilingOffsetC)}
+                size="lg"
+                hint={`water boils at ${units.format('temperature', result.ok.expectedBoilingC!)} here`}
+              />
             )}
-            <div>
-              <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{result.ok.scale === 1 ? 'Offset' : 'Offset at 0 °C'}</dt>
-              <dd className={`text-2xl font-bold tabular-nums ${result.ok.flagged ? 'text-alert-700' : 'text-cellar-900'}`} data-testid="offset">
-                {signedDelta(units, result.ok.offsetC)}
-              </dd>
-              {result.ok.scale !== 1 && <dd className="text-xs text-ink-faint">two-point: corrected along the line through both checks</dd>}
-            </div>
+            <Figure
+              label={result.ok.scale === 1 ? 'Offset' : 'Offset at 0 °C'}
+              value={signedDelta(units, result.ok.offsetC)}
+              size="2xl"
+              tone={result.ok.flagged ? 'alert' : 'strong'}
+              valueTestId="offset"
+              hint={result.ok.scale !== 1 ? 'two-point: corrected along the line through both checks' : undefined}
+            />
           </dl>
           {result.ok.warnings.map((w) => (
             <Notice key={w} tone="caution" className="mt-2">

@@ -1,6 +1,6 @@
-import { FieldArray, Form, Formik, useField, useFormikContext } from 'formik';
+import { FieldArray, Form, Formik, useFormikContext } from 'formik';
 import { Plus, Trash2 } from 'lucide-react';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { BrewMathError } from '@shared/brewmath';
 import { wcfCalibration, type WcfCalibrationResult } from '@shared/instruments';
 import { calibrateInstrumentSchema, DEFAULT_HYDROMETER_CALIBRATION_C, MAX_WCF_PAIRS, type CalibrateInstrumentBody, type Instrument } from '@shared/schemas/instruments';
@@ -13,6 +13,8 @@ import type { Units } from '@/lib/units';
 import { useCalibrateInstrument } from '../api/calibrate-instrument';
 import { formNumber, type FormNumber } from './describe';
 import { NumberField } from '@/components/ui/number-field';
+import { Figure } from '@/components/ui/figure';
+import { SelectField } from '@/components/ui/select-field';
 
 interface PairValues {
   brix: FormNumber;
@@ -96,28 +98,21 @@ export function WcfCalibration({ instrument, hydrometers, units, onDone }: { ins
 function WcfForm({ hydrometers, units, onCancel }: { hydrometers: Instrument[]; units: Units; onCancel: () => void }) {
   const { values, isSubmitting, status } = useFormikContext<WcfValues>();
   const result = preview(toBody(values, hydrometers));
-  const selectId = useId();
-  const [hydrometerField] = useField('hydrometer');
   return (
     <Form noValidate className="space-y-4">
       <p className="text-sm text-ink-soft">
         Take a few drops and a trial jar from the <strong>same unfermented wort</strong> (before pitching), read both, and enter each pair. Three or more pairs,
         from different brews if you can, show whether the readings agree.
       </p>
-      <div>
-        <label htmlFor={selectId} className="mb-1 block text-sm font-semibold text-ink-soft">
-          Hydrometer used
-        </label>
-        <select id={selectId} {...hydrometerField} className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3">
-          {hydrometers.map((h) => (
-            <option key={h.id} value={String(h.id)}>
-              {h.name} ({units.format('temperature', h.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C)})
-            </option>
-          ))}
-          <option value="assume:20">Another, true at {units.format('temperature', 20)}</option>
-          <option value="assume:15.56">Another, true at {units.format('temperature', 15.56)}</option>
-        </select>
-      </div>
+      <SelectField name="hydrometer" label="Hydrometer used">
+        {hydrometers.map((h) => (
+          <option key={h.id} value={String(h.id)}>
+            {h.name} ({units.format('temperature', h.calibrationTempC ?? DEFAULT_HYDROMETER_CALIBRATION_C)})
+          </option>
+        ))}
+        <option value="assume:20">Another, true at {units.format('temperature', 20)}</option>
+        <option value="assume:15.56">Another, true at {units.format('temperature', 15.56)}</option>
+      </SelectField>
 
       <FieldArray name="pairs">
         {({ push, remove }) => (
@@ -161,22 +156,9 @@ function WcfForm({ hydrometers, units, onCancel }: { hydrometers: Instrument[]; 
       {result && 'ok' in result && (
         <div className="rounded-lg bg-white p-3 ring-2 ring-cellar-300">
           <dl className="grid grid-cols-3 gap-2 text-center">
-            <div>
-              <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Factor (mean)</dt>
-              <dd className="text-2xl font-bold tabular-nums text-cellar-900" data-testid="wcf-mean">
-                {result.ok.wcf.toFixed(3)}
-              </dd>
-            </div>
-            <div>
-              <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Spread</dt>
-              <dd className="text-2xl font-bold tabular-nums" data-testid="wcf-spread">
-                {result.ok.spread.toFixed(3)}
-              </dd>
-            </div>
-            <div>
-              <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">Pairs</dt>
-              <dd className="text-2xl font-bold tabular-nums">{result.ok.count}</dd>
-            </div>
+            <Figure label="Factor (mean)" value={result.ok.wcf.toFixed(3)} size="2xl" tone="strong" valueTestId="wcf-mean" />
+            <Figure label="Spread" value={result.ok.spread.toFixed(3)} size="2xl" valueTestId="wcf-spread" />
+            <Figure label="Pairs" value={result.ok.count} size="2xl" />
           </dl>
           {result.ok.warnings.map((w) => (
             <Notice key={w} tone="caution" className="mt-2">

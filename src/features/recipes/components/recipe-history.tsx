@@ -1,7 +1,8 @@
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Link } from 'react-router';
 import { diffRecipes, type RecipeChange } from '@shared/recipe-history';
 import { Card } from '@/components/ui/page';
+import { Select } from '@/components/ui/select-field';
 import { useRecipeVersion } from '../api/get-recipe-version';
 import { useRecipeVersions } from '../api/recipe-versions';
 
@@ -50,8 +51,6 @@ export function RecipeHistory({ recipeId, currentVersion }: { recipeId: number; 
   const versions = useRecipeVersions(recipeId);
   const [from, setFrom] = useState<number | null>(null);
   const [to, setTo] = useState<number | null>(null);
-  const fromId = useId();
-  const toId = useId();
   const list = versions.data ?? [];
   const toVersion = to ?? list[0]?.version ?? null;
   const fromVersion = from ?? list[1]?.version ?? null;
@@ -82,8 +81,8 @@ export function RecipeHistory({ recipeId, currentVersion }: { recipeId: number; 
         <div className="mt-4">
           <h3 className="text-sm font-semibold uppercase tracking-wide text-ink-faint">What changed</h3>
           <div className="mt-2 flex flex-wrap gap-3">
-            <VersionSelect id={fromId} label="From version" versions={list} value={fromVersion} onChange={setFrom} />
-            <VersionSelect id={toId} label="To version" versions={list} value={toVersion} onChange={setTo} />
+            <VersionSelect label="From version" versions={list} value={fromVersion} onChange={setFrom} />
+            <VersionSelect label="To version" versions={list} value={toVersion} onChange={setTo} />
           </div>
           {(a.isError || b.isError) && <p className="mt-2 text-sm text-ink-soft">One of these versions was saved before history was kept.</p>}
           {changes && changes.length === 0 && <p className="mt-2 text-sm text-ink-soft">No differences.</p>}
@@ -126,19 +125,14 @@ export function RecipeHistory({ recipeId, currentVersion }: { recipeId: number; 
 }
 
 /** One end of the comparison: a labelled choice among the saved versions. */
-function VersionSelect({ id, label, versions, value, onChange }: { id: string; label: string; versions: readonly { version: number }[]; value: number | null | undefined; onChange: (version: number) => void }) {
+function VersionSelect({ label, versions, value, onChange }: { label: string; versions: readonly { version: number }[]; value: number | null | undefined; onChange: (version: number) => void }) {
   return (
-    <div>
-      <label htmlFor={id} className="mb-1 block text-sm font-semibold text-ink-soft">
-        {label}
-      </label>
-      <select id={id} className="min-h-touch rounded-lg border border-cellar-300 bg-white px-3" value={value ?? ''} onChange={(e) => onChange(Number(e.target.value))}>
-        {versions.map((v) => (
-          <option key={v.version} value={v.version}>
-            {v.version}
-          </option>
-        ))}
-      </select>
-    </div>
+    <Select label={label} value={value ?? ''} onChange={(e) => onChange(Number(e.target.value))}>
+      {versions.map((v) => (
+        <option key={v.version} value={v.version}>
+          {v.version}
+        </option>
+      ))}
+    </Select>
   );
 }

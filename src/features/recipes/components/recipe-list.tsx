@@ -3,8 +3,11 @@ import { useEffect, useId, useState } from 'react';
 import { Link } from 'react-router';
 import type { ListRecipesQuery, RecipeListItem, RecipeScope, RecipeSort } from '@shared/schemas/recipes';
 import { Button } from '@/components/ui/button';
+import { Figure } from '@/components/ui/figure';
 import { Notice } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/page';
+import { SegmentedControl } from '@/components/ui/segmented-control';
+import { Select } from '@/components/ui/select-field';
 import { useUnits } from '@/lib/units';
 import { useRecipePages } from '../api/list-recipes';
 
@@ -83,7 +86,6 @@ export function RecipeList({ query, onQueryChange }: RecipeListProps) {
 function Toolbar({ query, sort, dir, onChange }: { query: ListRecipesQuery; sort: RecipeSort; dir: 'asc' | 'desc'; onChange: (patch: ListRecipesQuery) => void }) {
   const [text, setText] = useState(query.q ?? '');
   const searchId = useId();
-  const sortId = useId();
   // Ask the server once typing pauses, not on every key.
   useEffect(() => {
     const next = text.trim() || undefined;
@@ -110,45 +112,30 @@ function Toolbar({ query, sort, dir, onChange }: { query: ListRecipesQuery; sort
           />
         </div>
       </div>
-      <div role="radiogroup" aria-label="Whose recipes" className="flex rounded-lg bg-white p-1 ring-1 ring-cellar-100">
-        {(Object.keys(scopeLabels) as RecipeScope[]).map((scope) => {
-          const active = (query.scope ?? 'all') === scope;
-          return (
-            <button
-              key={scope}
-              type="button"
-              role="radio"
-              aria-checked={active}
-              onClick={() => onChange({ scope: scope === 'all' ? undefined : scope })}
-              className={`min-h-touch min-w-touch flex-1 whitespace-nowrap rounded-md px-3 text-sm font-semibold ${active ? 'bg-cellar-700 text-white' : 'text-cellar-700 hover:bg-cellar-50'}`}
-            >
-              {scopeLabels[scope]}
-            </button>
-          );
-        })}
-      </div>
-      <div className="sm:hidden">
-        <label htmlFor={sortId} className="mb-1 block text-sm font-semibold text-ink-soft">
-          Sort by
-        </label>
-        <select
-          id={sortId}
-          value={`${sort}:${dir}`}
-          onChange={(e) => {
-            const [s, d] = e.target.value.split(':') as [RecipeSort, 'asc' | 'desc'];
-            onChange({ sort: s, dir: d });
-          }}
-          className="block min-h-touch w-full rounded-lg border border-cellar-300 bg-white px-3 py-2 text-base"
-        >
-          {(Object.keys(sortLabels) as RecipeSort[]).flatMap((s) =>
-            (['asc', 'desc'] as const).map((d) => (
-              <option key={`${s}:${d}`} value={`${s}:${d}`}>
-                {sortLabels[s]}, {s === 'updated' ? (d === 'desc' ? 'newest first' : 'oldest first') : s === 'name' || s === 'style' ? (d === 'asc' ? 'A to Z' : 'Z to A') : d === 'asc' ? 'lowest first' : 'highest first'}
-              </option>
-            )),
-          )}
-        </select>
-      </div>
+      <SegmentedControl
+        label="Whose recipes"
+        fill
+        value={query.scope ?? 'all'}
+        options={(Object.keys(scopeLabels) as RecipeScope[]).map((scope) => [scope, scopeLabels[scope]] as const)}
+        onChange={(scope) => onChange({ scope: scope === 'all' ? undefined : scope })}
+      />
+      <Select
+        label="Sort by"
+        className="sm:hidden"
+        value={`${sort}:${dir}`}
+        onChange={(e) => {
+          const [s, d] = e.target.value.split(':') as [RecipeSort, 'asc' | 'desc'];
+          onChange({ sort: s, dir: d });
+        }}
+      >
+        {(Object.keys(sortLabels) as RecipeSort[]).flatMap((s) =>
+          (['asc', 'desc'] as const).map((d) => (
+            <option key={`${s}:${d}`} value={`${s}:${d}`}>
+              {sortLabels[s]}, {s === 'updated' ? (d === 'desc' ? 'newest first' : 'oldest first') : s === 'name' || s === 'style' ? (d === 'asc' ? 'A to Z' : 'Z to A') : d === 'asc' ? 'lowest first' : 'highest first'}
+            </option>
+          )),
+        )}
+      </Select>
     </div>
   );
 }
@@ -176,10 +163,10 @@ function RecipeCards({ items }: { items: RecipeListItem[] }) {
               <span className="text-sm text-ink-faint">{r.style}</span>
             </div>
             <dl className="mt-2 grid grid-cols-4 gap-2 text-center">
-              <CardFigure label="OG" value={units.format('gravity', r.targetOg)} />
-              <CardFigure label="FG" value={units.format('gravity', r.targetFg)} />
-              <CardFigure label="ABV" value={`${r.abvPercent.toFixed(1)}\u00a0%`} />
-              <CardFigure label="Batch" value={units.format('volume', r.batchVolumeL)} />
+              <Figure size="sm" label="OG" value={units.format('gravity', r.targetOg)} />
+              <Figure size="sm" label="FG" value={units.format('gravity', r.targetFg)} />
+              <Figure size="sm" label="ABV" value={`${r.abvPercent.toFixed(1)}\u00a0%`} />
+              <Figure size="sm" label="Batch" value={units.format('volume', r.batchVolumeL)} />
             </dl>
             <div className="mt-2">
               <SharedBadge item={r} />
@@ -188,15 +175,6 @@ function RecipeCards({ items }: { items: RecipeListItem[] }) {
         </li>
       ))}
     </ul>
-  );
-}
-
-function CardFigure({ label, value }: { label: string; value: string }) {
-  return (
-    <div>
-      <dt className="text-xs font-semibold uppercase text-ink-faint">{label}</dt>
-      <dd className="font-semibold tabular-nums">{value}</dd>
-    </div>
   );
 }
 

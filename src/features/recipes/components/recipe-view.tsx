@@ -2,11 +2,15 @@ import { Flame, Thermometer, Wheat } from 'lucide-react';
 import type { ReactNode } from 'react';
 import { SRM_TO_EBC } from '@shared/brewmath';
 import { fermentableKindLabels, type Recipe } from '@shared/schemas/recipes';
+import { Figure } from '@/components/ui/figure';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { formatColour, useColourScale } from '@/lib/colour';
 import { useUnits } from '@/lib/units';
 import { TargetsPanel } from './recipe-form';
+
+/** The targets, large: what the brew day is judged against. */
+const bigFigure = { className: 'rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100', size: '3xl', tone: 'strong' } as const;
 
 /**
  * A recipe laid out for brew day: the targets first and large, then mash, boil (with the hop
@@ -20,14 +24,16 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
   const totalKg = recipe.fermentables.reduce((n, f) => n + f.amountKg, 0);
   return (
     <div className="space-y-4">
-      <section aria-label="Targets" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <BigFigure label="Target OG" value={units.format('gravity', recipe.targetOg)} />
-        <BigFigure label="Target FG" value={units.format('gravity', recipe.targetFg)} />
-        <BigFigure label="ABV (simple)" value={`${recipe.abvPercent.toFixed(1)}\u00a0%`} />
-        <BigFigure label="Into the fermenter" value={units.format('volume', recipe.batchVolumeL)} />
-        {recipe.targetIbu !== null && <BigFigure label="Target bitterness" value={`${Math.round(recipe.targetIbu)}\u00a0IBU`} />}
-        {recipe.targetColourSrm !== null && <BigFigure label="Target colour" value={formatColour(recipe.targetColourSrm, scale)} />}
-        {recipe.souringTargetPh !== null && <BigFigure label="Sour to pH" value={recipe.souringTargetPh.toFixed(2)} />}
+      <section aria-label="Targets">
+        <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          <Figure {...bigFigure} label="Target OG" value={units.format('gravity', recipe.targetOg)} />
+          <Figure {...bigFigure} label="Target FG" value={units.format('gravity', recipe.targetFg)} />
+          <Figure {...bigFigure} label="ABV (simple)" value={`${recipe.abvPercent.toFixed(1)}\u00a0%`} />
+          <Figure {...bigFigure} label="Into the fermenter" value={units.format('volume', recipe.batchVolumeL)} />
+          {recipe.targetIbu !== null && <Figure {...bigFigure} label="Target bitterness" value={`${Math.round(recipe.targetIbu)}\u00a0IBU`} />}
+          {recipe.targetColourSrm !== null && <Figure {...bigFigure} label="Target colour" value={formatColour(recipe.targetColourSrm, scale)} />}
+          {recipe.souringTargetPh !== null && <Figure {...bigFigure} label="Sour to pH" value={recipe.souringTargetPh.toFixed(2)} />}
+        </dl>
       </section>
 
       <Card>
@@ -85,10 +91,10 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
         <Card>
           <StageTitle icon={<Flame aria-hidden className="size-5" />}>Boil</StageTitle>
           <dl className="mt-3 grid grid-cols-2 gap-3">
-            <SmallFigure label="Pre-boil (hot)" value={units.format('volume', recipe.preBoilVolumeL)} />
-            <SmallFigure label="Post-boil (hot)" value={units.format('volume', recipe.postBoilVolumeL)} />
-            <SmallFigure label="Boil length" value={`${recipe.boilMinutes}\u00a0min`} />
-            <SmallFigure label="Boil-off" value={units.format('rate', recipe.boilOffLPerHour)} />
+            <Figure label="Pre-boil (hot)" value={units.format('volume', recipe.preBoilVolumeL)} />
+            <Figure label="Post-boil (hot)" value={units.format('volume', recipe.postBoilVolumeL)} />
+            <Figure label="Boil length" value={`${recipe.boilMinutes}\u00a0min`} />
+            <Figure label="Boil-off" value={units.format('rate', recipe.boilOffLPerHour)} />
           </dl>
           <h3 className="mt-4 text-sm font-semibold uppercase tracking-wide text-ink-faint">Hop schedule</h3>
           {hopsInOrder.length === 0 ? (
@@ -130,24 +136,6 @@ export function RecipeView({ recipe }: { recipe: Recipe }) {
           <p className="mt-2 whitespace-pre-line">{recipe.notes}</p>
         </Card>
       )}
-    </div>
-  );
-}
-
-function BigFigure({ label, value }: { label: string; value: string }) {
-  return (
-    <div className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
-      <p className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{label}</p>
-      <p className="mt-1 text-3xl font-bold tabular-nums text-cellar-900">{value}</p>
-    </div>
-  );
-}
-
-function SmallFigure({ label, value }: { label: string; value: string }) {
-  return (
-    <div>
-      <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{label}</dt>
-      <dd className="text-lg font-semibold tabular-nums">{value}</dd>
     </div>
   );
 }

@@ -1,6 +1,6 @@
 import { useFormikContext } from 'formik';
 import { useEffect } from 'react';
-import type { RecipeFormValues } from './recipe-form-values';
+import type { RecipeFormValues } from './form-values';
 
 /**
  * An unsaved recipe survives a reload: the form's values are kept in this browser's localStorage,
