@@ -107,6 +107,17 @@ export default defineConfig({
     // Maps for our own debugging stay in dist/ but are neither linked from the code nor served (server/app.ts).
     sourcemap: 'hidden',
     manifest: true,
+    rolldownOptions: {
+      output: {
+        codeSplitting: {
+          groups: [
+            // Every page needs the framework: one chunk, cached once, instead of pieces spread over
+            // whichever shared chunks happened to import them first.
+            { name: 'framework', test: /node_modules[\\/](react|react-dom|scheduler|react-router|@tanstack[\\/](query-core|react-query))[\\/]/, priority: 2 },
+          ],
+        },
+      },
+    },
   },
   test: {
     projects: [
