@@ -38,50 +38,67 @@ interface ResultsProps {
   recipe?: BalanceRecipe;
 }
 
+interface SummaryProps {
+  input: BoilCheckParsed;
+  outcome: BoilCheckOutcome;
+  units: Units;
+  recipe?: BalanceRecipe;
+}
+
 /**
- * The answer: where the wort is heading, then one card per thing the brewer can do about it.
- * Memoised: Formik renders the whole form again when a field is marked touched, and this panel is
- * the costly part; it renders only when the check itself changed.
+ * Where the wort is heading with no action: the figures that follow each keystroke at once.
+ * Memoised, as is CheckOptions: each renders only when its own check changed.
  */
-export const CheckResults = memo(function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions, recipe }: ResultsProps) {
-  const { result, currentSg, reading, warnings } = outcome;
+export const CheckSummary = memo(function CheckSummary({ input, outcome, units, recipe }: SummaryProps) {
+  const { result, currentSg, reading } = outcome;
+  const balance = recipe ? predictBoilBalance(input, outcome, recipe) : null;
+  const tone = result.status === 'on-target' ? 'text-ok-700' : 'text-malt-700';
+
+  return (
+    <section aria-label="Where the wort is heading" className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
+      <p className="text-sm font-semibold text-ink-soft">With no action, at the end of the boil</p>
+      <p role="status" className={`text-3xl font-bold ${tone}`} data-testid="gap">
+        {gapInWords(result, units.gravityUnit)}
+      </p>
+      <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3">
+        <Stat label="Gravity now" value={units.format('gravity', currentSg)} note={reading.kind === 'refractometer' ? `from ${reading.brix} °Bx` : 'corrected for temperature, for wort, assuming it expands like water'} />
+        <Stat label="OG at the end" value={units.format('gravity', result.projected.endSg)} note={`target ${units.format('gravity', result.targetSg)}`} testId="projected-og" />
+        <Stat label="Hot at flame-out" value={units.format('volume', result.projected.endVolumeL)} testId="projected-hot" />
+        <Stat
+          label="Into the fermenter"
+          value={units.format('volume', result.projected.fermenterVolumeL)}
+          note={input.targetVolumeL !== undefined ? `recipe ${units.format('volume', input.targetVolumeL)}` : undefined}
+          testId="projected-fermenter"
+        />
+        <Stat label="ABV" value={formatAbv(result.projected.abvPercent)} />
+      </dl>
+      <p className="mt-2 text-xs text-ink-faint" data-testid="kettle-losses">
+        {result.kettleLossL > 0
+          ? `Into the fermenter is after ${units.format('volume', result.kettleLossL)} of trub and dead space left in the kettle (${units.format('volume', result.projected.cooledVolumeL)} cooled in the kettle).`
+          : 'No kettle losses entered: every cooled litre is counted as reaching the fermenter.'}
+        {result.maxBoilVolumeL !== null && ` Additions keep about 10 % of the kettle free to boil: at most ${units.format('volume', result.maxBoilVolumeL)} in it.`}
+      </p>
+      {balance && <BalanceFigures balance={balance.asIs} testId="projected" />}
+      {result.fgAssumed && (
+        <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
+      )}
+    </section>
+  );
+});
+
+/**
+ * One card per thing the brewer can do, then what is not possible now. Rendered from a deferred
+ * copy of the check by the answer panel, so a keystroke paints the summary first.
+ */
+export const CheckOptions = memo(function CheckOptions({ input, outcome, units, choice, onChoose, beforeOptions, recipe }: ResultsProps) {
+  const { result, warnings } = outcome;
   const balance = recipe ? predictBoilBalance(input, outcome, recipe) : null;
   const ordered = orderedOptions(result);
   const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
   const anyExtract = ordered.some((o) => o.kind === 'extract');
-  const tone = result.status === 'on-target' ? 'text-ok-700' : 'text-malt-700';
 
   return (
-    <div className="space-y-4">
-      <section aria-label="Where the wort is heading" className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
-        <p className="text-sm font-semibold text-ink-soft">With no action, at the end of the boil</p>
-        <p role="status" className={`text-3xl font-bold ${tone}`} data-testid="gap">
-          {gapInWords(result, units.gravityUnit)}
-        </p>
-        <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3">
-          <Stat label="Gravity now" value={units.format('gravity', currentSg)} note={reading.kind === 'refractometer' ? `from ${reading.brix} °Bx` : 'corrected for temperature, for wort, assuming it expands like water'} />
-          <Stat label="OG at the end" value={units.format('gravity', result.projected.endSg)} note={`target ${units.format('gravity', result.targetSg)}`} testId="projected-og" />
-          <Stat label="Hot at flame-out" value={units.format('volume', result.projected.endVolumeL)} testId="projected-hot" />
-          <Stat
-            label="Into the fermenter"
-            value={units.format('volume', result.projected.fermenterVolumeL)}
-            note={input.targetVolumeL !== undefined ? `recipe ${units.format('volume', input.targetVolumeL)}` : undefined}
-            testId="projected-fermenter"
-          />
-          <Stat label="ABV" value={formatAbv(result.projected.abvPercent)} />
-        </dl>
-        <p className="mt-2 text-xs text-ink-faint" data-testid="kettle-losses">
-          {result.kettleLossL > 0
-            ? `Into the fermenter is after ${units.format('volume', result.kettleLossL)} of trub and dead space left in the kettle (${units.format('volume', result.projected.cooledVolumeL)} cooled in the kettle).`
-            : 'No kettle losses entered: every cooled litre is counted as reaching the fermenter.'}
-          {result.maxBoilVolumeL !== null && ` Additions keep about 10 % of the kettle free to boil: at most ${units.format('volume', result.maxBoilVolumeL)} in it.`}
-        </p>
-        {balance && <BalanceFigures balance={balance.asIs} testId="projected" />}
-        {result.fgAssumed && (
-          <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
-        )}
-      </section>
-
+    <>
       {warnings.map((w) => (
         <Notice key={w} tone="caution">
           {w}
@@ -126,7 +143,7 @@ export const CheckResults = memo(function CheckResults({ input, outcome, units, 
           </ul>
         </section>
       )}
-    </div>
+    </>
   );
 });
 
