@@ -1,4 +1,4 @@
-import { memo, useCallback, useDeferredValue, useEffect, useMemo, useReducer, useRef, useState, type ReactNode } from 'react';
+import { lazy, memo, Suspense, useCallback, useDeferredValue, useEffect, useMemo, useReducer, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
 import { gapInWords, optionAction, type BalanceRecipe, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
@@ -6,7 +6,7 @@ import { EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PE
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Notice } from '@/components/ui/notice';
 import { useUnits, type Units } from '@/lib/units';
-import { CheckOptions, CheckSummary, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-results';
+import { CheckSummary, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-summary';
 import { CheckNumberField, CheckQuantityField, type SetValue, type Touch } from './check-fields';
 import { evaluate, toFormValues, type Check, type LateBoilFormValues, type LateBoilInitialValues, type NumberValue, type ReadingKind } from './form-values';
 
@@ -40,6 +40,11 @@ export interface LateBoilCheckProps {
   recipe?: BalanceRecipe;
 }
 
+// The option cards are most of the answer's code and are needed only once a reading is complete:
+// their chunk is fetched when the brewer starts on the form (or a prefilled check is complete).
+const loadOptions = () => import('./check-results');
+const CheckOptions = lazy(() => loadOptions().then((m) => ({ default: m.CheckOptions })));
+
 const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
   dme: 'Dry malt extract',
   lme: 'Liquid malt extract',
@@ -68,6 +73,7 @@ export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, n
     <form
       noValidate
       aria-label="Late-boil check"
+      onFocus={() => void loadOptions()}
       onSubmit={(e) => {
         // Enter in a field: nothing to send, but every message is shown, as on a form's submit.
         e.preventDefault();
@@ -320,7 +326,11 @@ const Answer = memo(function Answer({
         {check.ok ? (
           <div className="space-y-4">
             <CheckSummary input={check.input} outcome={check.outcome} units={units} recipe={recipe} />
-            {deferred.ok && <CheckOptions input={deferred.input} outcome={deferred.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} recipe={recipe} />}
+            {deferred.ok && (
+              <Suspense fallback={null}>
+                <CheckOptions input={deferred.input} outcome={deferred.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} recipe={recipe} />
+              </Suspense>
+            )}
           </div>
         ) : (
           <NotReady missing={check.missing} problems={check.problems} />
