@@ -134,6 +134,27 @@ function reducer(state: FormState, action: FormAction): FormState {
   }
 }
 
+// Static parts, made once: React skips an element it has already rendered, and the icons in
+// them are costly to build again on each keystroke of a throttled phone.
+const hotWortCaution = (
+  <Notice tone="caution" title="Hot wort and steam burn">
+    Take the sample with a long spoon or a sampling tube, keep your face out of the steam, and let the drop cool before you read it.
+  </Notice>
+);
+
+const moreSettingsSummary = (
+  <summary className="flex min-h-touch cursor-pointer list-none items-center gap-1 font-semibold text-cellar-700 [&::-webkit-details-marker]:hidden">
+    <ChevronRight aria-hidden className="size-5 transition-transform group-open:rotate-90" />
+    More settings: FG, kettle size and losses, shrinkage, potentials
+  </summary>
+);
+
+const allOptionsLabel = (
+  <>
+    All options <ArrowDown aria-hidden className="size-4" />
+  </>
+);
+
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
     <fieldset className="min-w-0 rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
@@ -161,9 +182,7 @@ function Inputs({ values, errors, units, onValue, onTouch, dispatch }: InputsPro
   const us = units.unitSystem === 'us';
   return (
     <div className="min-w-0 space-y-4">
-      <Notice tone="caution" title="Hot wort and steam burn">
-        Take the sample with a long spoon or a sampling tube, keep your face out of the steam, and let the drop cool before you read it.
-      </Notice>
+      {hotWortCaution}
 
       <Panel title="Reading">
         <div role="radiogroup" aria-label="Read with" className="grid grid-cols-2 gap-2">
@@ -231,10 +250,7 @@ function Inputs({ values, errors, units, onValue, onTouch, dispatch }: InputsPro
           </div>
         </fieldset>
         <details className="group">
-          <summary className="flex min-h-touch cursor-pointer list-none items-center gap-1 font-semibold text-cellar-700 [&::-webkit-details-marker]:hidden">
-            <ChevronRight aria-hidden className="size-5 transition-transform group-open:rotate-90" />
-            More settings: FG, kettle size and losses, shrinkage, potentials
-          </summary>
+          {moreSettingsSummary}
           <div className="mt-2 space-y-4">
             <div className="grid grid-cols-2 gap-3">
               <CheckQuantityField {...field('targetFg')} kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
@@ -338,7 +354,7 @@ const Answer = memo(function Answer({
       </div>
       {check.ok && answerBelow && <AnswerBar outcome={check.outcome} units={units} onShow={() => resultsRef.current?.scrollIntoView({ behavior: 'smooth' })} />}
       {renderAfterOptions?.(check.ok ? { input: check.input, result: check.outcome } : null)}
-      {!onChoose && (nudge ?? <SignUpNudge />)}
+      {!onChoose && (nudge ?? signUpNudge)}
     </div>
   );
 });
@@ -384,12 +400,14 @@ function AnswerBar({ outcome, units, onShow }: { outcome: BoilCheckOutcome; unit
           {first && <p className="text-lg font-bold leading-tight">{optionAction(first, units.unitSystem)}</p>}
         </div>
         <button type="button" onClick={onShow} className="flex min-h-touch shrink-0 items-center gap-1 rounded-lg bg-white px-3 font-semibold text-cellar-900">
-          All options <ArrowDown aria-hidden className="size-4" />
+          {allOptionsLabel}
         </button>
       </div>
     </div>
   );
 }
+
+const signUpNudge = <SignUpNudge />;
 
 function SignUpNudge() {
   return (
