@@ -7,7 +7,7 @@
  */
 import { BrewMathError, BRIX_MAX, BRIX_MIN, EXTRACT_KINDS, SG_MAX, SG_MIN, WCF_MAX, WCF_MIN, type ExtractKind } from '../brewmath';
 import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../brewmath/extract';
-import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckInput } from '../boil-check';
+import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckInput } from '../boil-check/check';
 import { showF, showGal } from './unit-text';
 
 /** Beyond a home or club brewery: most likely a typo (the same bounds as a recipe). */

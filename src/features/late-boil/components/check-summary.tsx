@@ -4,7 +4,8 @@
  * figures (balance-figures.tsx) load on their own, when there is something to show.
  */
 import { lazy, memo, Suspense, type ReactNode } from 'react';
-import { gapInWords, type BalanceRecipe, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
+import type { BalanceRecipe, BoilCheckOutcome, FeasibleOption } from '@shared/boil-check';
+import { gapInWords } from '@shared/boil-check/words';
 import { formatAbv, type ExtractKind } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import type { Units } from '@/lib/units';

@@ -2,7 +2,7 @@
  * The late-boil form's values: SI numbers (or '' while a field is empty, NaN while it holds
  * text that is not a number), shaped like BoilCheckInput so a zod issue's path is the field's name.
  */
-import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckOutcome } from '@shared/boil-check';
+import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckOutcome } from '@shared/boil-check/check';
 import { BrewMathError, DEFAULT_COOLING_SHRINKAGE, DEFAULT_WCF, EXTRACT_KINDS, type ExtractKind } from '@shared/brewmath';
 import { boilCheckFieldIssues, brewMathIssue, isMissing, type BoilCheckIssue } from '@shared/schemas/boil-check-rules';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';

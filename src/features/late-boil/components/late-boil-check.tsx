@@ -1,7 +1,8 @@
 import { lazy, memo, Suspense, useCallback, useDeferredValue, useEffect, useMemo, useReducer, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
-import { gapInWords, optionAction, type BalanceRecipe, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
+import type { BalanceRecipe, BoilCheckOutcome, FeasibleOption } from '@shared/boil-check';
+import { gapInWords, optionAction } from '@shared/boil-check/words';
 import { EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON, type ExtractKind } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Notice } from '@/components/ui/notice';
