@@ -4,19 +4,20 @@
  * day a brewer sees or types is the day on their own clock (`localDay`); the server, which does
  * not know the brewer's time zone, stamps a day only where the client sent none, in UTC (`utcDay`).
  */
-import { format } from 'date-fns';
+// lightFormat: the same patterns without the locale engine behind `format` (5 kB less on a brew day).
+import { lightFormat } from 'date-fns';
 
 export const HOUR_MS = 3_600_000;
 export const DAY_MS = 24 * HOUR_MS;
 
 /** The calendar day on this machine's clock (the brewer's, in the browser), as yyyy-mm-dd. */
 export function localDay(date: Date = new Date()): string {
-  return format(date, 'yyyy-MM-dd');
+  return lightFormat(date, 'yyyy-MM-dd');
 }
 
 /** The same instant as a value for <input type="datetime-local"> on this machine's clock. */
 export function localDateTimeInput(date: Date): string {
-  return format(date, "yyyy-MM-dd'T'HH:mm");
+  return lightFormat(date, "yyyy-MM-dd'T'HH:mm");
 }
 
 /** The calendar day in UTC, as yyyy-mm-dd: the server's stamp when the client gave no day. */

@@ -16,7 +16,7 @@
  */
 import { BrewMathError, ibuTinseth, moreySrmFromMcu, type ExtractKind } from '../brewmath';
 import { maltColourUnits } from '../brewmath/colour';
-import type { BoilCheckInput, BoilCheckOutcome } from './index';
+import type { BoilCheckInput, BoilCheckOutcome } from './check';
 
 /**
  * Colour of light extracts and sugars in °L (common practice, no source: light dry and liquid malt

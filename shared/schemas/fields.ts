@@ -1,11 +1,7 @@
 /** Building blocks for schemas whose messages a brewer reads (the form and the API share them). */
 import { z } from 'zod';
-import { cToF, LITRES_PER_US_GALLON } from '../brewmath';
 
-/** A °C limit as US brewers read it, for messages that name both units. */
-export const showF = (tempC: number) => `${Number(cToF(tempC).toFixed(1))} °F`;
-/** A litre limit as US brewers read it. */
-export const showGal = (litres: number) => `${Number((litres / LITRES_PER_US_GALLON).toFixed(2))} gal`;
+export { showF, showGal } from './unit-text';
 
 /** A number, with "Enter …" when it is missing and "… must be a number" when it is not one. */
 export function num(what: string, label: string) {

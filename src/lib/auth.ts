@@ -2,12 +2,21 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Me } from '@shared/schemas/auth';
 import { api, ApiError, NetworkError } from './api-client';
-import { loadMeCopy, saveMeCopy, setCopyOwner } from './offline/device-copy';
-import { setQueueOwner, signedInAgain } from './offline/send';
 
-function owns(me: Me) {
-  setQueueOwner(me.id);
-  setCopyOwner(me.id);
+/**
+ * The device queue and copies, loaded only once someone is signed in (or may be, offline): a
+ * visitor's first page and the public check never download them.
+ */
+async function offline() {
+  const [copies, send] = await Promise.all([import('./offline/device-copy'), import('./offline/send')]);
+  return {
+    ...copies,
+    ...send,
+    owns(me: Me) {
+      send.setQueueOwner(me.id);
+      copies.setCopyOwner(me.id);
+    },
+  };
 }
 
 /**
@@ -18,16 +27,18 @@ function owns(me: Me) {
 export async function getMe(signal?: AbortSignal): Promise<Me | null> {
   try {
     const me = await api.get<Me>('/api/auth/me', { signal });
-    owns(me);
-    signedInAgain();
-    void saveMeCopy(me).catch(() => undefined);
+    const device = await offline();
+    device.owns(me);
+    device.signedInAgain();
+    void device.saveMeCopy(me).catch(() => undefined);
     return me;
   } catch (error) {
     if (error instanceof ApiError && error.status === 401) return null;
     if (error instanceof NetworkError) {
-      const copy = await loadMeCopy<Me>().catch(() => undefined);
-      if (copy) {
-        owns(copy);
+      const device = await offline().catch(() => undefined);
+      const copy = await device?.loadMeCopy<Me>().catch(() => undefined);
+      if (device && copy) {
+        device.owns(copy);
         return copy;
       }
       // Nobody has signed in on this device yet: the public pages (the late-boil check) still open.

@@ -1,18 +1,20 @@
 import { Menu, X } from 'lucide-react';
-import { Suspense, useEffect, useRef, useState } from 'react';
+import { lazy, Suspense, useEffect, useRef, useState } from 'react';
 import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
 import { useMe } from '@/lib/auth';
-import { useOfflineSync } from '@/lib/offline/use-offline-sync';
-import { QueueCount } from '@/components/offline/queued-list';
 import { UpdatePrompt } from '@/components/offline/update-prompt';
-import { PreferencesMenu } from '@/features/auth/components/preferences-menu';
 import { buttonClass } from '@/components/ui/button';
 import { Loading } from '@/components/ui/page';
 import { navItems } from '../nav';
 
+// A signed-in brewer's header parts, one chunk fetched only once someone is signed in.
+const signedIn = () => import('../signed-in-header');
+const OfflineSync = lazy(() => signedIn().then((m) => ({ default: m.OfflineSync })));
+const QueueCount = lazy(() => signedIn().then((m) => ({ default: m.QueueCount })));
+const PreferencesMenu = lazy(() => signedIn().then((m) => ({ default: m.PreferencesMenu })));
+
 export function RootLayout() {
   const { data: me } = useMe();
-  useOfflineSync(me);
   const navigate = useNavigate();
   const navigation = useNavigation();
   const items = navItems.filter((i) => (me || i.public) && (!i.admin || me?.siteRole === 'admin'));
@@ -42,7 +44,12 @@ export function RootLayout() {
             Wortwise
           </Link>
           <div className="ml-auto flex items-center gap-1">
-            {me && <QueueCount />}
+            {me && (
+              <Suspense fallback={null}>
+                <OfflineSync />
+                <QueueCount />
+              </Suspense>
+            )}
             {items.length > 1 && (
               <button
                 ref={menuButton}
@@ -57,7 +64,9 @@ export function RootLayout() {
               </button>
             )}
             {me ? (
-              <PreferencesMenu me={me} onSignedOut={() => navigate('/sign-in')} />
+              <Suspense fallback={null}>
+                <PreferencesMenu me={me} onSignedOut={() => navigate('/sign-in')} />
+              </Suspense>
             ) : (
               <>
                 <Link to="/sign-in" className="flex min-h-touch items-center rounded-lg px-3 hover:bg-cellar-900">

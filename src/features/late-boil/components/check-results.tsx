@@ -1,3 +1,7 @@
+/**
+ * The late-boil answer's option cards: one per thing the brewer can do, then what is not possible
+ * now. Loaded on its own (late-boil-check.tsx), once the brewer starts on the form.
+ */
 import { Check, RotateCcw } from 'lucide-react';
 import { memo, useId, type ReactNode } from 'react';
 import {
@@ -10,21 +14,16 @@ import {
   type BalanceRecipe,
   type BoilCheckOutcome,
   type FeasibleOption,
-  type OptionBalance,
   type InfeasibleOption,
+  type OptionBalance,
 } from '@shared/boil-check';
-import { formatAbv, SRM_TO_EBC, type ExtractKind } from '@shared/brewmath';
+import { formatAbv } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { formatColour, useColourScale } from '@/lib/colour';
 import type { Units } from '@/lib/units';
-
-export type ChoiceState = { key: string; state: 'saving' | 'saved' | 'failed'; message?: string };
-
-export function optionKey(option: { kind: string; extract?: ExtractKind }) {
-  return option.kind === 'extract' ? `extract-${option.extract}` : option.kind;
-}
+import { BalanceFigures } from './balance-figures';
+import { optionKey, orderedOptions, type ChoiceState } from './check-summary';
 
 interface ResultsProps {
   input: BoilCheckParsed;
@@ -39,49 +38,18 @@ interface ResultsProps {
 }
 
 /**
- * The answer: where the wort is heading, then one card per thing the brewer can do about it.
- * Memoised: Formik renders the whole form again when a field is marked touched, and this panel is
- * the costly part; it renders only when the check itself changed.
+ * One card per thing the brewer can do, then what is not possible now. Rendered from a deferred
+ * copy of the check by the answer panel, so a keystroke paints the summary first.
  */
-export const CheckResults = memo(function CheckResults({ input, outcome, units, choice, onChoose, beforeOptions, recipe }: ResultsProps) {
-  const { result, currentSg, reading, warnings } = outcome;
+export const CheckOptions = memo(function CheckOptions({ input, outcome, units, choice, onChoose, beforeOptions, recipe }: ResultsProps) {
+  const { result, warnings } = outcome;
   const balance = recipe ? predictBoilBalance(input, outcome, recipe) : null;
   const ordered = orderedOptions(result);
   const infeasible = result.options.filter((o): o is InfeasibleOption => !o.feasible);
   const anyExtract = ordered.some((o) => o.kind === 'extract');
-  const tone = result.status === 'on-target' ? 'text-ok-700' : 'text-malt-700';
 
   return (
-    <div className="space-y-4">
-      <section aria-label="Where the wort is heading" className="rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100">
-        <p className="text-sm font-semibold text-ink-soft">With no action, at the end of the boil</p>
-        <p role="status" className={`text-3xl font-bold ${tone}`} data-testid="gap">
-          {gapInWords(result, units.gravityUnit)}
-        </p>
-        <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3">
-          <Stat label="Gravity now" value={units.format('gravity', currentSg)} note={reading.kind === 'refractometer' ? `from ${reading.brix} °Bx` : 'corrected for temperature, for wort, assuming it expands like water'} />
-          <Stat label="OG at the end" value={units.format('gravity', result.projected.endSg)} note={`target ${units.format('gravity', result.targetSg)}`} testId="projected-og" />
-          <Stat label="Hot at flame-out" value={units.format('volume', result.projected.endVolumeL)} testId="projected-hot" />
-          <Stat
-            label="Into the fermenter"
-            value={units.format('volume', result.projected.fermenterVolumeL)}
-            note={input.targetVolumeL !== undefined ? `recipe ${units.format('volume', input.targetVolumeL)}` : undefined}
-            testId="projected-fermenter"
-          />
-          <Stat label="ABV" value={formatAbv(result.projected.abvPercent)} />
-        </dl>
-        <p className="mt-2 text-xs text-ink-faint" data-testid="kettle-losses">
-          {result.kettleLossL > 0
-            ? `Into the fermenter is after ${units.format('volume', result.kettleLossL)} of trub and dead space left in the kettle (${units.format('volume', result.projected.cooledVolumeL)} cooled in the kettle).`
-            : 'No kettle losses entered: every cooled litre is counted as reaching the fermenter.'}
-          {result.maxBoilVolumeL !== null && ` Additions keep about 10 % of the kettle free to boil: at most ${units.format('volume', result.maxBoilVolumeL)} in it.`}
-        </p>
-        {balance && <BalanceFigures balance={balance.asIs} testId="projected" />}
-        {result.fgAssumed && (
-          <p className="mt-2 text-xs text-ink-faint">ABV assumes the usual 75 % apparent attenuation (FG {units.format('gravity', result.fgSg)}); enter the recipe's FG for a closer figure.</p>
-        )}
-      </section>
-
+    <>
       {warnings.map((w) => (
         <Notice key={w} tone="caution">
           {w}
@@ -126,21 +94,9 @@ export const CheckResults = memo(function CheckResults({ input, outcome, units, 
           </ul>
         </section>
       )}
-    </div>
+    </>
   );
 });
-
-function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
-  return (
-    <div className="min-w-0">
-      <dt className="text-ink-faint">{label}</dt>
-      <dd className="text-xl font-bold tabular-nums text-ink" data-testid={testId}>
-        {value}
-      </dd>
-      {note && <dd className="text-xs text-ink-faint">{note}</dd>}
-    </div>
-  );
-}
 
 /** The same reason for all four extracts (e.g. the wort is already over) reads once. */
 function groupReasons(options: InfeasibleOption[], input: BoilCheckParsed, outcome: BoilCheckOutcome, units: Units) {
@@ -158,14 +114,6 @@ function groupReasons(options: InfeasibleOption[], input: BoilCheckParsed, outco
 }
 
 const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
-
-/** Feasible options, the likely action first; "Leave it" leads only when the wort is on target. */
-export function orderedOptions(result: BoilCheckOutcome['result']): FeasibleOption[] {
-  const feasible = result.options.filter((o): o is FeasibleOption => o.feasible);
-  const asIs = feasible.filter((o) => o.kind === 'as-is');
-  const corrections = feasible.filter((o) => o.kind !== 'as-is');
-  return result.status === 'on-target' ? [...asIs, ...corrections] : [...corrections, ...asIs];
-}
 
 function hintFor(option: FeasibleOption, input: BoilCheckParsed, outcome: BoilCheckOutcome, units: Units): string | null {
   switch (option.kind) {
@@ -254,56 +202,5 @@ function OptionCard({
         </div>
       )}
     </article>
-  );
-}
-
-export function NotReady({ missing, problems }: { missing: string[]; problems: { path: string; message: string }[] }): ReactNode {
-  return (
-    <section aria-label="Your options" className="rounded-xl border-2 border-dashed border-cellar-100 p-4 text-ink-soft">
-      {problems.length > 0 ? (
-        <>
-          <p className="font-semibold text-alert-700">Fix this to see your options:</p>
-          <ul className="mt-1 list-disc space-y-1 pl-5 text-sm" data-testid="problems">
-            {problems.map((p) => (
-              <li key={p.path + p.message}>{p.message}</li>
-            ))}
-          </ul>
-        </>
-      ) : (
-        <p>
-          Your options appear here as you type. Still needed: <span className="font-semibold">{missing.join(', ')}</span>.
-        </p>
-      )}
-    </section>
-  );
-}
-
-function signed(value: number, digits: number) {
-  const text = Math.abs(value).toFixed(digits);
-  return Number(text) === 0 ? 'on target' : `${value > 0 ? '+' : '\u2212'}${text} vs target`;
-}
-
-/** Bitterness and colour at the end, with the gap to the recipe's targets; a number only, no colour swatch. */
-function BalanceFigures({ balance, testId }: { balance: OptionBalance; testId: string }) {
-  const scale = useColourScale();
-  const colourGap =
-    balance.colourDeviationSrm === null ? null : scale === 'ebc' ? signed(balance.colourDeviationSrm * SRM_TO_EBC, 0).replace('vs', 'EBC vs') : signed(balance.colourDeviationSrm, 1).replace('vs', 'SRM vs');
-  return (
-    <dl className="mt-2 grid grid-cols-2 gap-2 text-sm">
-      <div className="min-w-0">
-        <dt className="text-ink-faint">Bitterness</dt>
-        <dd className="text-lg font-bold tabular-nums" data-testid={`ibu-${testId}`}>
-          {balance.ibu === null ? 'no hops' : `${balance.ibu.toFixed(1)}\u00a0IBU`}
-        </dd>
-        {balance.ibuDeviation !== null && <dd className="text-xs text-ink-soft">{signed(balance.ibuDeviation, 1).replace('vs', 'IBU vs')}</dd>}
-      </div>
-      <div className="min-w-0">
-        <dt className="text-ink-faint">Colour</dt>
-        <dd className="text-lg font-bold tabular-nums" data-testid={`colour-${testId}`}>
-          {balance.colourSrm === null ? 'malt colours unknown' : formatColour(balance.colourSrm, scale)}
-        </dd>
-        {colourGap && <dd className="text-xs text-ink-soft">{colourGap}</dd>}
-      </div>
-    </dl>
   );
 }

@@ -2,10 +2,10 @@
  * The late-boil form's values: SI numbers (or '' while a field is empty, NaN while it holds
  * text that is not a number), shaped like BoilCheckInput so a zod issue's path is the field's name.
  */
-import type { BoilCheckInput } from '@shared/boil-check';
-import { DEFAULT_CALIBRATION_TEMP_C } from '@shared/boil-check';
-import { DEFAULT_COOLING_SHRINKAGE, DEFAULT_WCF, EXTRACT_KINDS, type ExtractKind } from '@shared/brewmath';
-import { boilCheckInputSchema, type BoilCheckParsed } from '@shared/schemas/boil-check';
+import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckOutcome } from '@shared/boil-check/check';
+import { BrewMathError, DEFAULT_COOLING_SHRINKAGE, DEFAULT_WCF, EXTRACT_KINDS, type ExtractKind } from '@shared/brewmath';
+import { boilCheckFieldIssues, brewMathIssue, isMissing, type BoilCheckIssue } from '@shared/schemas/boil-check-rules';
+import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 
 export type NumberValue = number | '' | null;
 export type ReadingKind = 'refractometer' | 'hydrometer';
@@ -115,33 +115,48 @@ export function toCheckInput(values: LateBoilFormValues): Record<string, unknown
   };
 }
 
-export type ParsedCheck = { ok: true; input: BoilCheckParsed } | { ok: false; missing: string[]; problems: { path: string; message: string }[] };
+export type Check =
+  | { ok: true; input: BoilCheckParsed; outcome: BoilCheckOutcome }
+  | { ok: false; missing: string[]; problems: { path: string; message: string }[] };
 
-/** Parses the form's values: the check's input, or what is missing and what is wrong. */
-let lastParse: { key: string; raw: ReturnType<typeof toCheckInput>; parsed: ReturnType<typeof boilCheckInputSchema.safeParse> } | null = null;
-
-/**
- * The schema's verdict on these values, parsed once per change: Formik's validation and the
- * answer panel both ask for the same values (as different objects) on every keystroke.
- */
-export function safeParseCheck(values: LateBoilFormValues) {
-  const raw = toCheckInput(values);
-  const key = JSON.stringify(raw, (_k, v: unknown) => (typeof v === 'number' && Number.isNaN(v) ? 'NaN' : v));
-  if (lastParse?.key !== key) lastParse = { key, raw, parsed: boilCheckInputSchema.safeParse(raw) };
-  return lastParse;
+export interface Evaluated {
+  check: Check;
+  /** The first message for each field path ("reading.brix"), as the API would return it. */
+  errors: Partial<Record<string, string>>;
 }
 
-export function parseCheck(values: LateBoilFormValues): ParsedCheck {
-  const { raw, parsed } = safeParseCheck(values);
-  if (parsed.success) return { ok: true, input: parsed.data satisfies BoilCheckInput };
+function errorsByPath(issues: BoilCheckIssue[]) {
+  const errors: Partial<Record<string, string>> = {};
+  for (const issue of issues) {
+    const path = issue.path.join('.');
+    if (path) errors[path] ??= issue.message;
+  }
+  return errors;
+}
+
+/**
+ * The form's values checked once per change: the same rules (and messages) as the API's schema,
+ * without zod, then the check itself, run once for both the verdict and the answer.
+ */
+export function evaluate(values: LateBoilFormValues, unitSystem: 'metric' | 'us'): Evaluated {
+  const raw = toCheckInput(values);
+  let issues = boilCheckFieldIssues(raw);
+  if (issues.length === 0) {
+    const input = { ...raw, extractsOnHand: raw.extractsOnHand ?? [...EXTRACT_KINDS] } as unknown as BoilCheckParsed;
+    try {
+      return { check: { ok: true, input, outcome: runBoilCheck(input, { unitSystem }) }, errors: {} };
+    } catch (error) {
+      if (!(error instanceof BrewMathError)) throw error;
+      issues = [brewMathIssue(error)];
+    }
+  }
   const missing: string[] = [];
   const problems: { path: string; message: string }[] = [];
-  for (const issue of parsed.error.issues) {
-    const path = issue.path.map(String).join('.');
+  for (const issue of issues) {
     const value = issue.path.reduce<unknown>((node, key) => (node as Record<PropertyKey, unknown> | undefined)?.[key], raw);
     // An empty field is not a mistake yet: it goes on the list of what to fill in ("Enter the target OG.").
-    if (value === '' || value === undefined || value === null) missing.push(issue.message.replace(/^Enter /, '').replace(/\.$/, ''));
-    else problems.push({ path, message: issue.message });
+    if (isMissing(value)) missing.push(issue.message.replace(/^Enter /, '').replace(/\.$/, ''));
+    else problems.push({ path: issue.path.join('.'), message: issue.message });
   }
-  return { ok: false, missing, problems };
+  return { check: { ok: false, missing, problems }, errors: errorsByPath(issues) };
 }

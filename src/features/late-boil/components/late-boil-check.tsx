@@ -1,17 +1,15 @@
-import { Field, Form, Formik, useFormikContext } from 'formik';
-import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { lazy, memo, Suspense, useCallback, useDeferredValue, useEffect, useMemo, useReducer, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
-import { gapInWords, optionAction, runBoilCheck, type BalanceRecipe, type BoilCheckOutcome, type FeasibleOption } from '@shared/boil-check';
-import { BrewMathError, EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
+import type { BalanceRecipe, BoilCheckOutcome, FeasibleOption } from '@shared/boil-check';
+import { gapInWords, optionAction } from '@shared/boil-check/words';
+import { EXTRACT_KINDS, EXTRACT_POTENTIALS_POINTS_L_PER_KG, KG_PER_LB, LITRES_PER_US_GALLON, type ExtractKind } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Notice } from '@/components/ui/notice';
-import { QuantityField } from '@/components/ui/quantity-field';
-import { issuesToErrors } from '@/lib/form';
 import { useUnits, type Units } from '@/lib/units';
-import { CheckResults, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-results';
-import { parseCheck, safeParseCheck, toFormValues, type LateBoilFormValues, type LateBoilInitialValues } from './form-values';
-import { NumberField } from '@/components/ui/number-field';
+import { CheckSummary, NotReady, optionKey, orderedOptions, type ChoiceState } from './check-summary';
+import { CheckNumberField, CheckQuantityField, type SetValue, type Touch } from './check-fields';
+import { evaluate, toFormValues, type Check, type LateBoilFormValues, type LateBoilInitialValues, type NumberValue, type ReadingKind } from './form-values';
 
 export interface LateBoilChoice {
   /** The option the brewer picked, exactly as the check produced it. */
@@ -43,10 +41,10 @@ export interface LateBoilCheckProps {
   recipe?: BalanceRecipe;
 }
 
-const validateForm = (values: LateBoilFormValues) => {
-  const { parsed } = safeParseCheck(values);
-  return parsed.success ? {} : issuesToErrors<LateBoilFormValues>(parsed.error.issues);
-};
+// The option cards are most of the answer's code and are needed only once a reading is complete:
+// their chunk is fetched when the brewer starts on the form (or a prefilled check is complete).
+const loadOptions = () => import('./check-results');
+const CheckOptions = lazy(() => loadOptions().then((m) => ({ default: m.CheckOptions })));
 
 const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
   dme: 'Dry malt extract',
@@ -63,46 +61,100 @@ const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
 export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions, renderBeforeOptions, recipe }: LateBoilCheckProps) {
   const userUnits = useUnits();
   const units = unitsOverride ?? userUnits;
-  const start = useMemo(() => toFormValues(initialValues), [initialValues]);
+  // Later changes to initialValues are ignored, as a form's starting values are: what is typed stays.
+  const [state, dispatch] = useReducer(reducer, initialValues, (initial): FormState => ({ values: toFormValues(initial), touched: {} }));
+  // Checked once per change: the verdict under each field and the answer come from this one run.
+  const { check, errors } = useMemo(() => evaluate(state.values, units.unitSystem), [state.values, units.unitSystem]);
+  const onValue = useCallback<SetValue>((name, value) => dispatch({ type: 'set', name, value }), []);
+  const onTouch = useCallback<Touch>((name) => dispatch({ type: 'touch', name }), []);
   const inputsRef = useRef<HTMLDivElement>(null);
+  const shownErrors: Partial<Record<string, string>> = {};
+  for (const [name, message] of Object.entries(errors)) if (state.touched[name] || state.touched['*']) shownErrors[name] = message;
   return (
-    <Formik<LateBoilFormValues> initialValues={start} validate={validateForm} onSubmit={() => {}}>
-      <Form noValidate aria-label="Late-boil check">
-        <TouchWhatChanges />
-        <div className="grid gap-4 pb-20 lg:grid-cols-2 lg:items-start lg:pb-0">
-          <div ref={inputsRef} className="min-w-0">
-            <Inputs units={units} />
-          </div>
-          <div className="lg:sticky lg:top-4">
-            <Answer units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} renderBeforeOptions={renderBeforeOptions} recipe={recipe} />
-          </div>
+    <form
+      noValidate
+      aria-label="Late-boil check"
+      onFocus={() => void loadOptions()}
+      onSubmit={(e) => {
+        // Enter in a field: nothing to send, but every message is shown, as on a form's submit.
+        e.preventDefault();
+        dispatch({ type: 'touch', name: '*' });
+      }}
+    >
+      <div className="grid gap-4 pb-20 lg:grid-cols-2 lg:items-start lg:pb-0">
+        <div ref={inputsRef} className="min-w-0">
+          <Inputs values={state.values} errors={shownErrors} units={units} onValue={onValue} onTouch={onTouch} dispatch={dispatch} />
         </div>
-      </Form>
-    </Formik>
+        <div className="lg:sticky lg:top-4">
+          <Answer check={check} units={units} inputsRef={inputsRef} onChoose={onChoose} nudge={nudge} renderAfterOptions={renderAfterOptions} renderBeforeOptions={renderBeforeOptions} recipe={recipe} />
+        </div>
+      </div>
+    </form>
   );
 }
 
-/** Marks a field touched as soon as it changes, so a wrong number is said at once, not on blur. */
-function TouchWhatChanges() {
-  const { values, setFieldTouched } = useFormikContext<LateBoilFormValues>();
-  const previous = useRef(values);
-  useEffect(() => {
-    const before = flatten(previous.current);
-    const now = flatten(values);
-    for (const key of Object.keys(now)) if (!Object.is(before[key], now[key])) void setFieldTouched(key, true, false);
-    previous.current = values;
-  }, [values, setFieldTouched]);
-  return null;
+interface FormState {
+  values: LateBoilFormValues;
+  /** Fields the brewer changed or left: their messages show at once, not only on blur ('*': all of them). */
+  touched: Partial<Record<string, true>>;
 }
 
-function flatten(value: unknown, prefix = '', out: Record<string, unknown> = {}): Record<string, unknown> {
-  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-    for (const [k, v] of Object.entries(value)) flatten(v, prefix ? `${prefix}.${k}` : k, out);
-  } else {
-    out[prefix] = Array.isArray(value) ? value.join(',') : value;
-  }
-  return out;
+type FormAction =
+  | { type: 'set'; name: string; value: NumberValue }
+  | { type: 'kind'; kind: ReadingKind }
+  | { type: 'extract'; kind: ExtractKind; on: boolean }
+  | { type: 'touch'; name: string };
+
+function setIn<T>(target: T, path: string[], value: unknown): T {
+  const [key, ...rest] = path;
+  const node = target as Record<string, unknown>;
+  return { ...node, [key]: rest.length === 0 ? value : setIn(node[key], rest, value) } as T;
 }
+
+function getIn(target: unknown, path: string[]): unknown {
+  return path.reduce<unknown>((node, key) => (node as Record<string, unknown> | undefined)?.[key], target);
+}
+
+function reducer(state: FormState, action: FormAction): FormState {
+  switch (action.type) {
+    case 'set': {
+      const path = action.name.split('.');
+      if (Object.is(getIn(state.values, path), action.value)) return state;
+      return { values: setIn(state.values, path, action.value), touched: { ...state.touched, [action.name]: true } };
+    }
+    case 'kind':
+      if (state.values.reading.kind === action.kind) return state;
+      return { ...state, values: setIn(state.values, ['reading', 'kind'], action.kind) };
+    case 'extract': {
+      const now = state.values.extractsOnHand;
+      const next = action.on ? (now.includes(action.kind) ? now : [...now, action.kind]) : now.filter((k) => k !== action.kind);
+      return { ...state, values: { ...state.values, extractsOnHand: next } };
+    }
+    case 'touch':
+      return state.touched[action.name] ? state : { ...state, touched: { ...state.touched, [action.name]: true } };
+  }
+}
+
+// Static parts, made once: React skips an element it has already rendered, and the icons in
+// them are costly to build again on each keystroke of a throttled phone.
+const hotWortCaution = (
+  <Notice tone="caution" title="Hot wort and steam burn">
+    Take the sample with a long spoon or a sampling tube, keep your face out of the steam, and let the drop cool before you read it.
+  </Notice>
+);
+
+const moreSettingsSummary = (
+  <summary className="flex min-h-touch cursor-pointer list-none items-center gap-1 font-semibold text-cellar-700 [&::-webkit-details-marker]:hidden">
+    <ChevronRight aria-hidden className="size-5 transition-transform group-open:rotate-90" />
+    More settings: FG, kettle size and losses, shrinkage, potentials
+  </summary>
+);
+
+const allOptionsLabel = (
+  <>
+    All options <ArrowDown aria-hidden className="size-4" />
+  </>
+);
 
 function Panel({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -113,17 +165,25 @@ function Panel({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-function Inputs({ units }: { units: Units }) {
-  const { values } = useFormikContext<LateBoilFormValues>();
+interface InputsProps {
+  values: LateBoilFormValues;
+  errors: Partial<Record<string, string>>;
+  units: Units;
+  onValue: SetValue;
+  onTouch: Touch;
+  dispatch: (action: FormAction) => void;
+}
+
+function Inputs({ values, errors, units, onValue, onTouch, dispatch }: InputsProps) {
+  // Each field is memoised: only the one whose value or message changed renders again.
+  const field = (name: string) => ({ name, value: getIn(values, name.split('.')) as NumberValue, error: errors[name], onValue, onTouch });
   const hydrometer = values.reading.kind === 'hydrometer';
   // Potentials read in points per pound per US gallon in US units: 1 ppg = 8.3454 points·L/kg.
   const ppgScale = KG_PER_LB / LITRES_PER_US_GALLON;
   const us = units.unitSystem === 'us';
   return (
     <div className="min-w-0 space-y-4">
-      <Notice tone="caution" title="Hot wort and steam burn">
-        Take the sample with a long spoon or a sampling tube, keep your face out of the steam, and let the drop cool before you read it.
-      </Notice>
+      {hotWortCaution}
 
       <Panel title="Reading">
         <div role="radiogroup" aria-label="Read with" className="grid grid-cols-2 gap-2">
@@ -137,7 +197,7 @@ function Inputs({ units }: { units: Units }) {
               key={kind}
               className={`flex min-h-touch cursor-pointer items-center justify-center rounded-lg px-2 py-2 text-center text-sm font-semibold ring-1 ${values.reading.kind === kind ? 'bg-cellar-700 text-white ring-cellar-700' : 'bg-white text-cellar-700 ring-cellar-300'}`}
             >
-              <Field type="radio" name="reading.kind" value={kind} className="sr-only" />
+              <input type="radio" name="reading.kind" value={kind} checked={values.reading.kind === kind} onChange={() => dispatch({ type: 'kind', kind })} className="sr-only" />
               {label}
             </label>
           ))}
@@ -145,65 +205,69 @@ function Inputs({ units }: { units: Units }) {
         {hydrometer ? (
           <>
             <p className="text-sm text-ink-soft">A hydrometer cannot be read in hot wort: cool a sample in a covered jar first.</p>
-            <QuantityField name="reading.sg" kind="gravity" label="Hydrometer reading" size="large" units={units} />
+            <CheckQuantityField {...field('reading.sg')} kind="gravity" label="Hydrometer reading" size="large" units={units} />
             <div className="grid grid-cols-2 gap-3">
-              <QuantityField name="reading.sampleTempC" kind="temperature" label="Sample temperature" units={units} />
-              <QuantityField name="reading.calibrationTempC" kind="temperature" label="Calibrated at" units={units} />
+              <CheckQuantityField {...field('reading.sampleTempC')} kind="temperature" label="Sample temperature" units={units} />
+              <CheckQuantityField {...field('reading.calibrationTempC')} kind="temperature" label="Calibrated at" units={units} />
             </div>
           </>
         ) : (
           <div className="grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-3">
-            <NumberField name="reading.brix" label="Brix" unit="°Bx" size="large" />
-            <NumberField name="reading.wcf" label="Wort correction factor" hint="About 1.04 is common." />
+            <CheckNumberField {...field('reading.brix')} label="Brix" unit="°Bx" size="large" />
+            <CheckNumberField {...field('reading.wcf')} label="Wort correction factor" hint="About 1.04 is common." />
           </div>
         )}
       </Panel>
 
       <Panel title="Kettle now">
-        <QuantityField name="volumeL" kind="volume" label="Wort in the kettle (hot)" size="large" units={units} />
+        <CheckQuantityField {...field('volumeL')} kind="volume" label="Wort in the kettle (hot)" size="large" units={units} />
         <div className="grid grid-cols-2 gap-3">
-          <NumberField name="minutesLeft" label="Minutes left" unit="min" />
-          <QuantityField name="boilOffLPerHour" kind="rate" label="Boil-off rate" units={units} />
+          <CheckNumberField {...field('minutesLeft')} label="Minutes left" unit="min" />
+          <CheckQuantityField {...field('boilOffLPerHour')} kind="rate" label="Boil-off rate" units={units} />
         </div>
       </Panel>
 
       <Panel title="Recipe target">
         <div className="grid grid-cols-2 gap-3">
-          <QuantityField name="targetSg" kind="gravity" label="Target OG" units={units} />
-          <QuantityField name="targetVolumeL" kind="volume" label="Into the fermenter" hint="Optional" units={units} />
+          <CheckQuantityField {...field('targetSg')} kind="gravity" label="Target OG" units={units} />
+          <CheckQuantityField {...field('targetVolumeL')} kind="volume" label="Into the fermenter" hint="Optional" units={units} />
         </div>
         <fieldset>
           <legend className="mb-1 text-sm font-semibold text-ink-soft">Extracts on hand</legend>
           <div className="grid grid-cols-2 gap-2">
             {EXTRACT_KINDS.map((kind) => (
               <label key={kind} className="flex min-h-touch cursor-pointer items-center gap-2 rounded-lg px-2 ring-1 ring-cellar-100">
-                <Field type="checkbox" name="extractsOnHand" value={kind} className="size-5 accent-cellar-700" />
+                <input
+                  type="checkbox"
+                  name="extractsOnHand"
+                  value={kind}
+                  checked={values.extractsOnHand.includes(kind)}
+                  onChange={(e) => dispatch({ type: 'extract', kind, on: e.target.checked })}
+                  className="size-5 accent-cellar-700"
+                />
                 <span className="text-sm">{extractLabels[kind]}</span>
               </label>
             ))}
           </div>
         </fieldset>
         <details className="group">
-          <summary className="flex min-h-touch cursor-pointer list-none items-center gap-1 font-semibold text-cellar-700 [&::-webkit-details-marker]:hidden">
-            <ChevronRight aria-hidden className="size-5 transition-transform group-open:rotate-90" />
-            More settings: FG, kettle size and losses, shrinkage, potentials
-          </summary>
+          {moreSettingsSummary}
           <div className="mt-2 space-y-4">
             <div className="grid grid-cols-2 gap-3">
-              <QuantityField name="targetFg" kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
-              <QuantityField name="kettleCapacityL" kind="volume" label="Kettle size" hint="Optional" units={units} />
+              <CheckQuantityField {...field('targetFg')} kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
+              <CheckQuantityField {...field('kettleCapacityL')} kind="volume" label="Kettle size" hint="Optional" units={units} />
             </div>
             <div className="grid grid-cols-2 gap-3">
-              <NumberField name="coolingShrinkage" label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
-              <QuantityField name="kettleLossL" kind="volume" label="Left in the kettle" hint="Trub loss plus dead space" units={units} />
+              <CheckNumberField {...field('coolingShrinkage')} label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
+              <CheckQuantityField {...field('kettleLossL')} kind="volume" label="Left in the kettle" hint="Trub loss plus dead space" units={units} />
             </div>
             <fieldset>
               <legend className="mb-1 text-sm font-semibold text-ink-soft">Extract potentials, if yours differ ({us ? 'points per lb per gallon' : 'points × litres per kg'})</legend>
               <div className="grid grid-cols-2 gap-3">
                 {EXTRACT_KINDS.map((kind) => (
-                  <NumberField
+                  <CheckNumberField
                     key={kind}
-                    name={`potentials.${kind}`}
+                    {...field(`potentials.${kind}`)}
                     label={extractLabels[kind]}
                     unit={us ? 'ppg' : 'pts·L/kg'}
                     scale={us ? ppgScale : 1}
@@ -219,24 +283,13 @@ function Inputs({ units }: { units: Units }) {
   );
 }
 
-type Check =
-  | { ok: true; input: BoilCheckParsed; outcome: BoilCheckOutcome }
-  | { ok: false; missing: string[]; problems: { path: string; message: string }[] };
-
-function useCheck(values: LateBoilFormValues, unitSystem: Units['unitSystem']): Check {
-  return useMemo(() => {
-    const parsed = parseCheck(values);
-    if (!parsed.ok) return parsed;
-    try {
-      return { ok: true, input: parsed.input, outcome: runBoilCheck(parsed.input, { unitSystem }) };
-    } catch (error) {
-      if (!(error instanceof BrewMathError)) throw error;
-      return { ok: false, missing: [], problems: [{ path: error.field ?? '', message: error.message }] };
-    }
-  }, [values, unitSystem]);
-}
-
-function Answer({
+/**
+ * The answer beside (or, on a phone, below) the inputs. The summary of where the wort is heading
+ * follows each keystroke at once; the option cards, the costly part, follow a deferred copy of the
+ * check, so React can paint the new figures first and fill in the cards right after.
+ */
+const Answer = memo(function Answer({
+  check,
   units,
   inputsRef,
   onChoose,
@@ -244,9 +297,12 @@ function Answer({
   renderAfterOptions,
   renderBeforeOptions,
   recipe,
-}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'renderBeforeOptions' | 'recipe'> & { units: Units; inputsRef: React.RefObject<HTMLElement | null> }) {
-  const { values } = useFormikContext<LateBoilFormValues>();
-  const check = useCheck(values, units.unitSystem);
+}: Pick<LateBoilCheckProps, 'onChoose' | 'nudge' | 'renderAfterOptions' | 'renderBeforeOptions' | 'recipe'> & {
+  check: Check;
+  units: Units;
+  inputsRef: React.RefObject<HTMLElement | null>;
+}) {
+  const deferred = useDeferredValue(check);
   const [choice, setChoice] = useState<ChoiceState | null>(null);
   const mounted = useRef(true);
   useEffect(() => {
@@ -258,11 +314,12 @@ function Answer({
 
   const choose = useCallback(
     async (option: FeasibleOption) => {
-      if (!onChoose || !check.ok) return;
+      // The cards show the deferred check: a choice is saved with the check it was made from.
+      if (!onChoose || !deferred.ok) return;
       const key = optionKey(option);
       setChoice({ key, state: 'saving' });
       try {
-        const saved = await onChoose({ option, input: check.input, result: check.outcome });
+        const saved = await onChoose({ option, input: deferred.input, result: deferred.outcome });
         // A brew day without a connection keeps the decision on the device until it can be sent.
         const queued = typeof saved === 'object' && saved !== null && (saved as { status?: unknown }).status === 'queued';
         if (mounted.current) setChoice({ key, state: 'saved', message: queued ? 'Kept on this device: waiting to send.' : undefined });
@@ -270,11 +327,12 @@ function Answer({
         if (mounted.current) setChoice({ key, state: 'failed', message: (error as Error).message });
       }
     },
-    [onChoose, check],
+    [onChoose, deferred],
   );
   // Stable between keystrokes that do not change the check, so the memoised results skip those renders.
   const onPick = useMemo(() => (onChoose ? (o: FeasibleOption) => void choose(o) : undefined), [onChoose, choose]);
-  const beforeOptions = renderBeforeOptions?.();
+  // Rendered once per renderBeforeOptions, so the memoised cards are not rendered again for it on each keystroke.
+  const beforeOptions = useMemo(() => renderBeforeOptions?.(), [renderBeforeOptions]);
 
   const resultsRef = useRef<HTMLDivElement>(null);
   const answerBelow = useAnswerBelowInputs(inputsRef, resultsRef);
@@ -283,17 +341,24 @@ function Answer({
     <div className="min-w-0 space-y-4">
       <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
         {check.ok ? (
-          <CheckResults input={check.input} outcome={check.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} recipe={recipe} />
+          <div className="space-y-4">
+            <CheckSummary input={check.input} outcome={check.outcome} units={units} recipe={recipe} />
+            {deferred.ok && (
+              <Suspense fallback={null}>
+                <CheckOptions input={deferred.input} outcome={deferred.outcome} units={units} choice={choice} onChoose={onPick} beforeOptions={beforeOptions} recipe={recipe} />
+              </Suspense>
+            )}
+          </div>
         ) : (
           <NotReady missing={check.missing} problems={check.problems} />
         )}
       </div>
       {check.ok && answerBelow && <AnswerBar outcome={check.outcome} units={units} onShow={() => resultsRef.current?.scrollIntoView({ behavior: 'smooth' })} />}
       {renderAfterOptions?.(check.ok ? { input: check.input, result: check.outcome } : null)}
-      {!onChoose && (nudge ?? <SignUpNudge />)}
+      {!onChoose && (nudge ?? signUpNudge)}
     </div>
   );
-}
+});
 
 /**
  * True while the brewer is typing in the inputs and the answer is still below the screen (a
@@ -336,12 +401,14 @@ function AnswerBar({ outcome, units, onShow }: { outcome: BoilCheckOutcome; unit
           {first && <p className="text-lg font-bold leading-tight">{optionAction(first, units.unitSystem)}</p>}
         </div>
         <button type="button" onClick={onShow} className="flex min-h-touch shrink-0 items-center gap-1 rounded-lg bg-white px-3 font-semibold text-cellar-900">
-          All options <ArrowDown aria-hidden className="size-4" />
+          {allOptionsLabel}
         </button>
       </div>
     </div>
   );
 }
+
+const signUpNudge = <SignUpNudge />;
 
 function SignUpNudge() {
   return (
