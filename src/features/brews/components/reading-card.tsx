@@ -4,6 +4,7 @@ import { PHOTO_MAX_BYTES, readingKindInSentence, readingKindLabels, type BrewDev
 import { describeDeviation } from '@shared/brew-deviations';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { Figure } from '@/components/ui/figure';
 import { ApiError, NetworkError } from '@/lib/api-client';
 import { useUnits } from '@/lib/units';
 import { useDeletePhoto } from '../api/delete-photo';
@@ -37,14 +38,8 @@ export function ReadingCard({ brewId, reading, deviations, canEdit }: ReadingCar
         <span className="text-sm text-ink-faint">{timeText(reading.takenAt)}</span>
       </header>
       <dl className="mt-2 grid grid-cols-2 gap-2">
-        <div className="min-w-0">
-          <dt className="text-sm text-ink-faint">As read</dt>
-          <dd className="text-xl font-bold tabular-nums">{rawText(reading, units)}</dd>
-        </div>
-        <div className="min-w-0">
-          <dt className="text-sm text-ink-faint">Corrected</dt>
-          <dd className="text-xl font-bold tabular-nums text-cellar-900">{correctedText(reading, units)}</dd>
-        </div>
+        <Figure className="min-w-0" labelStyle="plain" size="xl" label="As read" value={rawText(reading, units)} />
+        <Figure className="min-w-0" labelStyle="plain" size="xl" tone="strong" label="Corrected" value={correctedText(reading, units)} />
       </dl>
       <p className="mt-1 text-sm text-ink-soft">
         {instrumentText(reading)}

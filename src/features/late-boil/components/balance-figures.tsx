@@ -2,6 +2,7 @@
 import { predictBoilBalance, type BalanceRecipe, type BoilCheckOutcome, type OptionBalance } from '@shared/boil-check';
 import { SRM_TO_EBC } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
+import { Figure } from '@/components/ui/figure';
 import { formatColour, useColourScale } from '@/lib/colour';
 
 /** The figures with no action, under the summary. */
@@ -22,20 +23,24 @@ export function BalanceFigures({ balance, testId }: { balance: OptionBalance; te
     balance.colourDeviationSrm === null ? null : scale === 'ebc' ? signed(balance.colourDeviationSrm * SRM_TO_EBC, 0).replace('vs', 'EBC vs') : signed(balance.colourDeviationSrm, 1).replace('vs', 'SRM vs');
   return (
     <dl className="mt-2 grid grid-cols-2 gap-2 text-sm">
-      <div className="min-w-0">
-        <dt className="text-ink-faint">Bitterness</dt>
-        <dd className="text-lg font-bold tabular-nums" data-testid={`ibu-${testId}`}>
-          {balance.ibu === null ? 'no hops' : `${balance.ibu.toFixed(1)}\u00a0IBU`}
-        </dd>
-        {balance.ibuDeviation !== null && <dd className="text-xs text-ink-soft">{signed(balance.ibuDeviation, 1).replace('vs', 'IBU vs')}</dd>}
-      </div>
-      <div className="min-w-0">
-        <dt className="text-ink-faint">Colour</dt>
-        <dd className="text-lg font-bold tabular-nums" data-testid={`colour-${testId}`}>
-          {balance.colourSrm === null ? 'malt colours unknown' : formatColour(balance.colourSrm, scale)}
-        </dd>
-        {colourGap && <dd className="text-xs text-ink-soft">{colourGap}</dd>}
-      </div>
+      <Figure
+        className="min-w-0"
+        labelStyle="plain"
+        size="lg"
+        label="Bitterness"
+        value={balance.ibu === null ? 'no hops' : `${balance.ibu.toFixed(1)}\u00a0IBU`}
+        hint={balance.ibuDeviation !== null && signed(balance.ibuDeviation, 1).replace('vs', 'IBU vs')}
+        valueTestId={`ibu-${testId}`}
+      />
+      <Figure
+        className="min-w-0"
+        labelStyle="plain"
+        size="lg"
+        label="Colour"
+        value={balance.colourSrm === null ? 'malt colours unknown' : formatColour(balance.colourSrm, scale)}
+        hint={colourGap}
+        valueTestId={`colour-${testId}`}
+      />
     </dl>
   );
 }

@@ -6,6 +6,7 @@
 import { memo, useId, useState, type ReactNode } from 'react';
 import { FieldShell, fieldAria, inputClass } from '@/components/ui/field-shell';
 import { displayDecimals, type QuantityKind, type Units } from '@/lib/units';
+import { parseDecimal } from '@/lib/decimal';
 import type { NumberValue } from './form-values';
 
 export type SetValue = (name: string, value: NumberValue) => void;
@@ -35,10 +36,7 @@ function useShownText(value: NumberValue, show: (value: NumberValue) => string, 
   return [state.text, setState] as const;
 }
 
-const parseTyped = (text: string) => {
-  const trimmed = text.trim().replace(',', '.');
-  return trimmed === '' ? null : Number(trimmed);
-};
+const parseTyped = (text: string) => parseDecimal(text) ?? null;
 
 const inputProps = (big: boolean, suffix: boolean) =>
   `py-2 pl-3 ${suffix ? 'pr-16' : 'pr-3'} tabular-nums ${big ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`;

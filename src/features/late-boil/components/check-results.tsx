@@ -21,6 +21,7 @@ import { formatAbv } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { Figure } from '@/components/ui/figure';
 import type { Units } from '@/lib/units';
 import { BalanceFigures } from './balance-figures';
 import { optionKey, orderedOptions, type ChoiceState } from './check-summary';
@@ -160,18 +161,9 @@ function OptionCard({
       </h3>
       {hint && <p className="mt-1 text-sm text-ink-soft">{hint}</p>}
       <dl className="mt-3 grid grid-cols-3 gap-2 text-sm">
-        <div className="min-w-0">
-          <dt className="text-ink-faint">OG</dt>
-          <dd className="text-xl font-bold tabular-nums">{units.format('gravity', option.endSg)}</dd>
-        </div>
-        <div className="min-w-0">
-          <dt className="text-ink-faint">Into fermenter</dt>
-          <dd className="text-xl font-bold tabular-nums">{units.format('volume', option.fermenterVolumeL)}</dd>
-        </div>
-        <div className="min-w-0">
-          <dt className="text-ink-faint">ABV</dt>
-          <dd className="text-xl font-bold tabular-nums">{formatAbv(option.abvPercent)}</dd>
-        </div>
+        <Figure className="min-w-0" labelStyle="plain" size="xl" label="OG" value={units.format('gravity', option.endSg)} />
+        <Figure className="min-w-0" labelStyle="plain" size="xl" label="Into fermenter" value={units.format('volume', option.fermenterVolumeL)} />
+        <Figure className="min-w-0" labelStyle="plain" size="xl" label="ABV" value={formatAbv(option.abvPercent)} />
       </dl>
       {balance && <BalanceFigures balance={balance} testId={optionKey(option)} />}
       {onChoose && (

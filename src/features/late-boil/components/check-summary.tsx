@@ -8,6 +8,7 @@ import type { BalanceRecipe, BoilCheckOutcome, FeasibleOption } from '@shared/bo
 import { gapInWords } from '@shared/boil-check/words';
 import { formatAbv, type ExtractKind } from '@shared/brewmath';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
+import { Figure } from '@/components/ui/figure';
 import type { Units } from '@/lib/units';
 
 const AsIsBalance = lazy(() => import('./balance-figures').then((m) => ({ default: m.AsIsBalance })));
@@ -78,16 +79,9 @@ export const CheckSummary = memo(function CheckSummary({ input, outcome, units, 
   );
 });
 
+/** One figure of the summary, the same size throughout. */
 function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
-  return (
-    <div className="min-w-0">
-      <dt className="text-ink-faint">{label}</dt>
-      <dd className="text-xl font-bold tabular-nums text-ink" data-testid={testId}>
-        {value}
-      </dd>
-      {note && <dd className="text-xs text-ink-faint">{note}</dd>}
-    </div>
-  );
+  return <Figure className="min-w-0" labelStyle="plain" size="xl" label={label} value={value} hint={note} valueTestId={testId} />;
 }
 
 export function NotReady({ missing, problems }: { missing: string[]; problems: { path: string; message: string }[] }): ReactNode {
