@@ -102,7 +102,7 @@ export const brewReadings = mysqlTable(
     recomputedFrom: jsonDoc<BrewReading['recomputedFrom']>('recomputed_from'),
     createdAt: created('created_at'),
   },
-  (t) => [index('brew_readings_brew_idx').on(t.brewId, t.takenAt)],
+  (t) => [index('brew_readings_brew_idx').on(t.brewId, t.takenAt), index('brew_readings_kind_idx').on(t.brewId, t.kind, t.takenAt)],
 );
 
 /**

@@ -1,0 +1,1 @@
+CREATE INDEX `brew_readings_kind_idx` ON `brew_readings` (`brew_id`,`kind`,`taken_at`);
