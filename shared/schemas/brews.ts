@@ -306,7 +306,12 @@ export const listBrewsQuerySchema = z.object({
   cursor: cursorSchema,
   pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int({ error: 'Page size must be a whole number.' }).min(1, { error: 'Ask for at least 1 brew day a page.' }).max(100, { error: 'Ask for at most 100 brew days a page.' }).default(20),
 });
-export type ListBrewsQuery = z.input<typeof listBrewsQuerySchema>;
+/** What a client asks for; the server fills in the defaults. */
+export interface ListBrewsQuery {
+  scope?: 'mine' | 'shared';
+  cursor?: string;
+  pageSize?: number;
+}
 
 /** How many of the latest readings the brew-day GET carries; older ones come a page at a time. */
 export const READINGS_WINDOW = 50;
@@ -316,7 +321,10 @@ export const brewReadingsQuerySchema = z.object({
   cursor: cursorSchema,
   pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int({ error: 'Page size must be a whole number.' }).min(1, { error: 'Ask for at least 1 reading a page.' }).max(200, { error: 'Ask for at most 200 readings a page.' }).default(READINGS_WINDOW),
 });
-export type BrewReadingsQuery = z.input<typeof brewReadingsQuerySchema>;
+export interface BrewReadingsQuery {
+  cursor?: string;
+  pageSize?: number;
+}
 
 export const brewNoteInputSchema = z.object({
   body: z.string({ error: 'Write the note.' }).trim().min(1, { error: 'Write the note.' }).max(2000, { error: 'Use at most 2000 characters.' }),
