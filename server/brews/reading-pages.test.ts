@@ -22,8 +22,8 @@ const mashReading = { kind: 'mash_temp', tempC: 66, takenAt: '2025-09-20T08:00:0
 async function fill(brewId: number, copies: number, step = 3) {
   const [first] = await h.ctx.db.select().from(brewReadings).where(eq(brewReadings.brewId, brewId)).orderBy(asc(brewReadings.id)).limit(1);
   await h.ctx.db.execute(
-    sql`insert into ${brewReadings} (brew_id, stage, kind, instrument_id, instrument_snapshot, raw, corrected_value, correction, warnings, volume_l, taken_at, note)
-        select brew_id, stage, kind, instrument_id, instrument_snapshot, raw, corrected_value, correction, warnings, volume_l, taken_at + interval ((s.seq div ${step}) + 1) second, note
+    sql`insert into ${brewReadings} (brew_id, stage, kind, instrument_id, instrument_snapshot, raw, corrected_value, correction, warnings, volume_l, taken_at, note, instrument_note)
+        select brew_id, stage, kind, instrument_id, instrument_snapshot, raw, corrected_value, correction, warnings, volume_l, taken_at + interval ((s.seq div ${step}) + 1) second, note, instrument_note
         from ${brewReadings} r join ${sql.raw(`seq_1_to_${copies}`)} s where r.id = ${first.id}`,
   );
 }
@@ -81,6 +81,16 @@ describe('GET /api/brews/:id with a long log', () => {
     expect(brew.og).toBe(og.corrected);
     expect(brew.readingCount).toBe(121);
     expect(og.brewDay.readingCount).toBe(121);
+  });
+
+  it('judges readings stored before they kept their instrument note the same way', async () => {
+    const scene = await makeScene(h);
+    const id = await longBrewDay(scene, 80);
+    const [firstId] = await idsInOrder(id);
+    await h.ctx.db.update(brewReadings).set({ instrumentNote: null }).where(eq(brewReadings.brewId, id));
+    const brew = (await scene.owner.agent.get(`/api/brews/${id}`).expect(200)).body;
+    expect(brew.deviations.map((d: { code: string; readingId: number | null }) => [d.code, d.readingId])).toEqual([['instrument-uncalibrated', firstId]]);
+    expect(brew.readingCount).toBe(80);
   });
 
   it('flags a pH meter past its reminder at the first reading after the reminder day, to the millisecond, however many came before', async () => {

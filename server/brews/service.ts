@@ -4,7 +4,7 @@
  * loadBrewForActor, which asks server/auth/permissions.ts; writes of several rows run in one
  * transaction.
  */
-import { and, asc, desc, eq, inArray, lt, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, inArray, isNull, lt, ne, or, sql, type SQL } from 'drizzle-orm';
 import { findDeviations } from '@shared/brew-deviations';
 import {
   stagesFor,
@@ -207,37 +207,39 @@ const fromDbTimestamp = (value: string | Date) => (value instanceof Date ? value
 
 /**
  * The readings that decide the brew day's deviations, OG and fermenter volume, and how many
- * readings there are, in one statement that sends back a handful of rows however long the log:
- * every reading of a judged kind, and for each distinct instrument snapshot its first reading and
- * its first reading past the pH meter's calibration reminder. An instrument deviation is raised
- * once, by the first reading that shows it; within one snapshot that is the first reading, or the
- * first one past the reminder, so findDeviations over these rows gives what it gives over them all.
+ * readings there are, sending back a handful of rows however long the log: every reading of a
+ * judged kind, and the first reading of each instrument call-out (readings keep theirs in
+ * `instrument_note`; one index-only pass groups them and counts). findDeviations raises an
+ * instrument deviation only at its first reading, so it gives over these rows what it gives over
+ * them all. Readings stored before the note was kept come whole, judged as before.
  */
 export async function judgedReadings(db: DbOrTx, brewId: number): Promise<{ readings: JudgedReading[]; count: number }> {
-  const snap = brewReadings.instrumentSnapshot;
-  // Past the reminder as shared/brew-deviations.ts reckons it: calibratedOn at 00:00 UTC plus reminderDays.
-  const pastReminder = sql`unix_timestamp(${brewReadings.takenAt}) > timestampdiff(second, '1970-01-01', json_value(${snap}, '$.calibratedOn')) + 86400 * json_value(${snap}, '$.reminderDays')`;
-  const [result] = await db.execute(sql`select id, kind, corrected_value, volume_l, instrument_snapshot, taken_at, total from (
-      select ${brewReadings.id} as id, ${brewReadings.kind} as kind, ${brewReadings.correctedValue} as corrected_value, ${brewReadings.volumeL} as volume_l,
-        ${snap} as instrument_snapshot, ${brewReadings.takenAt} as taken_at, count(*) over () as total,
-        row_number() over (partition by ${snap} order by ${brewReadings.takenAt}, ${brewReadings.id}) as nth,
-        row_number() over (partition by ${snap}, ${pastReminder} order by ${brewReadings.takenAt}, ${brewReadings.id}) as nth_past
-      from ${brewReadings} where ${brewReadings.brewId} = ${brewId}
-    ) r where nth = 1 or nth_past = 1 or kind in (${sql.join(judgedKinds.map((k) => sql`${k}`), sql`, `)})
-    order by taken_at, id`);
-  type Row = { id: number; kind: BrewReading['kind']; corrected_value: number; volume_l: number | null; instrument_snapshot: string | object; taken_at: string | Date; total: number | string };
-  const rows = result as unknown as Row[];
-  return {
-    count: rows.length > 0 ? Number(rows[0].total) : 0,
-    readings: rows.map((r) => ({
-      id: r.id,
-      kind: r.kind,
-      corrected: Number(r.corrected_value),
-      volumeL: r.volume_l === null ? null : Number(r.volume_l),
-      instrument: (typeof r.instrument_snapshot === 'string' ? JSON.parse(r.instrument_snapshot) : r.instrument_snapshot) as BrewReading['instrument'],
-      takenAt: fromDbTimestamp(r.taken_at).toISOString(),
-    })),
-  };
+  const r = brewReadings;
+  const groups = await db
+    .select({ note: r.instrumentNote, firstAt: sql<string | Date>`min(${r.takenAt})`.as('first_at'), n: count() })
+    .from(r)
+    .where(eq(r.brewId, brewId))
+    .groupBy(r.instrumentNote);
+  const total = groups.reduce((sum, g) => sum + Number(g.n), 0);
+  if (total === 0) return { readings: [], count: 0 };
+  const firsts = groups.filter((g) => g.note);
+  const where: SQL[] = [inArray(r.kind, judgedKinds)];
+  if (groups.some((g) => g.note === null)) where.push(isNull(r.instrumentNote));
+  for (const g of firsts) where.push(and(eq(r.instrumentNote, g.note!), eq(r.takenAt, fromDbTimestamp(g.firstAt)))!);
+  const rows = await db
+    .select({ id: r.id, kind: r.kind, corrected: r.correctedValue, volumeL: r.volumeL, instrument: r.instrumentSnapshot, takenAt: r.takenAt, note: r.instrumentNote })
+    .from(r)
+    .where(and(eq(r.brewId, brewId), or(...where)))
+    .orderBy(asc(r.takenAt), asc(r.id));
+  // Two readings may share the first time of a call-out: the lower id is the first.
+  const seen = new Set<string>();
+  const readings: JudgedReading[] = [];
+  for (const row of rows) {
+    const first = row.note ? !seen.has(row.note) : true;
+    if (row.note) seen.add(row.note);
+    if (first || judgedKinds.includes(row.kind as (typeof judgedKinds)[number])) readings.push({ ...row, takenAt: row.takenAt.toISOString() });
+  }
+  return { readings, count: total };
 }
 
 /** OG and the volume into the fermenter: the latest OG reading, and the latest one with a volume. */
