@@ -5,6 +5,7 @@ import { loadSessionUser } from '../auth/session';
 import { createDb } from '../db/client';
 import { brewReadings } from '../db/schema';
 import { createHarness, type TestHarness } from '../../tests/support/api';
+import { backfillInstrumentNotes } from './instrument-notes';
 import { getBrew } from './service';
 import { makeInstrument, makeScene, startBrewDay, testRecipe, type Scene } from './test-scene';
 
@@ -91,6 +92,13 @@ describe('GET /api/brews/:id with a long log', () => {
     const brew = (await scene.owner.agent.get(`/api/brews/${id}`).expect(200)).body;
     expect(brew.deviations.map((d: { code: string; readingId: number | null }) => [d.code, d.readingId])).toEqual([['instrument-uncalibrated', firstId]]);
     expect(brew.readingCount).toBe(80);
+
+    // The backfill gives them the note a new reading gets, and the day reads the same.
+    const [stored] = await h.ctx.db.select().from(brewReadings).where(eq(brewReadings.id, (await idsInOrder(await longBrewDay(scene, 1)))[0]));
+    expect(await backfillInstrumentNotes(h.ctx.db, { batch: 7 })).toBeGreaterThanOrEqual(80);
+    const notes = await h.ctx.db.selectDistinct({ note: brewReadings.instrumentNote }).from(brewReadings).where(eq(brewReadings.brewId, id));
+    expect(notes).toEqual([{ note: stored.instrumentNote }]);
+    expect((await scene.owner.agent.get(`/api/brews/${id}`).expect(200)).body.deviations).toEqual(brew.deviations);
   });
 
   it('flags a pH meter past its reminder at the first reading after the reminder day, to the millisecond, however many came before', async () => {
