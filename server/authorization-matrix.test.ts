@@ -424,6 +424,7 @@ const cases: Case[] = [
   // Starting a brew day needs a recipe you may read: the shared one.
   { route: 'POST /api/brews', call: (a) => a.post('/api/brews').send({ recipeId: scene.sharedRecipe }), expected: sharedRead(201) },
   ...bothBrews('GET /api/brews/:id', (a, b) => a.get(`/api/brews/${b.id}`), sharedRead(200)),
+  ...bothBrews('GET /api/brews/:id/readings', (a, b) => a.get(`/api/brews/${b.id}/readings`), sharedRead(200)),
   ...bothBrews('PATCH /api/brews/:id', (a, b) => a.patch(`/api/brews/${b.id}`).send({ notes: 'Owner notes.' }), sharedWrite(200)),
   ...[true, false].map(
     (shared): Case => ({

@@ -129,6 +129,18 @@ const stageOf: Record<ReadingKind, BrewDeviation['stage']> = {
   og: 'og',
 };
 
+/** An instrument is called out once per code: the first reading that shows it. */
+const instrumentKey = (d: BrewDeviation, r: DeviationReading) => `${d.code}:${r.instrument?.instrumentId ?? `default-${r.instrument?.kind ?? r.kind}`}`;
+
+/**
+ * What the reading's instrument would be called out for ("instrument-uncalibrated:12"), or '' when
+ * nothing: stored with each reading, so the first reading of each can be found by index.
+ */
+export function instrumentNoteKey(r: DeviationReading): string {
+  const found = instrumentDeviation(r, stageOf[r.kind]);
+  return found ? instrumentKey(found, r) : '';
+}
+
 /** Every place the brew day left its targets, in the order of the readings and decisions given. */
 export function findDeviations(input: {
   targets: DeviationTargets;
@@ -218,7 +230,7 @@ export function findDeviations(input: {
     }
     const instrument = instrumentDeviation(r, stage);
     if (instrument) {
-      const key = `${instrument.code}:${r.instrument?.instrumentId ?? `default-${r.instrument?.kind ?? r.kind}`}`;
+      const key = instrumentKey(instrument, r);
       if (!flaggedInstruments.has(key)) {
         flaggedInstruments.add(key);
         out.push(instrument);

@@ -113,12 +113,14 @@ describe('who may see and change a brew day', () => {
     const scene = await makeScene(h);
     const id = await startBrewDay(scene);
     const mine = await scene.owner.agent.get('/api/brews').expect(200);
-    expect(mine.body.map((b: { id: number }) => b.id)).toEqual([id]);
-    expect((await scene.member.agent.get('/api/brews?scope=shared').expect(200)).body).toEqual([]);
+    expect(mine.body.items.map((b: { id: number }) => b.id)).toEqual([id]);
+    expect(mine.body.nextCursor).toBeNull();
+    const none = { items: [], nextCursor: null, pageSize: 20 };
+    expect((await scene.member.agent.get('/api/brews?scope=shared').expect(200)).body).toEqual(none);
     await shareWithClub(scene, id);
     const shared = await scene.member.agent.get('/api/brews?scope=shared').expect(200);
-    expect(shared.body).toMatchObject([{ id, isOwner: false, recipeName: 'Scene Pale', targetOg: 1.05 }]);
-    expect((await scene.other.agent.get('/api/brews?scope=shared').expect(200)).body).toEqual([]);
+    expect(shared.body.items).toMatchObject([{ id, isOwner: false, recipeName: 'Scene Pale', targetOg: 1.05 }]);
+    expect((await scene.other.agent.get('/api/brews?scope=shared').expect(200)).body).toEqual(none);
   });
 
   it('shares only with clubs the owner belongs to', async () => {
@@ -205,8 +207,10 @@ describe('readings', () => {
     expect(brew.body.deviations.map((d: { code: string }) => d.code)).toEqual(['volume-low']);
     // The answer carries what the reading changed, exactly as the whole day now reads, so the
     // client updates its copy without reloading the day.
-    const { og, pitchedAt, currentStage, updatedAt, stages, deviations } = brew.body;
-    expect(res.body.brewDay).toEqual({ og, pitchedAt, currentStage, updatedAt, stages, deviations });
+    const { og, fermenterVolumeL, readingCount, pitchedAt, currentStage, updatedAt, stages, deviations } = brew.body;
+    expect(res.body.brewDay).toEqual({ og, fermenterVolumeL, readingCount, pitchedAt, currentStage, updatedAt, stages, deviations });
+    expect(fermenterVolumeL).toBe(21.5);
+    expect(readingCount).toBe(1);
   });
 
   it('words a stored hydrometer warning in the brewer’s own units', async () => {

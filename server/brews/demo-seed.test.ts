@@ -16,7 +16,7 @@ describe('the demo brew day', () => {
   it('is Priya’s finished brew day, shared with the club, with readings, a decision, OG and pitch', async () => {
     const priya = await h.signIn(demoPeople.brewer.email, demoPassword);
     const list = await priya.get('/api/brews').expect(200);
-    const summary = list.body.find((b: { name: string }) => b.name === DEMO_BREW_NAME);
+    const summary = list.body.items.find((b: { name: string }) => b.name === DEMO_BREW_NAME);
     expect(summary).toMatchObject({ status: 'fermenting', recipeName: 'Hollow Oak Harvest Pale', targetOg: 1.05 });
     const brew = (await priya.get(`/api/brews/${summary.id}`).expect(200)).body;
     expect(brew.readings.map((r: { kind: string }) => r.kind)).toEqual(['mash_temp', 'mash_ph', 'mash_temp', 'pre_boil_gravity', 'late_boil_gravity', 'og', 'pitch_temp']);
@@ -41,10 +41,10 @@ describe('the demo brew day', () => {
 
   it('can be read by the club’s mentor, who may not change it', async () => {
     const priya = await h.signIn(demoPeople.brewer.email, demoPassword);
-    const { id } = (await priya.get('/api/brews').expect(200)).body.find((b: { name: string }) => b.name === DEMO_BREW_NAME);
+    const { id } = (await priya.get('/api/brews').expect(200)).body.items.find((b: { name: string }) => b.name === DEMO_BREW_NAME);
     const ivo = await h.signIn(demoPeople.mentor.email, demoPassword);
     const shared = await ivo.get('/api/brews?scope=shared').expect(200);
-    expect(shared.body.map((b: { id: number }) => b.id)).toContain(id);
+    expect(shared.body.items.map((b: { id: number }) => b.id)).toContain(id);
     await ivo.get(`/api/brews/${id}`).expect(200);
     await ivo.patch(`/api/brews/${id}`).send({ notes: 'x' }).expect(403);
   });

@@ -5,6 +5,7 @@
  * instrument's current calibration only when the brewer asks, and logs the old and new values.
  */
 import { and, eq, isNull } from 'drizzle-orm';
+import { instrumentNoteKey } from '@shared/brew-deviations';
 import { correctReading, defaultSnapshot, type RawByKind } from '@shared/instruments';
 import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingCreated, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
 import type { InstrumentKind, InstrumentSnapshot } from '@shared/schemas/instruments';
@@ -111,6 +112,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
         volumeL,
         takenAt,
         note: body.note,
+        instrumentNote: instrumentNoteKey({ id: 0, kind: body.kind, corrected, volumeL, instrument: snapshot, takenAt: takenAt.toISOString() }),
       })
       .$returningId();
     await touchStage(tx, brewId, stage, takenAt);
@@ -176,6 +178,7 @@ export async function recomputeReading(db: Db, actor: Actor, brewId: number, rea
         warnings,
         recomputedAt: now,
         recomputedFrom: { corrected: row.correctedValue, instrument: oldSnapshot, correction: row.correction },
+        instrumentNote: instrumentNoteKey({ id: row.id, kind: row.kind, corrected, volumeL: row.volumeL, instrument: snapshot, takenAt: row.takenAt.toISOString() }),
       })
       .where(eq(brewReadings.id, readingId));
     await tx.insert(brewNotes).values({

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { idParamSchema } from '@shared/schemas/common';
 import {
   brewNoteInputSchema,
+  brewReadingsQuerySchema,
   brewSharingSchema,
   decisionInputSchema,
   listBrewsQuerySchema,
@@ -21,7 +22,7 @@ import { addDecision } from './decisions';
 import { createPhotoStore } from './photo-store';
 import { addPhoto, deletePhoto, receivePhoto, sendPhoto } from './photos';
 import { addReading, deleteReading, recomputeReading } from './readings';
-import { addNote, deleteBrew, deleteNote, getBrew, listBrews, setBrewSharing, setStage, startBrew, updateBrew } from './service';
+import { addNote, deleteBrew, deleteNote, getBrew, listBrews, listReadings, setBrewSharing, setStage, startBrew, updateBrew } from './service';
 
 /** An entry made offline keeps the time it was made on the device; otherwise the server's clock. */
 const at = (iso: string | undefined) => (iso ? new Date(iso) : undefined);
@@ -35,7 +36,7 @@ export function brewsRouter(ctx: AppContext) {
 
   router.get(
     '/',
-    handle({ query: listBrewsQuerySchema }, ({ query }, req) => listBrews(db, currentUser(req), query.scope)),
+    handle({ query: listBrewsQuerySchema }, ({ query }, req) => listBrews(db, currentUser(req), query)),
   );
 
   router.post(
@@ -79,6 +80,11 @@ export function brewsRouter(ctx: AppContext) {
       await setStage(db, currentUser(req), params.id, params.stage, body.action, at(body.at));
       return getBrew(db, currentUser(req), params.id);
     }),
+  );
+
+  router.get(
+    '/:id/readings',
+    handle({ params: idParamSchema, query: brewReadingsQuerySchema }, ({ params, query }, req) => listReadings(db, currentUser(req), params.id, query)),
   );
 
   router.post(

@@ -4,7 +4,7 @@
  * loadBrewForActor, which asks server/auth/permissions.ts; writes of several rows run in one
  * transaction.
  */
-import { and, asc, desc, eq, inArray, ne } from 'drizzle-orm';
+import { and, asc, count, desc, eq, inArray, isNull, lt, ne, or, sql, type SQL } from 'drizzle-orm';
 import { findDeviations } from '@shared/brew-deviations';
 import {
   stagesFor,
@@ -13,8 +13,10 @@ import {
   type BrewDecision,
   type BrewDeviation,
   type BrewDetail,
+  type BrewList,
   type BrewNote,
   type BrewReading,
+  type BrewReadingPage,
   type BrewSharing,
   type BrewStage,
   type BrewStageAction,
@@ -23,6 +25,7 @@ import {
   type ReadingPhoto,
   type StartBrewInput,
   type UpdateBrewInput,
+  READINGS_WINDOW,
 } from '@shared/schemas/brews';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
 import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
@@ -44,6 +47,7 @@ import {
 import { lockBrewRow } from '../db/locks';
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
+import { cursorInstant, decodeCursor, encodeCursor, isCursorId } from '../lib/cursor';
 import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import { utcDay } from '@shared/dates';
@@ -177,7 +181,7 @@ function predictedBalance(decision: BrewDecision): { predictedIbu: number | null
 }
 
 /** Where a brew day left its targets, from its readings and decisions alone (no query): the log, the review and the mentor's queue agree. */
-export function brewDayDeviations(targets: RecipeTargets, readings: readonly BrewReading[], decisions: readonly BrewDecision[]): BrewDeviation[] {
+export function brewDayDeviations(targets: RecipeTargets, readings: readonly JudgedReading[], decisions: readonly BrewDecision[]): BrewDeviation[] {
   return findDeviations({
     targets,
     readings: readings.map((r) => ({ id: r.id, kind: r.kind, corrected: r.corrected, volumeL: r.volumeL, instrument: r.instrument, takenAt: r.takenAt })),
@@ -192,58 +196,163 @@ function stagesOf(targets: RecipeTargets, stageRows: readonly (typeof brewStages
   });
 }
 
+/** What findDeviations reads of a reading. */
+export type JudgedReading = Pick<BrewReading, 'id' | 'kind' | 'corrected' | 'volumeL' | 'instrument' | 'takenAt'>;
+
+/** The kinds findDeviations judges one by one (shared/brew-deviations.ts); the others only name their instrument. */
+const judgedKinds = ['mash_temp', 'mash_ph', 'og', 'pitch_temp'] as const;
+
+/** drizzle's raw rows give TIMESTAMP columns as 'YYYY-MM-DD HH:MM:SS.fff' in UTC (the pool's timezone). */
+const fromDbTimestamp = (value: string | Date) => (value instanceof Date ? value : new Date(`${value.replace(' ', 'T')}Z`));
+
+/**
+ * The readings that decide the brew day's deviations, OG and fermenter volume, and how many
+ * readings there are, sending back a handful of rows however long the log: every reading of a
+ * judged kind, and the first reading of each instrument call-out (readings keep theirs in
+ * `instrument_note`; one index-only pass groups them and counts). findDeviations raises an
+ * instrument deviation only at its first reading, so it gives over these rows what it gives over
+ * them all. Readings stored before the note was kept come whole, judged as before.
+ */
+export async function judgedReadings(db: DbOrTx, brewId: number): Promise<{ readings: JudgedReading[]; count: number }> {
+  const r = brewReadings;
+  const groups = await db
+    .select({ note: r.instrumentNote, firstAt: sql<string | Date>`min(${r.takenAt})`.as('first_at'), n: count() })
+    .from(r)
+    .where(eq(r.brewId, brewId))
+    .groupBy(r.instrumentNote);
+  const total = groups.reduce((sum, g) => sum + Number(g.n), 0);
+  if (total === 0) return { readings: [], count: 0 };
+  const firsts = groups.filter((g) => g.note);
+  const where: SQL[] = [inArray(r.kind, judgedKinds)];
+  if (groups.some((g) => g.note === null)) where.push(isNull(r.instrumentNote));
+  for (const g of firsts) where.push(and(eq(r.instrumentNote, g.note!), eq(r.takenAt, fromDbTimestamp(g.firstAt)))!);
+  const rows = await db
+    .select({ id: r.id, kind: r.kind, corrected: r.correctedValue, volumeL: r.volumeL, instrument: r.instrumentSnapshot, takenAt: r.takenAt, note: r.instrumentNote })
+    .from(r)
+    .where(and(eq(r.brewId, brewId), or(...where)))
+    .orderBy(asc(r.takenAt), asc(r.id));
+  // Two readings may share the first time of a call-out: the lower id is the first.
+  const seen = new Set<string>();
+  const readings: JudgedReading[] = [];
+  for (const row of rows) {
+    const first = row.note ? !seen.has(row.note) : true;
+    if (row.note) seen.add(row.note);
+    if (first || judgedKinds.includes(row.kind as (typeof judgedKinds)[number])) readings.push({ ...row, takenAt: row.takenAt.toISOString() });
+  }
+  return { readings, count: total };
+}
+
+/** OG and the volume into the fermenter: the latest OG reading, and the latest one with a volume. */
+function ogFigures(readings: readonly JudgedReading[]) {
+  const ogs = readings.filter((r) => r.kind === 'og');
+  return { og: ogs.at(-1)?.corrected ?? null, fermenterVolumeL: ogs.findLast((r) => r.volumeL !== null)?.volumeL ?? null };
+}
+
+/** A readings cursor: the last reading's time and id (server/lib/cursor.ts). */
+function decodeReadingCursor(cursor: string) {
+  return decodeCursor(cursor, (parts) => {
+    const at = parts.length === 3 && parts[0] === 'readings' ? cursorInstant(parts[1]) : null;
+    return at && isCursorId(parts[2]) ? { at, id: parts[2] } : null;
+  });
+}
+
+async function photosOf(db: DbOrTx, brewId: number, readingIds: number[]) {
+  const byReading = new Map<number, ReadingPhoto[]>();
+  if (readingIds.length === 0) return byReading;
+  const rows = await db
+    .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
+    .from(readingPhotos)
+    .where(and(eq(readingPhotos.brewId, brewId), inArray(readingPhotos.readingId, readingIds)))
+    .orderBy(asc(readingPhotos.id));
+  for (const p of rows) {
+    const list = byReading.get(p.readingId) ?? [];
+    list.push({ ...p, createdAt: p.createdAt.toISOString(), url: photoUrl(brewId, p.readingId, p.id) });
+    byReading.set(p.readingId, list);
+  }
+  return byReading;
+}
+
+/**
+ * The readings before `cursor` (the latest when absent), oldest first, with their photos: read
+ * backwards along the (brew, time) index, so a page costs the same however long the log.
+ */
+export async function readingPage(db: DbOrTx, brewId: number, query: { cursor?: string; pageSize: number }): Promise<BrewReadingPage> {
+  const before = query.cursor ? decodeReadingCursor(query.cursor) : null;
+  const where: SQL[] = [eq(brewReadings.brewId, brewId)];
+  if (before) where.push(or(lt(brewReadings.takenAt, before.at), and(eq(brewReadings.takenAt, before.at), lt(brewReadings.id, before.id)))!);
+  const rows = await db
+    .select()
+    .from(brewReadings)
+    .where(and(...where))
+    .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
+    .limit(query.pageSize + 1);
+  const page = rows.slice(0, query.pageSize).reverse();
+  const photos = await photosOf(db, brewId, page.map((r) => r.id));
+  const first = page[0];
+  return {
+    items: page.map((r) => toReading(r, photos.get(r.id))),
+    nextCursor: rows.length > query.pageSize && first ? encodeCursor(['readings', first.takenAt.toISOString(), first.id]) : null,
+    pageSize: query.pageSize,
+  };
+}
+
+/** GET /api/brews/:id/readings: older readings of a brew day the actor may read. */
+export async function listReadings(db: DbOrTx, actor: Actor, id: number, query: { cursor?: string; pageSize: number }): Promise<BrewReadingPage> {
+  await loadBrewForActor(db, actor, id, 'read');
+  return readingPage(db, id, query);
+}
+
 /**
  * What a write changed on the brew day (OG, stages, deviations), without photos, notes or
  * the readings themselves: the answer to a new reading, so the client need not reload the day.
  */
 export async function brewDayChange(db: DbOrTx, brewId: number): Promise<BrewDayChange> {
-  const [[row], stageRows, readingRows, decisionRows] = await Promise.all([
+  const [[row], stageRows, judged, decisionRows] = await Promise.all([
     db.select().from(brews).where(eq(brews.id, brewId)),
     db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, brewId)),
-    db.select().from(brewReadings).where(eq(brewReadings.brewId, brewId)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
+    judgedReadings(db, brewId),
     db.select().from(brewDecisions).where(eq(brewDecisions.brewId, brewId)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
   ]);
-  const readings = readingRows.map((r) => toReading(r));
   return {
-    og: readings.findLast((r) => r.kind === 'og')?.corrected ?? null,
+    ...ogFigures(judged.readings),
+    readingCount: judged.count,
     pitchedAt: iso(row.pitchedAt),
     currentStage: row.currentStage,
     updatedAt: row.updatedAt.toISOString(),
     stages: stagesOf(row.targetsSnapshot, stageRows),
-    deviations: brewDayDeviations(row.targetsSnapshot as RecipeTargets, readings, decisionRows.map(toDecision)),
+    deviations: brewDayDeviations(row.targetsSnapshot as RecipeTargets, judged.readings, decisionRows.map(toDecision)),
   };
 }
 
-export async function getBrew(db: DbOrTx, actor: Actor, id: number): Promise<BrewDetail> {
+/**
+ * The brew day as its page opens: the latest READINGS_WINDOW readings, with the cursor for older
+ * ones; `allReadings` sends every reading (a mentor's review anchors comments to any of them).
+ */
+export async function getBrew(db: DbOrTx, actor: Actor, id: number, options: { allReadings?: boolean } = {}): Promise<BrewDetail> {
   const stored = await loadBrewForActor(db, actor, id, 'read');
-  return assembleBrew(db, actor, stored);
+  return assembleBrew(db, actor, stored, options.allReadings ?? false);
 }
 
-async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promise<BrewDetail> {
+async function allReadingsOf(db: DbOrTx, id: number): Promise<BrewReadingPage> {
+  const rows = await db.select().from(brewReadings).where(eq(brewReadings.brewId, id)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id));
+  const photos = await photosOf(db, id, rows.map((r) => r.id));
+  return { items: rows.map((r) => toReading(r, photos.get(r.id))), nextCursor: null, pageSize: rows.length };
+}
+
+async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew, allReadings: boolean): Promise<BrewDetail> {
   const id = stored.row.id;
-  const [stageRows, readingRows, photoRows, decisionRows, noteRows] = await Promise.all([
+  const [stageRows, latest, judged, decisionRows, noteRows] = await Promise.all([
     db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)),
-    db.select().from(brewReadings).where(eq(brewReadings.brewId, id)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
-    db
-      .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
-      .from(readingPhotos)
-      .where(eq(readingPhotos.brewId, id))
-      .orderBy(asc(readingPhotos.id)),
+    allReadings ? allReadingsOf(db, id) : readingPage(db, id, { pageSize: READINGS_WINDOW }),
+    judgedReadings(db, id),
     db.select().from(brewDecisions).where(eq(brewDecisions.brewId, id)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
     db.select().from(brewNotes).where(eq(brewNotes.brewId, id)).orderBy(asc(brewNotes.createdAt), asc(brewNotes.id)),
   ]);
-  const photosByReading = new Map<number, ReadingPhoto[]>();
-  for (const p of photoRows) {
-    const list = photosByReading.get(p.readingId) ?? [];
-    list.push({ ...p, createdAt: p.createdAt.toISOString(), url: photoUrl(id, p.readingId, p.id) });
-    photosByReading.set(p.readingId, list);
-  }
-  const readings = readingRows.map((r) => toReading(r, photosByReading.get(r.id)));
   const decisions = decisionRows.map(toDecision);
   const targets = stored.row.targetsSnapshot;
   const equipment = stored.row.equipmentSnapshot;
   const stages = stagesOf(targets, stageRows);
-  const og = [...readings].reverse().find((r) => r.kind === 'og')?.corrected ?? null;
+  const { og, fermenterVolumeL } = ogFigures(judged.readings);
   const resource = { ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds };
   return {
     ...toSummary(actor, stored, og),
@@ -252,10 +361,13 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
     boilOffLPerHour: stored.row.boilOffLPerHour ?? equipment.boilOffLPerHour,
     notes: stored.row.notes,
     stages,
-    readings,
+    readings: latest.items,
+    readingCount: judged.count,
+    olderReadings: latest.nextCursor,
+    fermenterVolumeL,
     decisions,
     log: noteRows.map(toNote),
-    deviations: brewDayDeviations(targets, readings, decisions),
+    deviations: brewDayDeviations(targets, judged.readings, decisions),
     permissions: {
       edit: can(actor, 'update', resource),
       share: can(actor, 'share', resource),
@@ -265,38 +377,42 @@ async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew): Promi
   };
 }
 
-/** My brew days, or those shared with my clubs by others; newest first. */
-export async function listBrews(db: DbOrTx, actor: Actor, scope: 'mine' | 'shared'): Promise<BrewSummary[]> {
-  let rows: { row: BrewRow; ownerName: string }[];
-  if (scope === 'mine') {
-    rows = await db
-      .select({ row: brews, ownerName: users.displayName })
-      .from(brews)
-      .innerJoin(users, eq(users.id, brews.ownerId))
-      .where(eq(brews.ownerId, actor.id))
-      .orderBy(desc(brews.brewedOn), desc(brews.id));
-  } else {
+/** A brew-day list cursor: the last brew day's date and id (server/lib/cursor.ts). */
+function decodeBrewCursor(scope: 'mine' | 'shared', cursor: string) {
+  return decodeCursor(cursor, (parts) => {
+    const [tag, brewedOn, id] = parts;
+    const valid = parts.length === 3 && tag === scope && typeof brewedOn === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(brewedOn) && isCursorId(id);
+    return valid ? { brewedOn, id } : null;
+  });
+}
+
+/**
+ * My brew days, or those shared with my clubs by others; newest first, a page at a time. Paged by
+ * key (brew date and id) along the owner index, "more" known from one extra row.
+ */
+export async function listBrews(db: DbOrTx, actor: Actor, query: { scope: 'mine' | 'shared'; cursor?: string; pageSize: number }): Promise<BrewList> {
+  const { scope, pageSize } = query;
+  const after = query.cursor ? decodeBrewCursor(scope, query.cursor) : null;
+  const empty: BrewList = { items: [], nextCursor: null, pageSize };
+  const where: SQL[] = [];
+  if (scope === 'mine') where.push(eq(brews.ownerId, actor.id));
+  else {
     const clubIds = actor.memberships.map((m) => m.clubId);
-    if (clubIds.length === 0) return [];
-    const shared = await db.selectDistinct({ brewId: brewClubShares.brewId }).from(brewClubShares).where(inArray(brewClubShares.clubId, clubIds));
-    if (shared.length === 0) return [];
-    rows = await db
-      .select({ row: brews, ownerName: users.displayName })
-      .from(brews)
-      .innerJoin(users, eq(users.id, brews.ownerId))
-      .where(
-        and(
-          inArray(
-            brews.id,
-            shared.map((s) => s.brewId),
-          ),
-          ne(brews.ownerId, actor.id),
-        ),
-      )
-      .orderBy(desc(brews.brewedOn), desc(brews.id));
+    if (clubIds.length === 0) return empty;
+    // A subquery, not a join, so a brew day shared with two of my clubs is listed once.
+    where.push(sql`${brews.id} in (select ${brewClubShares.brewId} from ${brewClubShares} where ${inArray(brewClubShares.clubId, clubIds)})`, ne(brews.ownerId, actor.id));
   }
-  if (rows.length === 0) return [];
-  const ids = rows.map((r) => r.row.id);
+  if (after) where.push(or(lt(brews.brewedOn, after.brewedOn), and(eq(brews.brewedOn, after.brewedOn), lt(brews.id, after.id)))!);
+  const rows = await db
+    .select({ row: brews, ownerName: users.displayName })
+    .from(brews)
+    .innerJoin(users, eq(users.id, brews.ownerId))
+    .where(and(...where))
+    .orderBy(desc(brews.brewedOn), desc(brews.id))
+    .limit(pageSize + 1);
+  const page = rows.slice(0, pageSize);
+  if (page.length === 0) return empty;
+  const ids = page.map((r) => r.row.id);
   const [shares, ogs] = await Promise.all([
     db.select().from(brewClubShares).where(inArray(brewClubShares.brewId, ids)),
     db
@@ -307,9 +423,14 @@ export async function listBrews(db: DbOrTx, actor: Actor, scope: 'mine' | 'share
   ]);
   const latestOg = new Map<number, number>();
   for (const o of ogs) latestOg.set(o.brewId, o.corrected);
-  return rows.map(({ row, ownerName }) =>
-    toSummary(actor, { row, ownerName, sharedWithClubIds: shares.filter((s) => s.brewId === row.id).map((s) => s.clubId) }, latestOg.get(row.id) ?? null),
-  );
+  const last = page[page.length - 1].row;
+  return {
+    items: page.map(({ row, ownerName }) =>
+      toSummary(actor, { row, ownerName, sharedWithClubIds: shares.filter((s) => s.brewId === row.id).map((s) => s.clubId) }, latestOg.get(row.id) ?? null),
+    ),
+    nextCursor: rows.length > pageSize ? encodeCursor([scope, last.brewedOn, last.id]) : null,
+    pageSize,
+  };
 }
 
 /** The client sends the brewer's own day; without one, the UTC day (decision 0016). */

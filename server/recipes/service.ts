@@ -26,6 +26,7 @@ import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
 import type { z } from 'zod';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
 import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
+import { BAD_CURSOR, decodeCursor, encodeCursor } from '../lib/cursor';
 import type { DbOrTx, Tx } from '../db/client';
 import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, recipeVersions, users, type RecipeRow } from '../db/schema';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
@@ -150,25 +151,15 @@ const sortColumns = {
 } as const;
 
 type SortKey = string | number;
-const BAD_CURSOR = 'This list has changed since; start again from the top.';
 
-/** The cursor is the last row's sort value and id, opaque to the client. */
-function encodeCursor(sort: RecipeSort, value: SortKey, id: number) {
-  return Buffer.from(JSON.stringify([sort, value, id]), 'utf8').toString('base64url');
-}
-
-function decodeCursor(sort: RecipeSort, cursor: string): { value: SortKey; id: number } {
-  try {
-    const parsed: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8'));
-    if (Array.isArray(parsed) && parsed.length === 3 && parsed[0] === sort && Number.isInteger(parsed[2])) {
-      const [, value, id] = parsed as [string, unknown, number];
-      const numeric = sort === 'og' || sort === 'abv';
-      if (numeric ? typeof value === 'number' && Number.isFinite(value) : typeof value === 'string') return { value: value as SortKey, id };
-    }
-  } catch {
-    // fall through to the 400 below
-  }
-  throw new BadRequest(BAD_CURSOR, { cursor: BAD_CURSOR });
+/** The cursor is the sort, the last row's sort value and its id (server/lib/cursor.ts). */
+function decodeRecipeCursor(sort: RecipeSort, cursor: string): { value: SortKey; id: number } {
+  return decodeCursor(cursor, (parts) => {
+    if (parts.length !== 3 || parts[0] !== sort || !Number.isInteger(parts[2])) return null;
+    const [, value, id] = parts as [string, unknown, number];
+    const numeric = sort === 'og' || sort === 'abv';
+    return (numeric ? typeof value === 'number' && Number.isFinite(value) : typeof value === 'string') ? { value: value as SortKey, id } : null;
+  });
 }
 
 /** drizzle's raw rows give TIMESTAMP columns as 'YYYY-MM-DD HH:MM:SS.fff' in UTC (the pool's timezone). */
@@ -198,7 +189,7 @@ interface ListRow {
 export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<typeof listRecipesQuerySchema>): Promise<RecipeList> {
   const key = sortColumns[query.sort];
   const dir = query.dir ?? (query.sort === 'updated' ? 'desc' : 'asc');
-  const cursor = query.cursor ? decodeCursor(query.sort, query.cursor) : null;
+  const cursor = query.cursor ? decodeRecipeCursor(query.sort, query.cursor) : null;
   const take = query.pageSize + 1;
   const filters: SQL[] = [];
   if (query.q) {
@@ -265,7 +256,7 @@ export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<type
   }));
   const last = page[page.length - 1];
   const lastKey = last && (query.sort === 'updated' ? fromDbTimestamp(last.updated_at).toISOString() : (last.sort_key as SortKey));
-  const nextCursor = rows.length > query.pageSize && last ? encodeCursor(query.sort, query.sort === 'og' || query.sort === 'abv' ? Number(lastKey) : String(lastKey), last.id) : null;
+  const nextCursor = rows.length > query.pageSize && last ? encodeCursor([query.sort, query.sort === 'og' || query.sort === 'abv' ? Number(lastKey) : String(lastKey), last.id]) : null;
   return { items, nextCursor, pageSize: query.pageSize };
 }
 export type { ListRecipesQuery };

@@ -16,7 +16,7 @@ beforeAll(async () => {
 describe('the demo review', () => {
   it('has Ivo’s comments on Priya’s shared brew day: one on the late-boil decision, one on the day', async () => {
     const ivo = await h.signIn(demoPeople.mentor.email, demoPassword);
-    const shared = (await ivo.get('/api/brews?scope=shared').expect(200)).body;
+    const shared = (await ivo.get('/api/brews?scope=shared').expect(200)).body.items;
     const priyas = shared.find((b: { name: string }) => b.name === DEMO_BREW_NAME);
     const review = (await ivo.get(`/api/brews/${priyas.id}/review`).expect(200)).body;
     const [decision] = review.brew.decisions;

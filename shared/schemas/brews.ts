@@ -297,9 +297,34 @@ export const stageParamsSchema = z.object({
   stage: z.enum(brewStages, { error: 'Unknown stage: use mash, souring, boil, chill or og.' }),
 });
 
+/** A page cursor as the server handed it out (`nextCursor`); opaque to the client. */
+const cursorSchema = z.string().max(300, { error: 'This list has changed since; start again from the top.' }).optional();
+
+/** GET /api/brews: newest first, paged by key like the recipe list; ask again with `cursor: nextCursor`. */
 export const listBrewsQuerySchema = z.object({
   scope: z.enum(['mine', 'shared'], { error: 'Choose mine or shared.' }).default('mine'),
+  cursor: cursorSchema,
+  pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int({ error: 'Page size must be a whole number.' }).min(1, { error: 'Ask for at least 1 brew day a page.' }).max(100, { error: 'Ask for at most 100 brew days a page.' }).default(20),
 });
+/** What a client asks for; the server fills in the defaults. */
+export interface ListBrewsQuery {
+  scope?: 'mine' | 'shared';
+  cursor?: string;
+  pageSize?: number;
+}
+
+/** How many of the latest readings the brew-day GET carries; older ones come a page at a time. */
+export const READINGS_WINDOW = 50;
+
+/** GET /api/brews/:id/readings: the readings before `cursor` (the brew day's `olderReadings`, or a page's `nextCursor`). */
+export const brewReadingsQuerySchema = z.object({
+  cursor: cursorSchema,
+  pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int({ error: 'Page size must be a whole number.' }).min(1, { error: 'Ask for at least 1 reading a page.' }).max(200, { error: 'Ask for at most 200 readings a page.' }).default(READINGS_WINDOW),
+});
+export interface BrewReadingsQuery {
+  cursor?: string;
+  pageSize?: number;
+}
 
 export const brewNoteInputSchema = z.object({
   body: z.string({ error: 'Write the note.' }).trim().min(1, { error: 'Write the note.' }).max(2000, { error: 'Use at most 2000 characters.' }),
@@ -506,16 +531,42 @@ export interface BrewDetail extends BrewSummary {
   boilOffLPerHour: number;
   notes: string;
   stages: BrewStageState[];
+  /** The latest readings (at most READINGS_WINDOW), oldest first; older ones from GET /api/brews/:id/readings. */
   readings: BrewReading[];
+  /** How many readings the brew day has in all. */
+  readingCount: number;
+  /** The cursor for the readings before `readings`; null when they are all here. */
+  olderReadings: string | null;
+  /** Litres measured with the latest OG reading that has a volume: the wort into the fermenter. */
+  fermenterVolumeL: number | null;
   decisions: BrewDecision[];
   log: BrewNote[];
+  /** Judged on the server from every reading, not only those sent. */
   deviations: BrewDeviation[];
   permissions: { edit: boolean; share: boolean; delete: boolean; comment: boolean };
+}
+
+/** One page of brew days, newest first; no total is counted. */
+export interface BrewList {
+  items: BrewSummary[];
+  /** Null on the last page. */
+  nextCursor: string | null;
+  pageSize: number;
+}
+
+/** One page of older readings, oldest first. */
+export interface BrewReadingPage {
+  items: BrewReading[];
+  /** The cursor for the readings before these; null at the first reading. */
+  nextCursor: string | null;
+  pageSize: number;
 }
 
 /** What a new reading changed on its brew day: the client updates its copy from this instead of reloading the whole day. */
 export interface BrewDayChange {
   og: number | null;
+  fermenterVolumeL: number | null;
+  readingCount: number;
   pitchedAt: string | null;
   currentStage: BrewStage;
   updatedAt: string;

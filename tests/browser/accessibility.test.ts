@@ -71,7 +71,7 @@ async function signedIn(browser: Browser, email: string, viewport: { width: numb
 
 async function ids(context: BrowserContext) {
   const recipes = ((await (await context.request.get('/api/recipes?scope=mine')).json()) as { items: { id: number }[] }).items;
-  const brews = (await (await context.request.get('/api/brews')).json()) as { id: number; name: string }[];
+  const brews = ((await (await context.request.get('/api/brews?pageSize=100')).json()) as { items: { id: number; name: string }[] }).items;
   const clubs = (await (await context.request.get('/api/clubs')).json()) as { id: number; name: string }[];
   return {
     recipeId: recipes[0].id,

@@ -143,8 +143,8 @@ describe('a brew day on a phone-sized window', () => {
   it('prints the brew sheet within the width of A4 and US Letter, without the navigation', async () => {
     const { page, context } = await newPage(b.browser);
     await signInViaApi(context, 'priya@hollow-oak.example', 'wortwise-demo');
-    const list = await context.request.get('/api/brews');
-    const demo = ((await list.json()) as { id: number; name: string }[]).find((x) => x.name === 'Hollow Oak Harvest Pale, first batch');
+    const list = await context.request.get('/api/brews?pageSize=100');
+    const demo = ((await list.json()) as { items: { id: number; name: string }[] }).items.find((x) => x.name === 'Hollow Oak Harvest Pale, first batch');
     expect(demo).toBeDefined();
     await page.goto(`/brews/${demo!.id}/log`);
     await page.getByRole('list', { name: 'Timeline' }).waitFor();

@@ -100,9 +100,18 @@ export const brewReadings = mysqlTable(
     note: text('note').notNull(),
     recomputedAt: stamp('recomputed_at'),
     recomputedFrom: jsonDoc<BrewReading['recomputedFrom']>('recomputed_from'),
+    /**
+     * What its instrument is called out for (instrumentNoteKey in shared/brew-deviations.ts), '' for
+     * nothing; null on readings stored before it was kept, which are then judged from their snapshot.
+     */
+    instrumentNote: varchar('instrument_note', { length: 80 }),
     createdAt: created('created_at'),
   },
-  (t) => [index('brew_readings_brew_idx').on(t.brewId, t.takenAt)],
+  (t) => [
+    index('brew_readings_brew_idx').on(t.brewId, t.takenAt),
+    index('brew_readings_kind_idx').on(t.brewId, t.kind, t.takenAt),
+    index('brew_readings_note_idx').on(t.brewId, t.instrumentNote, t.takenAt),
+  ],
 );
 
 /**

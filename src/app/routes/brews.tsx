@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQuery } from '@tanstack/react-query';
 import { useNavigate } from 'react-router';
-import { brewsQueryOptions, useBrews } from '@/features/brews/api/list-brews';
+import { brewPagesQueryOptions, useBrewPages } from '@/features/brews/api/list-brews';
 import { BrewList } from '@/features/brews/components/brew-list';
 import { StartBrewForm } from '@/features/brews/components/start-brew-form';
 import { recipesQueryOptions } from '@/features/recipes/api/list-recipes';
@@ -13,7 +13,7 @@ const startableRecipes = recipesQueryOptions({ scope: 'all', sort: 'name', dir: 
 
 export function loader(queryClient: QueryClient) {
   return async () => {
-    void queryClient.prefetchQuery(brewsQueryOptions('mine'));
+    void queryClient.prefetchInfiniteQuery(brewPagesQueryOptions('mine'));
     void queryClient.prefetchQuery(startableRecipes);
     return null;
   };
@@ -21,8 +21,8 @@ export function loader(queryClient: QueryClient) {
 
 export function Component() {
   const navigate = useNavigate();
-  const mine = useBrews('mine');
-  const shared = useBrews('shared');
+  const mine = useBrewPages('mine');
+  const shared = useBrewPages('shared');
   const recipes = useQuery(startableRecipes);
   return (
     <>
@@ -45,7 +45,7 @@ export function Component() {
           <h2 id="mine-heading" className="text-lg font-bold text-cellar-900">
             My brew days
           </h2>
-          {mine.isPending ? <Loading /> : mine.error ? <Notice tone="error">{mine.error.message}</Notice> : <BrewList brews={mine.data} empty="No brew days yet." />}
+          {mine.isPending ? <Loading /> : mine.error ? <Notice tone="error">{mine.error.message}</Notice> : <BrewList pages={mine} empty="No brew days yet." />}
         </section>
         <section aria-labelledby="shared-heading" className="space-y-2">
           <h2 id="shared-heading" className="text-lg font-bold text-cellar-900">
@@ -56,7 +56,7 @@ export function Component() {
           ) : shared.error ? (
             <Notice tone="error">{shared.error.message}</Notice>
           ) : (
-            <BrewList brews={shared.data} empty="No club member has shared a brew day with you yet." />
+            <BrewList pages={shared} empty="No club member has shared a brew day with you yet." />
           )}
         </section>
       </div>

@@ -15,12 +15,12 @@ const statusWords: Record<string, string> = {
 
 export function Component() {
   const { data: me } = useMe();
-  const brews = useBrews('mine');
+  const brews = useBrews({ scope: 'mine', pageSize: 3 });
   const units = useUnits();
   // Straight after creating an account it is a first visit; every later one is a return.
   const firstVisit = (useLocation().state as { firstVisit?: boolean } | null)?.firstVisit === true;
   if (!me) return null;
-  const latest = (brews.data ?? []).slice(0, 3);
+  const latest = brews.data?.items ?? [];
   return (
     <>
       <PageHeader

@@ -13,7 +13,7 @@ export function useStartBrew() {
     mutationFn: startBrew,
     onSuccess: (brew) => {
       queryClient.setQueryData(brewKeys.detail(brew.id), brew);
-      return queryClient.invalidateQueries({ queryKey: brewKeys.list('mine') });
+      return queryClient.invalidateQueries({ queryKey: brewKeys.lists() });
     },
   });
 }

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { PHOTO_MAX_BYTES, photoMimeTypes, type ReadingPhoto } from '@shared/schemas/brews';
 import { api, ApiError } from '@/lib/api-client';
 import { sendOrQueue } from '@/lib/offline/send';
-import { brewKeys } from './keys';
+import { updateCachedReading } from './reading-cache';
 
 /** The server decides the type from the file's bytes; the name and type sent here are not trusted. */
 export const uploadPhoto = (brewId: number, readingId: number, file: File) => {
@@ -40,6 +40,11 @@ export function useUploadPhoto(brewId: number) {
         takenAt,
       });
     },
-    onSuccess: (outcome) => outcome.status === 'sent' && queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) }),
+    // A photo moves no deviation: it joins its reading on the page, without the day asked for again.
+    onSuccess: (outcome) => {
+      if (outcome.status !== 'sent') return;
+      const photo = outcome.data;
+      updateCachedReading(queryClient, brewId, photo.readingId, (r) => ({ ...r, photos: [...r.photos.filter((p) => p.id !== photo.id), photo] }));
+    },
   });
 }

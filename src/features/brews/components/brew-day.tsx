@@ -8,10 +8,12 @@ import { cautionTexts } from '@/components/ui/cautions';
 import { Notice } from '@/components/ui/notice';
 import { NetworkError } from '@/lib/api-client';
 import { useUnits, type Units } from '@/lib/units';
+import { useLoadedReadings } from '../api/older-readings';
 import { useSetStage } from '../api/set-stage';
 import { DecisionCard } from './decision-card';
 import { timeText } from './describe';
 import { NoteForm } from './note-form';
+import { OlderReadings } from './older-readings';
 import { ReadingCard } from './reading-card';
 import { ReadingForm } from './reading-form';
 import { SouringProgress } from './souring-progress';
@@ -157,7 +159,8 @@ interface BrewDayProps {
 export function BrewDay({ brew, instruments, selected, onSelect, boilCheck }: BrewDayProps) {
   const units = useUnits();
   const stage = brew.stages.find((s) => s.stage === selected)!;
-  const readings = brew.readings.filter((r) => readingStage[r.kind] === selected);
+  const loaded = useLoadedReadings(brew);
+  const readings = loaded.readings.filter((r) => readingStage[r.kind] === selected);
   const canEdit = brew.permissions.edit;
   // The late-boil check carries its own hot-wort caution; say it once.
   const caution = selected === 'boil' && boilCheck ? undefined : cautions[selected];
@@ -196,9 +199,10 @@ export function BrewDay({ brew, instruments, selected, onSelect, boilCheck }: Br
 
         {selected === 'souring' && brew.targets.souringTargetPh != null && <SouringProgress readings={readings} targetPh={brew.targets.souringTargetPh} />}
 
-        {readings.length > 0 && (
+        {(readings.length > 0 || loaded.hasOlder) && (
           <section aria-label="Readings" className="space-y-2">
             <h3 className="text-lg font-bold text-cellar-900">Readings</h3>
+            <OlderReadings loaded={loaded} />
             {readings.map((r) => (
               <ReadingCard key={r.id} brewId={brew.id} reading={r} deviations={brew.deviations} canEdit={canEdit} />
             ))}

@@ -1,29 +1,48 @@
+import { ChevronDown } from 'lucide-react';
 import { Link } from 'react-router';
-import { brewStageLabels, brewStatusLabels, type BrewSummary } from '@shared/schemas/brews';
+import { brewStageLabels, brewStatusLabels, type BrewList as BrewPage } from '@shared/schemas/brews';
+import { Button } from '@/components/ui/button';
 import { useUnits } from '@/lib/units';
 
-/** Brew days, newest first: each a big link to its page. */
-export function BrewList({ brews, empty }: { brews: readonly BrewSummary[]; empty: string }) {
+interface BrewPages {
+  data: { pages: readonly BrewPage[] };
+  hasNextPage: boolean;
+  isFetchingNextPage: boolean;
+  fetchNextPage: () => Promise<unknown>;
+}
+
+/** Brew days, newest first, a page at a time: each a big link to its page; "Show more" adds the next page below. */
+export function BrewList({ pages, empty }: { pages: BrewPages; empty: string }) {
   const units = useUnits();
+  const brews = pages.data.pages.flatMap((p) => p.items);
   if (brews.length === 0) return <p className="text-ink-soft">{empty}</p>;
   return (
-    <ul className="space-y-2">
-      {brews.map((b) => (
-        <li key={b.id}>
-          <Link to={`/brews/${b.id}`} className="block min-h-touch rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100 hover:ring-cellar-300">
-            <span className="flex flex-wrap items-baseline justify-between gap-2">
-              <span className="text-lg font-bold text-cellar-900">{b.name}</span>
-              <span className="text-sm text-ink-faint">{b.brewedOn}</span>
-            </span>
-            <span className="mt-1 block text-sm text-ink-soft">
-              {b.isOwner ? '' : `${b.ownerName} · `}
-              {b.status === 'brewing' ? `${brewStatusLabels[b.status]}: ${brewStageLabels[b.currentStage].toLowerCase()}` : brewStatusLabels[b.status]} · target OG{' '}
-              {units.format('gravity', b.targetOg)}
-              {b.og !== null && <> · OG {units.format('gravity', b.og)}</>}
-            </span>
-          </Link>
-        </li>
-      ))}
-    </ul>
+    <div className="space-y-2">
+      <ul className="space-y-2">
+        {brews.map((b) => (
+          <li key={b.id}>
+            <Link to={`/brews/${b.id}`} className="block min-h-touch rounded-xl bg-white p-4 shadow-sm ring-1 ring-cellar-100 hover:ring-cellar-300">
+              <span className="flex flex-wrap items-baseline justify-between gap-2">
+                <span className="text-lg font-bold text-cellar-900">{b.name}</span>
+                <span className="text-sm text-ink-faint">{b.brewedOn}</span>
+              </span>
+              <span className="mt-1 block text-sm text-ink-soft">
+                {b.isOwner ? '' : `${b.ownerName} · `}
+                {b.status === 'brewing' ? `${brewStatusLabels[b.status]}: ${brewStageLabels[b.currentStage].toLowerCase()}` : brewStatusLabels[b.status]} · target OG{' '}
+                {units.format('gravity', b.targetOg)}
+                {b.og !== null && <> · OG {units.format('gravity', b.og)}</>}
+              </span>
+            </Link>
+          </li>
+        ))}
+      </ul>
+      {pages.hasNextPage && (
+        <div className="flex justify-center">
+          <Button variant="secondary" disabled={pages.isFetchingNextPage} onClick={() => void pages.fetchNextPage()} icon={<ChevronDown aria-hidden className="size-5" />}>
+            {pages.isFetchingNextPage ? 'Loading more…' : 'Show more brew days'}
+          </Button>
+        </div>
+      )}
+    </div>
   );
 }

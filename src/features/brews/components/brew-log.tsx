@@ -1,12 +1,14 @@
 import { Trash2 } from 'lucide-react';
-import type { ReactNode } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import { describeDeviation } from '@shared/brew-deviations';
 import { brewStageLabels, brewStatusLabels, readingKindInSentence, readingKindLabels, type BrewDetail, type BrewNote, type BrewReading } from '@shared/schemas/brews';
 import { Notice } from '@/components/ui/notice';
 import { useUnits, type Units } from '@/lib/units';
 import { useDeleteNote } from '../api/delete-note';
+import { useLoadedReadings } from '../api/older-readings';
 import { BrewChart } from './brew-chart';
 import { DecisionCard } from './decision-card';
+import { OlderReadings } from './older-readings';
 import { correctedText, correctionText, instrumentText, rawText, timeText, deviationTitle } from './describe';
 import './brew-sheet.css';
 
@@ -108,8 +110,12 @@ export function measuredIntoFermenter(brew: Pick<BrewDetail, 'readings'>): numbe
 export function BrewLog({ brew }: { brew: BrewDetail }) {
   const units = useUnits();
   const t = brew.targets;
-  const entries = timelineEntries(brew, units);
-  const fermenterVolume = measuredIntoFermenter(brew);
+  // The latest readings came with the day; older ones join a page at a time, when asked for.
+  const loaded = useLoadedReadings(brew);
+  const shown = useMemo(() => ({ ...brew, readings: loaded.readings }), [brew, loaded.readings]);
+  const entries = useMemo(() => timelineEntries(shown, units), [shown, units]);
+  // A copy kept on the device before the server sent the figure: all its readings came with it.
+  const fermenterVolume = brew.fermenterVolumeL !== undefined ? brew.fermenterVolumeL : measuredIntoFermenter(brew);
   return (
     <div className="brew-sheet space-y-6">
       <section aria-label="Targets" className="sheet-block grid grid-cols-2 gap-3 rounded-xl bg-white p-4 ring-1 ring-cellar-100 sm:grid-cols-4">
@@ -145,13 +151,15 @@ export function BrewLog({ brew }: { brew: BrewDetail }) {
         <h2 id="chart-heading" className="text-xl font-bold text-cellar-900">
           Gravity and volume through the day
         </h2>
-        <BrewChart brew={brew} />
+        <BrewChart brew={shown} />
+        {loaded.hasOlder && <p className="text-sm text-ink-soft">The chart draws the readings shown in the timeline below.</p>}
       </section>
 
       <section aria-labelledby="timeline-heading" className="space-y-2">
         <h2 id="timeline-heading" className="text-xl font-bold text-cellar-900">
           Timeline
         </h2>
+        <OlderReadings loaded={loaded} />
         {entries.length === 0 ? (
           <p className="text-ink-soft">Nothing logged yet.</p>
         ) : (

@@ -1,6 +1,6 @@
 import { Camera, RefreshCw, Trash2 } from 'lucide-react';
 import { useId, useRef, useState } from 'react';
-import { PHOTO_MAX_BYTES, readingKindInSentence, readingKindLabels, type BrewDeviation, type BrewReading } from '@shared/schemas/brews';
+import { PHOTO_MAX_BYTES, readingKindInSentence, readingKindLabels, type BrewDeviation, type BrewReading, type ReadingPhoto } from '@shared/schemas/brews';
 import { describeDeviation } from '@shared/brew-deviations';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -67,7 +67,7 @@ export function ReadingCard({ brewId, reading, deviations, canEdit }: ReadingCar
         <ul className="mt-3 flex flex-wrap gap-2">
           {reading.photos.map((p) => (
             <li key={p.id}>
-              <Photo brewId={brewId} url={p.url} canDelete={canEdit} label={`Photo of the ${readingKindInSentence(reading.kind)} reading`} />
+              <Photo brewId={brewId} photo={p} canDelete={canEdit} label={`Photo of the ${readingKindInSentence(reading.kind)} reading`} />
             </li>
           ))}
         </ul>
@@ -103,8 +103,9 @@ export function ReadingCard({ brewId, reading, deviations, canEdit }: ReadingCar
   );
 }
 
-function Photo({ brewId, url, label, canDelete }: { brewId: number; url: string; label: string; canDelete: boolean }) {
+function Photo({ brewId, photo, label, canDelete }: { brewId: number; photo: ReadingPhoto; label: string; canDelete: boolean }) {
   const remove = useDeletePhoto(brewId);
+  const { url } = photo;
   return (
     <figure className="relative">
       <a href={url} target="_blank" rel="noreferrer">
@@ -115,7 +116,7 @@ function Photo({ brewId, url, label, canDelete }: { brewId: number; url: string;
           type="button"
           className="no-print absolute right-0 top-0 flex min-h-touch min-w-touch items-center justify-center rounded-lg bg-white/80 text-alert-700"
           aria-label="Delete this photo"
-          onClick={() => remove.mutate({ url })}
+          onClick={() => remove.mutate(photo)}
         >
           <Trash2 aria-hidden className="size-5" />
         </button>
