@@ -220,7 +220,7 @@ describe('stopping sharing hides the brew day at once', () => {
       await reader.agent.get(`/api/recipes/${s.recipeId}`).expect(404);
     }
     const queue = await s.mentor.agent.get('/api/reviews/queue').expect(200);
-    expect(queue.body.map((q: { brewId: number }) => q.brewId)).not.toContain(brewId);
+    expect(queue.body.items.map((q: { brewId: number }) => q.brewId)).not.toContain(brewId);
     // The owner still has everything, comments included.
     expect((await s.owner.agent.get(`/api/brews/${brewId}/comments`).expect(200)).body).toHaveLength(1);
   });

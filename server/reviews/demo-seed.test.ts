@@ -41,7 +41,7 @@ describe('the demo review', () => {
 
   it('leaves Jonah’s shared porter waiting in Ivo’s queue, with its deviations counted', async () => {
     const ivo = await h.signIn(demoPeople.mentor.email, demoPassword);
-    const queue = (await ivo.get('/api/reviews/queue').expect(200)).body;
+    const queue = (await ivo.get('/api/reviews/queue').expect(200)).body.items;
     const names = queue.map((q: { brewName: string }) => q.brewName);
     expect(names).toContain(DEMO_WAITING_BREW_NAME);
     expect(names).not.toContain(DEMO_BREW_NAME);

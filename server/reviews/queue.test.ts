@@ -57,14 +57,14 @@ describe('GET /api/reviews/queue', () => {
     const expected = [newest.brewId, repliedByBrewer.brewId, oldest.brewId];
     for (const mentor of [s.mentor.agent, secondMentor]) {
       const queue = await mentor.get('/api/reviews/queue').expect(200);
-      const ids = queue.body.map((q: { brewId: number }) => q.brewId);
+      const ids = queue.body.items.map((q: { brewId: number }) => q.brewId);
       expect(ids.filter((id: number) => [...expected, reviewed.brewId, unshared.brewId, own.body.id].includes(id))).toEqual(
         // The second mentor reviews the first mentor's brew day, shared just now.
         mentor === secondMentor ? [own.body.id, ...expected] : expected,
       );
     }
 
-    const queue = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body;
+    const queue = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.items;
     const item = queue.find((q: { brewId: number }) => q.brewId === newest.brewId);
     expect(item).toMatchObject({
       brewName: 'Scene Pale',
@@ -85,16 +85,41 @@ describe('GET /api/reviews/queue', () => {
 
     // Commenting takes it off the queue.
     await s.mentor.agent.post(`/api/brews/${newest.brewId}/comments`).send({ body: 'On target apart from the late boil.' }).expect(201);
-    const after = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.map((q: { brewId: number }) => q.brewId);
+    const after = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.items.map((q: { brewId: number }) => q.brewId);
     expect(after).not.toContain(newest.brewId);
     expect(after).toContain(oldest.brewId);
+  });
+
+  it('comes a page at a time, newest share first, each brew day once, with a cursor for the next page', async () => {
+    const s = await makeReviewScene(h);
+    const ids: number[] = [];
+    for (let i = 0; i < 23; i++) ids.push((await sharedBrewWithDecision(s)).brewId);
+    // Shares an hour apart, the last made the newest.
+    for (const [i, id] of ids.entries()) await sharedHoursAgo(id, s.club.id, ids.length - i);
+    const newestFirst = [...ids].reverse();
+
+    const first = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body;
+    expect(first.items.map((q: { brewId: number }) => q.brewId)).toEqual(newestFirst.slice(0, 20));
+    expect(typeof first.nextCursor).toBe('string');
+    const second = (await s.mentor.agent.get('/api/reviews/queue').query({ cursor: first.nextCursor }).expect(200)).body;
+    expect(second.items.map((q: { brewId: number }) => q.brewId)).toEqual(newestFirst.slice(20));
+    expect(second.nextCursor).toBeNull();
+
+    const small = (await s.mentor.agent.get('/api/reviews/queue').query({ pageSize: 10 }).expect(200)).body;
+    expect(small.items).toHaveLength(10);
+    // A cursor of another list, or one tampered with, is a 400 under the field, never a 500.
+    const bad = await s.mentor.agent.get('/api/reviews/reviewed').query({ cursor: first.nextCursor }).expect(400);
+    expect(bad.body.fields.cursor).toMatch(/start again from the top/);
+    await s.mentor.agent.get('/api/reviews/queue').query({ cursor: 'not-a-cursor' }).expect(400);
+    const tooMany = await s.mentor.agent.get('/api/reviews/queue').query({ pageSize: 101 }).expect(400);
+    expect(tooMany.body.fields.pageSize).toBe('Ask for at most 100 brew days a page.');
   });
 
   it('is empty for people who mentor no club it is shared with; anonymous visitors get 401', async () => {
     const s = await makeReviewScene(h);
     await sharedBrewWithDecision(s);
     for (const agent of [s.member.agent, s.otherMentor.agent, s.other.agent, s.owner.agent]) {
-      expect((await agent.get('/api/reviews/queue').expect(200)).body).toEqual([]);
+      expect((await agent.get('/api/reviews/queue').expect(200)).body.items).toEqual([]);
     }
     await request(h.app).get('/api/reviews/queue').expect(401);
   });
@@ -106,7 +131,7 @@ describe('GET /api/reviews/reviewed', () => {
     const first = await sharedBrewWithDecision(s);
     const second = await sharedBrewWithDecision(s);
     const waiting = await sharedBrewWithDecision(s);
-    const queued = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body;
+    const queued = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.items;
     const before = queued.find((q: { brewId: number }) => q.brewId === first.brewId);
 
     await s.mentor.agent.post(`/api/brews/${first.brewId}/comments`).send({ body: 'Good mash.' }).expect(201);
@@ -115,20 +140,20 @@ describe('GET /api/reviews/reviewed', () => {
     await new Promise((r) => setTimeout(r, 1100));
     await s.mentor.agent.post(`/api/brews/${first.brewId}/comments`).send({ body: 'And the late boil.' }).expect(201);
 
-    const reviewed = (await s.mentor.agent.get('/api/reviews/reviewed').expect(200)).body;
+    const reviewed = (await s.mentor.agent.get('/api/reviews/reviewed').expect(200)).body.items;
     const ids = reviewed.map((r: { brewId: number }) => r.brewId);
     expect(ids.filter((id: number) => [first.brewId, second.brewId, waiting.brewId].includes(id))).toEqual([first.brewId, second.brewId]);
     const item = reviewed.find((r: { brewId: number }) => r.brewId === first.brewId);
     const { reviewedAt, ...summary } = item;
     expect(summary).toEqual(before);
     expect(Date.parse(reviewedAt)).toBeGreaterThan(Date.parse(reviewed.find((r: { brewId: number }) => r.brewId === second.brewId).reviewedAt));
-    const queue = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.map((q: { brewId: number }) => q.brewId);
+    const queue = (await s.mentor.agent.get('/api/reviews/queue').expect(200)).body.items.map((q: { brewId: number }) => q.brewId);
     expect(queue).toContain(waiting.brewId);
     expect(queue).not.toContain(first.brewId);
 
     // Members, mentors of other clubs and the brewer have no reviewed list of this club.
     for (const agent of [s.member.agent, s.otherMentor.agent, s.owner.agent]) {
-      const list = (await agent.get('/api/reviews/reviewed').expect(200)).body.map((r: { brewId: number }) => r.brewId);
+      const list = (await agent.get('/api/reviews/reviewed').expect(200)).body.items.map((r: { brewId: number }) => r.brewId);
       expect(list).not.toContain(first.brewId);
     }
     await request(h.app).get('/api/reviews/reviewed').expect(401);
@@ -144,8 +169,8 @@ describe('the queue and the reviewed list read each table once, whatever their l
       const actor = (await loadSessionUser(h.ctx.db, s.mentor.user.id))!;
       const count = async (list: typeof listQueue) => {
         statements = 0;
-        const items = await list(counted.db, actor);
-        return { statements, length: items.length };
+        const page = await list(counted.db, actor);
+        return { statements, length: page.items.length };
       };
       for (let i = 0; i < 2; i++) await sharedBrewWithDecision(s);
       const reviewedBrew = await sharedBrewWithDecision(s);

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { brewParamsSchema, commentInputSchema, commentParamsSchema } from '@shared/schemas/comments';
+import { brewParamsSchema, commentInputSchema, commentParamsSchema, reviewListQuerySchema } from '@shared/schemas/comments';
 import { currentUser, requireUser } from '../auth/session';
 import type { AppContext } from '../context';
 import { handle } from '../lib/handle';
@@ -16,13 +16,13 @@ export function reviewsRouter(ctx: AppContext) {
   router.get(
     '/reviews/queue',
     requireUser,
-    handle({}, (_v, req) => listQueue(db, currentUser(req))),
+    handle({ query: reviewListQuerySchema }, ({ query }, req) => listQueue(db, currentUser(req), query)),
   );
 
   router.get(
     '/reviews/reviewed',
     requireUser,
-    handle({}, (_v, req) => listReviewed(db, currentUser(req))),
+    handle({ query: reviewListQuerySchema }, ({ query }, req) => listReviewed(db, currentUser(req), query)),
   );
 
   router.get(

@@ -9,6 +9,7 @@ import { and, asc, desc, eq, inArray, max, ne } from 'drizzle-orm';
 import { findFermentationDeviations } from '@shared/brew-deviations';
 import { readingKindLabels } from '@shared/schemas/brews';
 import type { RecipeTargets } from '@shared/schemas/recipes';
+import type { Page } from '@shared/schemas/common';
 import type { BrewComment, BrewReview, CommentBody, CommentCreated, CommentTarget, ReviewDeviation, ReviewedItem, ReviewQueueItem } from '@shared/schemas/comments';
 import { can, canDeleteComment, canSeeComment, type Actor, type OwnedResource } from '../auth/permissions';
 import { brewDayDeviations, getBrew, loadBrewForActor, toDecision, toReading, type StoredBrew } from '../brews/service';
@@ -16,6 +17,7 @@ import type { AppContext } from '../context';
 import type { Db, DbOrTx } from '../db/client';
 import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, packagingRecords, users, type CommentRow } from '../db/schema';
 import { assembleLog, fermentationDeviations } from '../fermentation/service';
+import { decodeCursor, encodeCursor, isCursorId } from '../lib/cursor';
 import { Forbidden, NotFound } from '../lib/errors';
 import { sendAfterCommit } from '../mail/mailer';
 import { mentorCommentNotice } from '../mail/templates';
@@ -23,8 +25,8 @@ import { mentorCommentNotice } from '../mail/templates';
 /** The one answer for a brew day the commenter cannot see (any more): the same whether it was unshared, never shared or never existed. */
 export const NO_LONGER_SHARED = 'This brew day is no longer shared with your club.';
 const MENTORS_ONLY = 'Only the club’s mentors comment on a shared brew day; members read along.';
-/** A mentor's queue shows at most this many brew days, newest first. */
-export const QUEUE_LIMIT = 100;
+/** A page of the mentor's queue (or reviewed list) holds this many brew days unless asked otherwise. */
+export const REVIEW_PAGE_SIZE = 20;
 
 const resourceOf = (stored: StoredBrew): OwnedResource => ({ ownerId: stored.row.ownerId, sharedWithClubIds: stored.sharedWithClubIds });
 
@@ -225,6 +227,7 @@ export async function getReview(db: DbOrTx, actor: Actor, brewId: number): Promi
 
 interface ClubShare {
   sharedAt: Date;
+  brewedOn: string;
   /** Latest comment of a mentor of these clubs (reviewed list only). */
   reviewedAt: Date | null;
   clubs: { id: number; name: string }[];
@@ -241,7 +244,7 @@ async function mentorShares(db: DbOrTx, actor: Actor) {
   const mentorClubIds = actor.memberships.filter((m) => m.role === 'mentor').map((m) => m.clubId);
   if (mentorClubIds.length === 0) return { waiting, reviewed };
   const shares = await db
-    .select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId, clubName: clubs.name, sharedAt: brewClubShares.sharedAt })
+    .select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId, clubName: clubs.name, sharedAt: brewClubShares.sharedAt, brewedOn: brews.brewedOn })
     .from(brewClubShares)
     .innerJoin(brews, eq(brews.id, brewClubShares.brewId))
     .innerJoin(clubs, eq(clubs.id, brewClubShares.clubId))
@@ -266,7 +269,7 @@ async function mentorShares(db: DbOrTx, actor: Actor) {
     const key = `${s.brewId}:${s.clubId}`;
     const lastAt = done.get(key);
     const into = done.has(key) ? reviewed : waiting;
-    const entry = into.get(s.brewId) ?? { sharedAt: s.sharedAt, reviewedAt: null, clubs: [] };
+    const entry = into.get(s.brewId) ?? { sharedAt: s.sharedAt, brewedOn: s.brewedOn, reviewedAt: null, clubs: [] };
     if (s.sharedAt > entry.sharedAt) entry.sharedAt = s.sharedAt;
     if (lastAt && (!entry.reviewedAt || lastAt > entry.reviewedAt)) entry.reviewedAt = lastAt;
     entry.clubs.push({ id: s.clubId, name: s.clubName });
@@ -319,32 +322,76 @@ async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubSha
   return items;
 }
 
-const newestShareFirst = (a: ReviewQueueItem, b: ReviewQueueItem) =>
-  b.sharedAt.localeCompare(a.sharedAt) || b.brewedOn.localeCompare(a.brewedOn) || b.brewId - a.brewId;
+/** A list's order as a key per brew day: ISO instants and dates compared as text, newest first, then the id. */
+type OrderKey = [...string[], number];
+
+const afterInOrder = (key: OrderKey, cursor: OrderKey) => {
+  for (let i = 0; i < key.length; i++) {
+    if (key[i] === cursor[i]) continue;
+    return typeof key[i] === 'number' ? (key[i] as number) < (cursor[i] as number) : (key[i] as string) < (cursor[i] as string);
+  }
+  return false;
+};
+
+/**
+ * One page of the brew days in `entries`, in the order `keyOf` gives (newest first): the share
+ * rows are only ids and dates, so the ordering and the cursor are worked out on them, and the
+ * brew days themselves (with their readings) are read for one page only, so a queue of 100 costs
+ * what a queue of 20 does. The cursor is the last brew day's key (server/lib/cursor.ts).
+ */
+async function reviewPage<T extends ReviewQueueItem>(
+  db: DbOrTx,
+  actor: Actor,
+  list: 'queue' | 'reviewed',
+  entries: Map<number, ClubShare>,
+  keyOf: (brewId: number, entry: ClubShare) => OrderKey,
+  query: { cursor?: string; pageSize: number },
+  toItem: (item: ReviewQueueItem, entry: ClubShare) => T,
+): Promise<Page<T>> {
+  const ordered = [...entries].map(([brewId, entry]) => ({ brewId, entry, key: keyOf(brewId, entry) }));
+  ordered.sort((a, b) => (afterInOrder(a.key, b.key) ? 1 : afterInOrder(b.key, a.key) ? -1 : 0));
+  const keyLength = list === 'queue' ? 3 : 4;
+  const after = query.cursor
+    ? decodeCursor(query.cursor, (parts) =>
+        parts.length === keyLength + 1 && parts[0] === list && isCursorId(parts.at(-1)) && parts.slice(1, -1).every((p) => typeof p === 'string') ? (parts.slice(1) as OrderKey) : null,
+      )
+    : null;
+  const rest = after ? ordered.filter((o) => afterInOrder(o.key, after)) : ordered;
+  const page = rest.slice(0, query.pageSize);
+  const chosen = new Map(page.map((o) => [o.brewId, o.entry]));
+  const items = (await queueItems(db, actor, chosen)).map((item) => toItem(item, chosen.get(item.brewId)!));
+  const rank = new Map(page.map((o, i) => [o.brewId, i]));
+  items.sort((a, b) => rank.get(a.brewId)! - rank.get(b.brewId)!);
+  const last = page.at(-1);
+  return { items, nextCursor: rest.length > page.length && last ? encodeCursor([list, ...last.key]) : null };
+}
 
 /**
  * The brew days shared with clubs where the actor is a mentor that no mentor of that club has
- * commented on yet, newest share first. Anyone who mentors no club gets an empty list (not a 403):
- * the Reviews page is in everyone's navigation and says what it lists. A constant number of
- * statements whatever the queue's length (server/reviews/queue.test.ts counts them).
+ * commented on yet, newest share first, a page at a time. Anyone who mentors no club gets an empty
+ * list (not a 403): the Reviews page is in everyone's navigation and says what it lists. A constant
+ * number of statements whatever the queue's length (server/reviews/queue.test.ts counts them).
  */
-export async function listQueue(db: DbOrTx, actor: Actor): Promise<ReviewQueueItem[]> {
+export async function listQueue(db: DbOrTx, actor: Actor, query: { cursor?: string; pageSize: number } = { pageSize: REVIEW_PAGE_SIZE }): Promise<Page<ReviewQueueItem>> {
   const { waiting } = await mentorShares(db, actor);
-  const newest = new Map([...waiting].slice(0, QUEUE_LIMIT));
-  return (await queueItems(db, actor, newest)).sort(newestShareFirst);
+  return reviewPage(db, actor, 'queue', waiting, (brewId, e) => [e.sharedAt.toISOString(), e.brewedOn, brewId], query, (item) => item);
 }
 
 /**
  * The brew days a mentor of the actor's clubs has already commented on, latest comment first, so
  * a brew day that left the queue can be found again. Same statement count as the queue.
  */
-export async function listReviewed(db: DbOrTx, actor: Actor): Promise<ReviewedItem[]> {
+export async function listReviewed(db: DbOrTx, actor: Actor, query: { cursor?: string; pageSize: number } = { pageSize: REVIEW_PAGE_SIZE }): Promise<Page<ReviewedItem>> {
   const { reviewed } = await mentorShares(db, actor);
-  const latest = new Map([...reviewed].sort(([, a], [, b]) => b.reviewedAt!.getTime() - a.reviewedAt!.getTime()).slice(0, QUEUE_LIMIT));
-  const items = await queueItems(db, actor, latest);
-  return items
-    .map((i) => ({ ...i, reviewedAt: latest.get(i.brewId)!.reviewedAt!.toISOString() }))
-    .sort((a, b) => b.reviewedAt.localeCompare(a.reviewedAt) || newestShareFirst(a, b));
+  return reviewPage(
+    db,
+    actor,
+    'reviewed',
+    reviewed,
+    (brewId, e) => [e.reviewedAt!.toISOString(), e.sharedAt.toISOString(), e.brewedOn, brewId],
+    query,
+    (item, e) => ({ ...item, reviewedAt: e.reviewedAt!.toISOString() }),
+  );
 }
 
 function toQueueItem(stored: StoredBrew, og: number | null, entry: ClubShare, deviationCount: number): ReviewQueueItem {

@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import type { FermentationDeviation } from '../brew-deviations';
-import { idSchema } from './common';
+import { idSchema, pageCursorSchema, pageSizeSchema } from './common';
 import type { BrewDetail, BrewDeviation } from './brews';
 import type { FermentationReading, FermentationVerdict, PackagingRecord, TemperatureSummary } from './fermentation';
 
@@ -106,6 +106,17 @@ export interface ReviewQueueItem {
   targetOg: number;
   /** Brew day and fermentation together, as on the review page. */
   deviationCount: number;
+}
+
+/** GET /api/reviews/queue and /api/reviews/reviewed: a page at a time, in the list's own order. */
+export const reviewListQuerySchema = z.object({
+  cursor: pageCursorSchema,
+  pageSize: pageSizeSchema('brew day', 100, 20),
+});
+/** What a client asks for; the server fills in the defaults. */
+export interface ReviewListQuery {
+  cursor?: string;
+  pageSize?: number;
 }
 
 /** One brew day a mentor of your clubs has commented on: it left the queue and is found here again. */

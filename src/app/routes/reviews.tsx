@@ -8,8 +8,8 @@ import { Notice } from '@/components/ui/notice';
 
 export function loader(queryClient: QueryClient) {
   return async () => {
-    void queryClient.prefetchQuery(queueQueryOptions());
-    void queryClient.prefetchQuery(reviewedQueryOptions());
+    void queryClient.prefetchInfiniteQuery(queueQueryOptions());
+    void queryClient.prefetchInfiniteQuery(reviewedQueryOptions());
     return null;
   };
 }
@@ -25,8 +25,8 @@ function ReviewedSection() {
         Reviewed
       </h2>
       <p className="mb-3 text-sm text-ink-soft">Brew days a mentor of your club has already commented on, latest comment first.</p>
-      {reviewed.data.length > 0 ? (
-        <ReviewQueue items={reviewed.data} label="Reviewed" />
+      {reviewed.data.pages[0].items.length > 0 ? (
+        <ReviewQueue pages={reviewed} label="Reviewed" />
       ) : (
         <p className="text-ink-soft">None yet: a brew day moves here once a mentor comments on it.</p>
       )}
@@ -48,8 +48,8 @@ export function Component() {
         <Loading label="Loading the brew days waiting for you…" />
       ) : queue.error ? (
         <Notice tone="error">{queue.error.message}</Notice>
-      ) : queue.data.length > 0 ? (
-        <ReviewQueue items={queue.data} />
+      ) : queue.data.pages[0].items.length > 0 ? (
+        <ReviewQueue pages={queue} />
       ) : mentorOf.length === 0 ? (
         <Notice title="You are not a mentor in any club">
           A club’s organiser names its mentors. Mentors read the brew days members share with the club, see where each left its targets, and
