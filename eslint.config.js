@@ -21,6 +21,15 @@ const featureZones = features.map((feature) => ({
   message: 'A feature never imports another feature; compose them in src/app.',
 }));
 
+/** Libraries wrapped once, so nothing else imports them. */
+const oneWayImports = {
+  patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
+  paths: [
+    { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts; a router takes it from ctx.limits.' },
+    { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },
+  ],
+};
+
 export default tseslint.config(
   { ignores: ['dist', '.data', 'node_modules', 'migrations', 'coverage'] },
   js.configs.recommended,
@@ -57,16 +66,23 @@ export default tseslint.config(
     // One way to do each thing: CSV goes through server/lib/csv.ts (one reader, one writer, one
     // formula guard); every rate limit is built in server/lib/rate-limit.ts, from configuration.
     files: ['**/*.{ts,tsx}'],
-    ignores: ['server/lib/csv.ts', 'server/lib/rate-limit.ts'],
+    ignores: ['server/lib/csv.ts', 'server/lib/rate-limit.ts', 'server/*/router.ts'],
+    rules: { 'no-restricted-imports': ['error', oneWayImports] },
+  },
+  {
+    // A router is thin: it validates, checks who is signed in and calls a service. It never touches
+    // tables or the pool; its one argument is the RouterContext (server/context.ts).
+    files: ['server/*/router.ts'],
     rules: {
       'no-restricted-imports': [
         'error',
         {
-          patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
-          paths: [
-            { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts and take its middleware as a router argument.' },
-            { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },
+          patterns: [
+            ...oneWayImports.patterns,
+            { group: ['**/db/schema', '**/db/schema/*', '**/db/client'], message: 'A router never touches tables: call a service (server/<feature>/service.ts).' },
+            { group: ['drizzle-orm', 'drizzle-orm/*', 'mysql2', 'mysql2/*'], message: 'A router never touches tables: call a service (server/<feature>/service.ts).' },
           ],
+          paths: oneWayImports.paths,
         },
       ],
     },

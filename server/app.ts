@@ -10,11 +10,11 @@ import { adminRouter } from './admin/router';
 import { authRouter } from './auth/router';
 import { brewsRouter } from './brews/router';
 import { loadUser } from './auth/session';
-import type { AppContext } from './context';
+import type { AppContext, RouterContext } from './context';
 import { clubsRouter, invitationsRouter } from './clubs/router';
 import { calcRouter } from './calc/router';
 import { equipmentRouter } from './equipment/router';
-import { fermentationRouter } from './fermentation/router';
+import { fermentationCsvRouter, fermentationRouter, fermentationSettingsRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
 import { crossSiteGuard, noStoreWhenSignedIn } from './lib/cross-site';
@@ -23,12 +23,12 @@ import { idempotency } from './lib/idempotency';
 import { createRateLimits } from './lib/rate-limit';
 import { passwordResetRouter } from './password-reset/router';
 import { recipesRouter } from './recipes/router';
-import { reviewsRouter } from './reviews/router';
+import { brewReviewRouter, commentsRouter, reviewsRouter } from './reviews/router';
 
 const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
 
 export function createApp(ctx: AppContext) {
-  const { env, db, pool } = ctx;
+  const { env, db } = ctx;
   const clientDist = env.CLIENT_DIST ?? defaultClientDist;
   const app = express();
   app.disable('x-powered-by');
@@ -41,25 +41,31 @@ export function createApp(ctx: AppContext) {
   app.use(express.json({ limit: '100kb' }));
   app.use(cookieParser());
 
-  const limits = createRateLimits(env, ctx.redis);
+  // The whole URL map of the API: every router takes the one RouterContext and answers under its
+  // own prefix. Those under /brews/:brewId come before the brew-day router, which they extend.
+  const rc: RouterContext = { ...ctx, limits: createRateLimits(env, ctx.redis) };
   const api = express.Router();
   api.use(crossSiteGuard(env));
-  api.use('/health', healthRouter(pool));
-  api.use('/calc', calcRouter(limits.calc));
+  api.use('/health', healthRouter(rc));
+  api.use('/calc', calcRouter(rc));
   api.use(loadUser(db, env));
   api.use(noStoreWhenSignedIn);
   api.use(idempotency(db));
-  api.use('/auth/password-reset', passwordResetRouter(ctx, limits.passwordReset));
-  api.use('/auth', authRouter(db, env, limits.auth));
-  api.use('/clubs', clubsRouter(ctx, limits.clubInvite));
-  api.use('/invitations', invitationsRouter(ctx, limits.invitationAccept));
-  api.use('/admin', adminRouter(ctx));
-  api.use('/recipes', recipesRouter(ctx));
-  api.use('/instruments', instrumentsRouter(db));
-  api.use('/equipment', equipmentRouter(db));
-  api.use(fermentationRouter(ctx));
-  api.use(reviewsRouter(ctx));
-  api.use('/brews', brewsRouter(ctx));
+  api.use('/auth/password-reset', passwordResetRouter(rc));
+  api.use('/auth', authRouter(rc));
+  api.use('/clubs', clubsRouter(rc));
+  api.use('/invitations', invitationsRouter(rc));
+  api.use('/admin', adminRouter(rc));
+  api.use('/recipes', recipesRouter(rc));
+  api.use('/instruments', instrumentsRouter(rc));
+  api.use('/equipment', equipmentRouter(rc));
+  api.use('/fermentation', fermentationSettingsRouter(rc));
+  api.use('/reviews', reviewsRouter(rc));
+  api.use('/brews/:brewId/fermentation.csv', fermentationCsvRouter(rc));
+  api.use('/brews/:brewId/fermentation', fermentationRouter(rc));
+  api.use('/brews/:brewId/review', brewReviewRouter(rc));
+  api.use('/brews/:brewId/comments', commentsRouter(rc));
+  api.use('/brews', brewsRouter(rc));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,4 +1,4 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import {
   acceptInvitationSchema,
   clubParamsSchema,
@@ -11,14 +11,15 @@ import {
   updateClubSchema,
 } from '@shared/schemas/clubs';
 import { currentUser, issueSession, loadSessionUser, requireUser, toMe } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { acceptInvitation, inviteToClub, listPendingInvitations, previewInvitation, revokeInvitation } from './invitations';
 import { createClub, getClub, leaveClub, listMyClubs, removeMember, setMemberRole, updateClub } from './service';
 
 /** `/api/clubs`: a brewer's clubs, their members and the organisers' invitations. */
-export function clubsRouter(ctx: AppContext, inviteLimiter: RequestHandler) {
+export function clubsRouter(ctx: RouterContext) {
   const { db } = ctx;
+  const inviteLimiter = ctx.limits.clubInvite;
   const router = Router();
   router.use(requireUser);
 
@@ -103,8 +104,9 @@ export function clubsRouter(ctx: AppContext, inviteLimiter: RequestHandler) {
 }
 
 /** `/api/invitations/:token`: public, because the person invited may have no account yet. */
-export function invitationsRouter(ctx: AppContext, acceptLimiter: RequestHandler) {
+export function invitationsRouter(ctx: RouterContext) {
   const { db, env } = ctx;
+  const acceptLimiter = ctx.limits.invitationAccept;
   const router = Router();
 
   router.get(

@@ -1,14 +1,15 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import { tokenParamsSchema } from '@shared/schemas/clubs';
 import { passwordResetRequestedMessage, passwordResetRequestSchema, passwordResetSchema } from '@shared/schemas/password-reset';
 import { issueSession, loadSessionUser, toMe } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { checkResetToken, requestPasswordReset, resetPassword } from './service';
 
 /** `/api/auth/password-reset`: ask for a link, check it, use it. */
-export function passwordResetRouter(ctx: AppContext, limiter: RequestHandler) {
+export function passwordResetRouter(ctx: RouterContext) {
   const { db, env } = ctx;
+  const limiter = ctx.limits.passwordReset;
   const router = Router();
 
   router.post(
