@@ -9,7 +9,9 @@ import { handle } from '../lib/handle';
 import { singleUpload } from '../lib/upload';
 import { exportCsv } from './csv-export';
 import { importReadings, parseMapping, previewImport } from './csv-import';
-import { addReading, deletePackaging, deleteReading, getLog, recordPackaging, remindersEnabledFor, setRemindersEnabled } from './service';
+import { deletePackaging, recordPackaging } from './packaging';
+import { addReading, deleteReading } from './readings';
+import { getLog, remindersEnabledFor, setRemindersEnabled } from './service';
 
 const idNum = idSchema;
 const brewParams = z.object({ brewId: idNum });

@@ -4,7 +4,7 @@
  * schemas, so a comment too long is refused with the same words on both sides.
  */
 import { z } from 'zod';
-import type { FermentationDeviation } from '../brew-deviations';
+import type { FermentationDeviation } from '../fermentation-deviations';
 import { idSchema } from './common';
 import type { BrewDetail, BrewDeviation } from './brews';
 import type { FermentationReading, FermentationVerdict, PackagingRecord, TemperatureSummary } from './fermentation';
