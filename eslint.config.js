@@ -30,6 +30,12 @@ const oneWayImports = {
   ],
 };
 
+/** A number a brewer types, with its messages: built in shared/schemas/fields.ts only. */
+const numberBuilderRule = {
+  selector: "CallExpression[callee.object.name='z'][callee.property.name='number'][arguments.length>0]",
+  message: 'Build a number field with num (or checkedNumber, ranged, boundedNumber) from shared/schemas/fields.ts.',
+};
+
 export default tseslint.config(
   { ignores: ['dist', '.data', 'node_modules', 'migrations', 'coverage'] },
   js.configs.recommended,
@@ -89,14 +95,16 @@ export default tseslint.config(
   },
   {
     // One way to count days: spans use DAY_MS, calendar days localDay/utcDay (shared/dates.ts, decision 0011);
-    // one schema for an id in a URL (idSchema in shared/schemas/common.ts).
+    // one schema for an id in a URL (idSchema in shared/schemas/common.ts); one number builder (num,
+    // and checkedNumber, ranged, boundedNumber on top of it, in shared/schemas/fields.ts).
     files: ['**/*.{ts,tsx}'],
-    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', '**/*.test.ts', '**/*.test.tsx'],
+    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', 'shared/schemas/fields.ts', '**/*.test.ts', '**/*.test.tsx'],
     rules: {
       'no-restricted-syntax': [
         'error',
         { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
         { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+        numberBuilderRule,
       ],
     },
   },
@@ -110,6 +118,7 @@ export default tseslint.config(
         { selector: "Property[key.name='queryKey'] > ArrayExpression", message: "Build query keys in the feature's api/keys.ts." },
         { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
         { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+        numberBuilderRule,
       ],
     },
   },

@@ -180,8 +180,7 @@ export const minutesLeftSchema = num('the minutes left', 'Minutes left')
   .refine((v) => v <= L.minutesLeft.max, { error: `Minutes left above ${L.minutesLeft.max} is longer than any boil. Check the number.`, abort: true });
 
 const noteSchema = z.string({ error: 'The note must be text.' }).trim().max(1000, { error: 'Use at most 1000 characters.' }).default('');
-const instrumentIdSchema = z
-  .number({ error: 'Pick an instrument.' })
+const instrumentIdSchema = num({ notNumber: 'Pick an instrument.' })
   .int({ error: 'Pick an instrument.' })
   .positive({ error: 'Pick an instrument.' })
   .nullable()
@@ -266,7 +265,7 @@ const dateSchema = z
   .pipe(z.iso.date({ error: 'Enter a real calendar date.' }));
 
 export const startBrewSchema = z.object({
-  recipeId: z.number({ error: 'Choose a recipe.' }).int({ error: 'Choose a recipe.' }).positive({ error: 'Choose a recipe.' }),
+  recipeId: num({ notNumber: 'Choose a recipe.' }).int({ error: 'Choose a recipe.' }).positive({ error: 'Choose a recipe.' }),
   /** Defaults to the recipe's name and today's date. */
   name: nameSchema.optional(),
   brewedOn: dateSchema.optional(),
@@ -357,7 +356,7 @@ export type DecisionInput = z.input<typeof decisionInputSchema>;
 
 export const brewSharingSchema = z.object({
   clubIds: z
-    .array(z.number({ error: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
+    .array(num({ notNumber: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
     .max(50, { error: 'Share with at most 50 clubs.' }),
 });
 export type BrewSharingInput = z.input<typeof brewSharingSchema>;

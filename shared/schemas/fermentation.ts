@@ -110,8 +110,7 @@ export const fermenterTempSchema = ranged(
 
 const noteSchema = z.string({ error: 'The note must be text.' }).trim().max(500, { error: 'Use at most 500 characters.' }).default('');
 
-const instrumentIdSchema = z
-  .number({ error: 'Pick an instrument.' })
+const instrumentIdSchema = num({ notNumber: 'Pick an instrument.' })
   .int({ error: 'Pick an instrument.' })
   .positive({ error: 'Pick an instrument.' })
   .nullable()
@@ -235,7 +234,7 @@ export const csvFieldLabels: Record<CsvField, string> = {
   note: 'Note',
 };
 
-const columnSchema = z.number({ error: 'Choose a column.' }).int().min(0).max(199, { error: 'Choose a column.' }).nullable().default(null);
+const columnSchema = num({ notNumber: 'Choose a column.' }).int().min(0).max(199, { error: 'Choose a column.' }).nullable().default(null);
 
 /** Which file column (0-based) feeds each of our fields; null when the file has none. */
 export const csvMappingSchema = z

@@ -9,9 +9,9 @@ import { abvPercent, apparentAttenuation } from '../brewmath/abv';
 import { boilOffRateLPerHour } from '../brewmath/boil';
 import { BrewMathError } from '../brewmath/errors';
 import { estimateOg, POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG, type FermentableKind } from '../brewmath/extract';
-import { LITRES_PER_US_GALLON } from '../brewmath/units';
 import { buToGu, ibuTinseth } from '../brewmath/bitterness';
 import { BEER_COLOUR_MAX_SRM, BEER_COLOUR_MIN_SRM, MALT_COLOUR_MAX_LOVIBOND, moreyColour, SRM_TO_EBC } from '../brewmath/colour';
+import { boundedNumber, num, showF, showGal, type NumberRule } from './fields';
 
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
@@ -73,69 +73,25 @@ export const RECIPE_LIMITS = {
 // ---------------------------------------------------------------------------------------------
 // Number fields with a brewer's messages
 
-const gal = (litres: number) => `${Number((litres / LITRES_PER_US_GALLON).toFixed(2))} gal`;
-const fahrenheit = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
-
-interface NumberRule {
-  /** Lower-case noun phrase: "the batch volume". */
-  what: string;
-  /** Sentence-start label: "Batch volume". */
-  label: string;
-  min: number;
-  /** When true, the minimum itself is refused ("must be more than 0"). */
-  exclusiveMin?: boolean;
-  max: number;
-  /** Said when the value is out of range. */
-  rangeMessage: string;
-  integer?: boolean;
-  /** A temperature, not an amount: below the minimum is out of range, not "negative". */
-  rangeOnly?: boolean;
-}
-
-function numberField(rule: NumberRule) {
-  // One message per field, and no "abort": an aborted issue would stop the cross-field checks
-  // below from running, and the form should show every problem at once.
-  return z
-    .number({
-      error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${rule.what}.` : `${rule.label} must be a number.`),
-    })
-    .superRefine((v, ctx) => {
-      const message = numberProblem(rule, v);
-      if (message) ctx.addIssue({ code: 'custom', message, input: v });
-    });
-}
-
-function numberProblem(rule: NumberRule, v: number): string | null {
-  if (rule.min === 0 && !rule.rangeOnly) {
-    if (v < 0) return `${rule.label} cannot be negative.`;
-    if (rule.exclusiveMin && v === 0) return `${rule.label} must be more than 0.`;
-  } else if (rule.exclusiveMin ? v <= rule.min : v < rule.min) {
-    return rule.rangeMessage;
-  }
-  if (v > rule.max) return rule.rangeMessage;
-  if (rule.integer && !Number.isInteger(v)) return `${rule.label} must be a whole number.`;
-  return null;
-}
-
 function volumeField(what: string, label: string) {
-  return numberField({
+  return boundedNumber({
     what,
     label,
     min: 0,
     exclusiveMin: true,
     max: RECIPE_LIMITS.volumeL,
-    rangeMessage: `${label} above ${RECIPE_LIMITS.volumeL} L (${gal(RECIPE_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
+    rangeMessage: `${label} above ${RECIPE_LIMITS.volumeL} L (${showGal(RECIPE_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
   });
 }
 
 function temperatureField(what: string, label: string, minC: number, maxC: number) {
-  return numberField({
+  return boundedNumber({
     what,
     label,
     min: minC,
     max: maxC,
     rangeOnly: true,
-    rangeMessage: `${label} must be between ${minC} and ${maxC} °C (${fahrenheit(minC)} and ${fahrenheit(maxC)}).`,
+    rangeMessage: `${label} must be between ${minC} and ${maxC} °C (${showF(minC)} and ${showF(maxC)}).`,
   });
 }
 
@@ -146,7 +102,7 @@ function textField(what: string, max: number, required: boolean) {
 
 /** A number the author may leave empty: null (or absent) means "not set". */
 function optionalNumberField(rule: NumberRule) {
-  return numberField(rule).nullable().default(null);
+  return boundedNumber(rule).nullable().default(null);
 }
 
 const ebc = (srmOrLovibond: number) => `${Number((srmOrLovibond * SRM_TO_EBC).toFixed(0))} EBC`;
@@ -157,7 +113,7 @@ const ebc = (srmOrLovibond: number) => `${Number((srmOrLovibond * SRM_TO_EBC).to
 export const fermentableInputSchema = z.object({
   name: textField('a name for this fermentable', 120, true),
   kind: z.enum(fermentableKinds, { error: 'Choose grain, dry malt extract, liquid malt extract, sugar or other.' }),
-  amountKg: numberField({
+  amountKg: boundedNumber({
     what: 'the amount',
     label: 'Amount',
     min: 0,
@@ -165,7 +121,7 @@ export const fermentableInputSchema = z.object({
     max: RECIPE_LIMITS.fermentableKg,
     rangeMessage: `Amount above ${RECIPE_LIMITS.fermentableKg} kg is more than Wortwise handles. Check the number.`,
   }),
-  potentialPointsLPerKg: numberField({
+  potentialPointsLPerKg: boundedNumber({
     what: 'the extract potential',
     label: 'Potential',
     min: POTENTIAL_MIN_POINTS_L_PER_KG,
@@ -185,7 +141,7 @@ export type FermentableInput = z.input<typeof fermentableInputSchema>;
 
 export const hopInputSchema = z.object({
   name: textField('a name for this hop', 120, true),
-  amountG: numberField({
+  amountG: boundedNumber({
     what: 'the amount',
     label: 'Amount',
     min: 0,
@@ -193,14 +149,14 @@ export const hopInputSchema = z.object({
     max: RECIPE_LIMITS.hopG,
     rangeMessage: `Amount above ${RECIPE_LIMITS.hopG} g is more than Wortwise handles. Check the number.`,
   }),
-  minutes: numberField({
+  minutes: boundedNumber({
     what: 'the minutes it boils',
     label: 'Minutes',
     min: 0,
     max: RECIPE_LIMITS.boilMinutes,
     rangeMessage: `Minutes must be between 0 and ${RECIPE_LIMITS.boilMinutes}.`,
   }),
-  alphaAcidPercent: numberField({
+  alphaAcidPercent: boundedNumber({
     what: 'the alpha acid',
     label: 'Alpha acid',
     min: 0,
@@ -213,7 +169,7 @@ export type HopInput = z.input<typeof hopInputSchema>;
 
 export const mashStepInputSchema = z.object({
   tempC: temperatureField('the step temperature', 'Step temperature', 20, 100),
-  minutes: numberField({
+  minutes: boundedNumber({
     what: 'the step length',
     label: 'Step length',
     min: 0,
@@ -240,21 +196,21 @@ const recipeShape = {
   batchVolumeL: volumeField('the batch volume into the fermenter', 'Batch volume'),
   preBoilVolumeL: volumeField('the pre-boil volume', 'Pre-boil volume'),
   postBoilVolumeL: volumeField('the post-boil volume', 'Post-boil volume'),
-  boilMinutes: numberField({
+  boilMinutes: boundedNumber({
     what: 'the boil length',
     label: 'Boil length',
     min: 0,
     max: RECIPE_LIMITS.boilMinutes,
     rangeMessage: `Boil length must be between 0 and ${RECIPE_LIMITS.boilMinutes} minutes.`,
   }),
-  boilOffLPerHour: numberField({
+  boilOffLPerHour: boundedNumber({
     what: 'the boil-off rate',
     label: 'Boil-off rate',
     min: 0,
     max: RECIPE_LIMITS.boilOffLPerHour,
-    rangeMessage: `Boil-off above ${RECIPE_LIMITS.boilOffLPerHour} L (${gal(RECIPE_LIMITS.boilOffLPerHour)}) per hour is more than Wortwise handles. Check the number.`,
+    rangeMessage: `Boil-off above ${RECIPE_LIMITS.boilOffLPerHour} L (${showGal(RECIPE_LIMITS.boilOffLPerHour)}) per hour is more than Wortwise handles. Check the number.`,
   }),
-  efficiency: numberField({
+  efficiency: boundedNumber({
     what: 'the brewhouse efficiency',
     label: 'Brewhouse efficiency',
     min: 0,
@@ -262,7 +218,7 @@ const recipeShape = {
     max: 1,
     rangeMessage: 'Brewhouse efficiency must be above 0 % and at most 100 %.',
   }),
-  targetOg: numberField({
+  targetOg: boundedNumber({
     what: 'the target OG',
     label: 'Target OG',
     min: 1,
@@ -270,7 +226,7 @@ const recipeShape = {
     max: 1.2,
     rangeMessage: 'Target OG must be above 1.000 and at most 1.200 (about 44 °P).',
   }),
-  targetFg: numberField({
+  targetFg: boundedNumber({
     what: 'the target FG',
     label: 'Target FG',
     min: 0.98,
@@ -301,7 +257,7 @@ const recipeShape = {
     rangeOnly: true,
     rangeMessage: `Souring target pH must be between ${SOURING_PH_LIMITS.min} and ${SOURING_PH_LIMITS.max}; kettle sours usually aim for about 3.2 to 3.6 before the boil.`,
   }),
-  mashPhTarget: numberField({
+  mashPhTarget: boundedNumber({
     what: 'the mash pH target',
     label: 'Mash pH target',
     min: 4.5,
@@ -367,10 +323,10 @@ export function boilOffMismatch(pre: unknown, post: unknown, boilMinutes: unknow
     return { field: 'postBoilVolumeL', message: 'With no boil, the post-boil volume should equal the pre-boil volume.' };
   }
   const implied = impliedBoilOffLPerHour(pre, post, boilMinutes);
-  const impliedText = implied === null ? '' : ` The volumes imply about ${implied.toFixed(1)} L (${gal(implied)}) per hour.`;
+  const impliedText = implied === null ? '' : ` The volumes imply about ${implied.toFixed(1)} L (${showGal(implied)}) per hour.`;
   return {
     field: 'boilOffLPerHour',
-    message: `This boil-off rate does not match the volumes: over ${boilMinutes} minutes it would leave ${Math.max(predictedPostL, 0).toFixed(1)} L (${gal(Math.max(predictedPostL, 0))}), not the post-boil ${post.toFixed(1)} L (${gal(post)}).${impliedText}`,
+    message: `This boil-off rate does not match the volumes: over ${boilMinutes} minutes it would leave ${Math.max(predictedPostL, 0).toFixed(1)} L (${showGal(Math.max(predictedPostL, 0))}), not the post-boil ${post.toFixed(1)} L (${showGal(post)}).${impliedText}`,
   };
 }
 
@@ -392,7 +348,7 @@ export type RecipeData = z.output<typeof recipeInputSchema>;
 export const recipeUpdateSchema = z
   .object({
     ...recipeShape,
-    version: z.number({ error: 'The recipe version is missing; reload the recipe.' }).int().positive({ error: 'The recipe version is missing; reload the recipe.' }),
+    version: num({ notNumber: 'The recipe version is missing; reload the recipe.' }).int().positive({ error: 'The recipe version is missing; reload the recipe.' }),
   })
   .superRefine(crossChecks, { when: () => true });
 export type RecipeUpdateInput = z.input<typeof recipeUpdateSchema>;
@@ -493,7 +449,7 @@ export const recipeVersionParamsSchema = z.object({
 
 export const sharingInputSchema = z.object({
   clubIds: z
-    .array(z.number({ error: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
+    .array(num({ notNumber: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
     .max(50, { error: 'Share with at most 50 clubs.' }),
 });
 export type SharingInput = z.input<typeof sharingInputSchema>;

@@ -20,6 +20,7 @@ import { useUnits } from '@/lib/units';
 import { useRecordPackaging } from '../api/packaging';
 import { fromLocalInput, toLocalInput, verdictTitles } from './words';
 import { SaveNotice } from '@/components/ui/save-notice';
+import { typedNumber } from '@shared/schemas/fields';
 
 interface Values {
   container: PackagingContainer;
@@ -33,17 +34,13 @@ interface Values {
   note: string;
 }
 
-const num = (t: string) => {
-  const s = t.trim().replace(',', '.');
-  return s === '' ? undefined : Number.isFinite(Number(s)) ? Number(s) : (s as unknown as number);
-};
 
 function toInput(v: Values): PackagingInput {
   return {
     container: v.container,
     volumeL: v.volumeL === '' ? (undefined as unknown as number) : v.volumeL,
     warmestTempC: v.warmestTempC === '' ? (undefined as unknown as number) : v.warmestTempC,
-    targetCo2Volumes: num(v.targetCo2Volumes) as number,
+    targetCo2Volumes: typedNumber(v.targetCo2Volumes) as number,
     sugar: v.sugar,
     packagedAt: fromLocalInput(v.packagedAt),
     override: v.override,
@@ -197,7 +194,7 @@ function SugarPicker() {
 function SugarResult() {
   const { values } = useFormikContext<Values>();
   const units = useUnits();
-  const co2 = num(values.targetCo2Volumes);
+  const co2 = typedNumber(values.targetCo2Volumes);
   let text: string | null = null;
   let problem: string | null = null;
   let residual: number | null = null;

@@ -13,6 +13,7 @@ import { useUnits } from '@/lib/units';
 import { useAddFermentationReading } from '../api/add-reading';
 import { dayLabel, fromLocalInput, methodLabels, toLocalInput } from './words';
 import { SaveNotice } from '@/components/ui/save-notice';
+import { typedNumber } from '@shared/schemas/fields';
 
 interface Values {
   method: FermentationMethod;
@@ -26,12 +27,6 @@ interface Values {
   note: string;
 }
 
-const numberOf = (text: string) => {
-  const t = text.trim().replace(',', '.');
-  if (t === '') return undefined;
-  const n = Number(t);
-  return Number.isFinite(n) ? n : (t as unknown as number);
-};
 const orUndefined = (v: number | '') => (v === '' ? undefined : v);
 
 export function toReadingInput(v: Values): FermentationReadingInput {
@@ -40,7 +35,7 @@ export function toReadingInput(v: Values): FermentationReadingInput {
     case 'hydrometer':
       return { ...base, method: 'hydrometer', sg: orUndefined(v.sg) as number, sampleTempC: orUndefined(v.sampleTempC) as number };
     case 'refractometer':
-      return { ...base, method: 'refractometer', brix: numberOf(v.brix) as number, originalBrix: numberOf(v.originalBrix) as number };
+      return { ...base, method: 'refractometer', brix: typedNumber(v.brix) as number, originalBrix: typedNumber(v.originalBrix) as number };
     case 'thermometer':
       return { ...base, method: 'thermometer', tempC: orUndefined(v.tempC) as number };
   }
