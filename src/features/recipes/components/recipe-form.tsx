@@ -6,22 +6,24 @@ import { KG_PER_LB, LITRES_PER_US_GALLON } from '@shared/brewmath';
 import {
   boilOffMismatch,
   defaultPotentialPointsLPerKg,
+  fermentableKindLabels,
+  fermentableKinds,
+  impliedBoilOffLPerHour,
+  recipeInputSchema,
+  type Recipe,
+  type RecipeData,
+  type RecipeFermentableKind,
+} from '@shared/schemas/recipes';
+import {
   COLOUR_AGREEMENT_SRM,
   estimateRecipeColour,
   estimateRecipeIbu,
   estimateRecipeOg,
   IBU_AGREEMENT,
   recipeBuGu,
-  fermentableKindLabels,
-  fermentableKinds,
-  impliedBoilOffLPerHour,
   OG_AGREEMENT_SG,
-  recipeInputSchema,
   targetAbv,
-  type Recipe,
-  type RecipeData,
-  type RecipeFermentableKind,
-} from '@shared/schemas/recipes';
+} from '@shared/recipes/estimates';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
