@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { idParamSchema } from '@shared/schemas/common';
-import { equipmentProfileInputSchema, equipmentProfileUpdateSchema } from '@shared/schemas/instruments';
+import { equipmentProfileInputSchema, equipmentProfileUpdateSchema } from '@shared/schemas/equipment';
 import { currentUser, requireUser } from '../auth/session';
 import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';

@@ -14,7 +14,8 @@ import {
   varchar,
 } from 'drizzle-orm/mysql-core';
 import { brewStages, brewStatuses, photoMimeTypes, readingKinds, type BrewReading, type DecisionChoice } from '../../../shared/schemas/brews';
-import type { EquipmentProfile, InstrumentSnapshot } from '../../../shared/schemas/instruments';
+import type { InstrumentSnapshot } from '../../../shared/schemas/instruments';
+import type { EquipmentProfile } from '../../../shared/schemas/equipment';
 import type { RecipeTargets } from '../../../shared/schemas/recipes';
 import { clubs } from './clubs';
 import { recipes } from './recipes';

@@ -1,5 +1,6 @@
 /** Brew days: what the API answers (the requests and the vocabulary are in inputs.ts). */
-import type { InstrumentSnapshot, EquipmentProfile } from '../instruments';
+import type { InstrumentSnapshot } from '../instruments';
+import type { EquipmentProfile } from '../equipment';
 import type { RecipeTargets } from '../recipes';
 import type { BrewStage, BrewStatus, DecisionChoice, PhotoMime, ReadingKind, ReadingQuantity, ReadingRaw } from './inputs';
 
