@@ -21,9 +21,12 @@ const featureZones = features.map((feature) => ({
   message: 'A feature never imports another feature; compose them in src/app.',
 }));
 
-/** Libraries wrapped once, so nothing else imports them. */
+/** Libraries wrapped once, so nothing else imports them; schema folders are imported whole. */
 const oneWayImports = {
-  patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
+  patterns: [
+    { group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' },
+    { group: ['**/schemas/*/inputs', '**/schemas/*/responses'], message: 'Import a schema folder through its index: @shared/schemas/<resource>.' },
+  ],
   paths: [
     { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts; a router takes it from ctx.limits.' },
     { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },

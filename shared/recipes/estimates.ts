@@ -7,7 +7,7 @@ import { BrewMathError } from '../brewmath/errors';
 import { estimateOg, type FermentableKind } from '../brewmath/extract';
 import { buToGu, ibuTinseth } from '../brewmath/bitterness';
 import { moreyColour } from '../brewmath/colour';
-import type { FermentableInput, HopInput, RecipeFermentableKind } from '../schemas/recipes/inputs';
+import type { FermentableInput, HopInput, RecipeFermentableKind } from '../schemas/recipes';
 
 const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
