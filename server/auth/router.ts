@@ -8,12 +8,11 @@ import { clearSession, currentUser, issueSession, loadSessionUser, requireUser, 
 /** `/api/auth`: sign-up, sign-in (both under the `auth` rate limit), sign-out and the brewer's own settings. */
 export function authRouter(ctx: RouterContext) {
   const { db, env } = ctx;
-  const authLimiter = ctx.limits.auth;
   const router = Router();
 
   router.post(
     '/signup',
-    authLimiter,
+    ctx.limits.auth,
     handle({ body: signupSchema }, async ({ body }, _req, res) => {
       const id = await createUser(db, body);
       const user = await loadSessionUser(db, id);
@@ -25,7 +24,7 @@ export function authRouter(ctx: RouterContext) {
 
   router.post(
     '/login',
-    authLimiter,
+    ctx.limits.auth,
     handle({ body: loginSchema }, async ({ body }, _req, res) => {
       const user = await verifyLogin(db, body);
       issueSession(res, env, user);

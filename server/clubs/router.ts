@@ -19,7 +19,6 @@ import { createClub, getClub, leaveClub, listMyClubs, removeMember, setMemberRol
 /** `/api/clubs`: a brewer's clubs, their members and the organisers' invitations. */
 export function clubsRouter(ctx: RouterContext) {
   const { db } = ctx;
-  const inviteLimiter = ctx.limits.clubInvite;
   const router = Router();
   router.use(requireUser);
 
@@ -59,7 +58,7 @@ export function clubsRouter(ctx: RouterContext) {
 
   router.post(
     '/:id/invitations',
-    inviteLimiter,
+    ctx.limits.clubInvite,
     handle({ params: clubParamsSchema, body: inviteSchema }, async ({ params, body }, req, res) => {
       const sent = await inviteToClub(ctx, currentUser(req), params.id, body);
       res.status(201);
@@ -106,7 +105,6 @@ export function clubsRouter(ctx: RouterContext) {
 /** `/api/invitations/:token`: public, because the person invited may have no account yet. */
 export function invitationsRouter(ctx: RouterContext) {
   const { db, env } = ctx;
-  const acceptLimiter = ctx.limits.invitationAccept;
   const router = Router();
 
   router.get(
@@ -116,7 +114,7 @@ export function invitationsRouter(ctx: RouterContext) {
 
   router.post(
     '/:token/accept',
-    acceptLimiter,
+    ctx.limits.invitationAccept,
     handle({ params: tokenParamsSchema, body: acceptInvitationSchema }, async ({ params, body }, req, res) => {
       const accepted = await acceptInvitation(db, params.token, req.user, body);
       const user = (await loadSessionUser(db, accepted.userId))!;

@@ -9,12 +9,11 @@ import { checkResetToken, requestPasswordReset, resetPassword } from './service'
 /** `/api/auth/password-reset`: ask for a link, check it, use it. */
 export function passwordResetRouter(ctx: RouterContext) {
   const { db, env } = ctx;
-  const limiter = ctx.limits.passwordReset;
   const router = Router();
 
   router.post(
     '/',
-    limiter,
+    ctx.limits.passwordReset,
     handle({ body: passwordResetRequestSchema }, async ({ body }, _req, res) => {
       await requestPasswordReset(ctx, body.email);
       res.status(202);
@@ -24,13 +23,13 @@ export function passwordResetRouter(ctx: RouterContext) {
 
   router.get(
     '/:token',
-    limiter,
+    ctx.limits.passwordReset,
     handle({ params: tokenParamsSchema }, ({ params }) => checkResetToken(db, params.token)),
   );
 
   router.post(
     '/:token',
-    limiter,
+    ctx.limits.passwordReset,
     handle({ params: tokenParamsSchema, body: passwordResetSchema }, async ({ params, body }, _req, res) => {
       const user = await resetPassword(db, params.token, body.password);
       // This device gets a fresh session under the new token version; every other one is out.
