@@ -33,11 +33,15 @@ const oneWayImports = {
   ],
 };
 
-/** A number a brewer types, with its messages: built in shared/schemas/fields.ts only. */
-const numberBuilderRule = {
-  selector: "CallExpression[callee.object.name='z'][callee.property.name='number'][arguments.length>0]",
-  message: 'Build a number field with num (or checkedNumber, ranged, boundedNumber) from shared/schemas/fields.ts.',
-};
+/** Syntax with one home: day lengths, the id schema, and a number a brewer types (shared/schemas/fields.ts). */
+const oneWaySyntax = [
+  { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
+  { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+  {
+    selector: "CallExpression[callee.object.name='z'][callee.property.name='number'][arguments.length>0]",
+    message: 'Build a number field with num (or checkedNumber, ranged, boundedNumber) from shared/schemas/fields.ts.',
+  },
+];
 
 export default tseslint.config(
   { ignores: ['dist', '.data', 'node_modules', 'migrations', 'coverage'] },
@@ -79,6 +83,31 @@ export default tseslint.config(
     rules: { 'no-restricted-imports': ['error', oneWayImports] },
   },
   {
+    // One way to count days: spans use DAY_MS, calendar days localDay/utcDay (shared/dates.ts, decision 0011);
+    // one schema for an id in a URL (idSchema in shared/schemas/common.ts); one number builder (num,
+    // and checkedNumber, ranged, boundedNumber on top of it, in shared/schemas/fields.ts).
+    files: ['**/*.{ts,tsx}'],
+    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', 'shared/schemas/fields.ts', '**/*.test.ts', '**/*.test.tsx'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        ...oneWaySyntax,
+      ],
+    },
+  },
+  {
+    // One query-key scheme: every key comes from the feature's api/keys.ts.
+    files: ['src/features/**/*.{ts,tsx}'],
+    ignores: ['src/features/*/api/keys.ts', '**/*.test.tsx'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        { selector: "Property[key.name='queryKey'] > ArrayExpression", message: "Build query keys in the feature's api/keys.ts." },
+        ...oneWaySyntax,
+      ],
+    },
+  },
+  {
     // A router is thin: it validates, checks who is signed in and calls a service. It never touches
     // tables or the pool; its one argument is the RouterContext (server/context.ts).
     files: ['server/*/router.ts'],
@@ -94,34 +123,10 @@ export default tseslint.config(
           paths: oneWayImports.paths,
         },
       ],
-    },
-  },
-  {
-    // One way to count days: spans use DAY_MS, calendar days localDay/utcDay (shared/dates.ts, decision 0011);
-    // one schema for an id in a URL (idSchema in shared/schemas/common.ts); one number builder (num,
-    // and checkedNumber, ranged, boundedNumber on top of it, in shared/schemas/fields.ts).
-    files: ['**/*.{ts,tsx}'],
-    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', 'shared/schemas/fields.ts', '**/*.test.ts', '**/*.test.tsx'],
-    rules: {
       'no-restricted-syntax': [
         'error',
-        { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
-        { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
-        numberBuilderRule,
-      ],
-    },
-  },
-  {
-    // One query-key scheme: every key comes from the feature's api/keys.ts.
-    files: ['src/features/**/*.{ts,tsx}'],
-    ignores: ['src/features/*/api/keys.ts', '**/*.test.tsx'],
-    rules: {
-      'no-restricted-syntax': [
-        'error',
-        { selector: "Property[key.name='queryKey'] > ArrayExpression", message: "Build query keys in the feature's api/keys.ts." },
-        { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
-        { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
-        numberBuilderRule,
+        ...oneWaySyntax,
+        { selector: "MemberExpression[property.name='pool']", message: 'A router never queries the database: call a service (server/<feature>/service.ts).' },
       ],
     },
   },

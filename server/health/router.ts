@@ -6,7 +6,7 @@ import { databaseIsUp } from './service';
 export function healthRouter(ctx: RouterContext) {
   const router = Router();
   router.get('/', async (_req, res) => {
-    if (await databaseIsUp(ctx.pool)) res.json({ status: 'ok', db: 'up' });
+    if (await databaseIsUp(ctx)) res.json({ status: 'ok', db: 'up' });
     else res.status(503).json({ status: 'degraded', db: 'down' });
   });
   return router;

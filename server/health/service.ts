@@ -1,7 +1,7 @@
-import type { Pool } from 'mysql2/promise';
+import type { AppContext } from '../context';
 
 /** True when MariaDB answers within two seconds; the pool reconnects by itself when it is back. */
-export async function databaseIsUp(pool: Pool): Promise<boolean> {
+export async function databaseIsUp({ pool }: Pick<AppContext, 'pool'>): Promise<boolean> {
   try {
     await pool.query({ sql: 'SELECT 1', timeout: 2_000 });
     return true;
