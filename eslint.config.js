@@ -26,6 +26,28 @@ const featureZones = features.map((feature) => ({
   message: 'A feature never imports another feature; compose them in src/app.',
 }));
 
+/** Libraries wrapped once, so nothing else imports them; schema folders are imported whole. */
+const oneWayImports = {
+  patterns: [
+    { group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' },
+    { group: ['**/schemas/*/inputs', '**/schemas/*/responses'], message: 'Import a schema folder through its index: @shared/schemas/<resource>.' },
+  ],
+  paths: [
+    { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts; a router takes it from ctx.limits.' },
+    { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },
+  ],
+};
+
+/** Syntax with one home: day lengths, the id schema, and a number a brewer types (shared/schemas/fields.ts). */
+const oneWaySyntax = [
+  { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
+  { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+  {
+    selector: "CallExpression[callee.object.name='z'][callee.property.name='number'][arguments.length>0]",
+    message: 'Build a number field with num (or checkedNumber, ranged, boundedNumber) from shared/schemas/fields.ts.',
+  },
+];
+
 export default tseslint.config(
   { ignores: ['dist', '.data', 'node_modules', 'migrations', 'coverage'] },
   js.configs.recommended,
@@ -62,30 +84,19 @@ export default tseslint.config(
     // One way to do each thing: CSV goes through server/lib/csv.ts (one reader, one writer, one
     // formula guard); every rate limit is built in server/lib/rate-limit.ts, from configuration.
     files: ['**/*.{ts,tsx}'],
-    ignores: ['server/lib/csv.ts', 'server/lib/rate-limit.ts'],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        {
-          patterns: [{ group: ['csv-parse', 'csv-parse/*', 'csv-stringify', 'csv-stringify/*'], message: 'Read and write CSV through server/lib/csv.ts (readCsv, writeCsv, formulaSafe).' }],
-          paths: [
-            { name: 'express-rate-limit', message: 'Add a named limit to server/lib/rate-limit.ts and take its middleware as a router argument.' },
-            { name: 'rate-limit-redis', message: 'The Redis store is wired in server/lib/rate-limit.ts only.' },
-          ],
-        },
-      ],
-    },
+    ignores: ['server/lib/csv.ts', 'server/lib/rate-limit.ts', 'server/*/router.ts'],
+    rules: { 'no-restricted-imports': ['error', oneWayImports] },
   },
   {
     // One way to count days: spans use DAY_MS, calendar days localDay/utcDay (shared/dates.ts, decision 0011);
-    // one schema for an id in a URL (idSchema in shared/schemas/common.ts).
+    // one schema for an id in a URL (idSchema in shared/schemas/common.ts); one number builder (num,
+    // and checkedNumber, ranged, boundedNumber on top of it, in shared/schemas/fields.ts).
     files: ['**/*.{ts,tsx}'],
-    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', '**/*.test.ts', '**/*.test.tsx'],
+    ignores: ['shared/dates.ts', 'shared/schemas/common.ts', 'shared/schemas/fields.ts', '**/*.test.ts', '**/*.test.tsx'],
     rules: {
       'no-restricted-syntax': [
         'error',
-        { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
-        { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+        ...oneWaySyntax,
       ],
     },
   },
@@ -97,8 +108,30 @@ export default tseslint.config(
       'no-restricted-syntax': [
         'error',
         { selector: "Property[key.name='queryKey'] > ArrayExpression", message: "Build query keys in the feature's api/keys.ts." },
-        { selector: 'Literal[value=86400000]', message: 'Use DAY_MS from shared/dates.ts.' },
-        { selector: "Literal[value='Expected a numeric id.']", message: 'Use idSchema or idParamSchema from shared/schemas/common.ts.' },
+        ...oneWaySyntax,
+      ],
+    },
+  },
+  {
+    // A router is thin: it validates, checks who is signed in and calls a service. It never touches
+    // tables or the pool; its one argument is the RouterContext (server/context.ts).
+    files: ['server/*/router.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            ...oneWayImports.patterns,
+            { group: ['**/db/schema', '**/db/schema/*', '**/db/client'], message: 'A router never touches tables: call a service (server/<feature>/service.ts).' },
+            { group: ['drizzle-orm', 'drizzle-orm/*', 'mysql2', 'mysql2/*'], message: 'A router never touches tables: call a service (server/<feature>/service.ts).' },
+          ],
+          paths: oneWayImports.paths,
+        },
+      ],
+      'no-restricted-syntax': [
+        'error',
+        ...oneWaySyntax,
+        { selector: "MemberExpression[property.name='pool']", message: 'A router never queries the database: call a service (server/<feature>/service.ts).' },
       ],
     },
   },

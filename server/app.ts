@@ -10,11 +10,11 @@ import { adminRouter } from './admin/router';
 import { authRouter } from './auth/router';
 import { brewsRouter } from './brews/router';
 import { loadUser } from './auth/session';
-import type { AppContext } from './context';
+import type { AppContext, RouterContext } from './context';
 import { clubsRouter, invitationsRouter } from './clubs/router';
 import { calcRouter } from './calc/router';
 import { equipmentRouter } from './equipment/router';
-import { fermentationRouter } from './fermentation/router';
+import { fermentationCsvRouter, fermentationRouter, fermentationSettingsRouter } from './fermentation/router';
 import { healthRouter } from './health/router';
 import { instrumentsRouter } from './instruments/router';
 import { apiSecurityHeaders } from './lib/security-headers';
@@ -24,12 +24,12 @@ import { idempotency } from './lib/idempotency';
 import { createRateLimits } from './lib/rate-limit';
 import { passwordResetRouter } from './password-reset/router';
 import { recipesRouter } from './recipes/router';
-import { reviewsRouter } from './reviews/router';
+import { brewReviewRouter, commentsRouter, reviewsRouter } from './reviews/router';
 
 const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
 
 export function createApp(ctx: AppContext) {
-  const { env, db, pool } = ctx;
+  const { env, db } = ctx;
   const clientDist = env.CLIENT_DIST ?? defaultClientDist;
   const app = express();
   app.disable('x-powered-by');
@@ -39,32 +39,38 @@ export function createApp(ctx: AppContext) {
   // nobody revalidates is waste (the built files keep theirs, from serve-static).
   app.set('etag', false);
 
-  // The API's pipeline is ordered cheapest-first: the health check and the public calculators
-  // pass only what they need, the signed-in routes the rest (issue 14: per-request cost).
-  const limits = createRateLimits(env, ctx.redis);
+  // The whole URL map of the API: every router takes the one RouterContext and answers under its
+  // own prefix. Those under /brews/:brewId come before the brew-day router, which they extend.
+  // The pipeline is ordered cheapest-first: the health check and the public calculators pass only
+  // what they need, the signed-in routes the rest (issue 14: per-request cost).
+  const rc: RouterContext = { ...ctx, limits: createRateLimits(env, ctx.redis) };
   const api = express.Router();
   api.use(apiSecurityHeaders());
   api.use(crossSiteGuard(env));
-  api.use('/health', healthRouter(pool));
+  api.use('/health', healthRouter(rc));
   api.use(express.json({ limit: '100kb' }));
   // JSON is compressed on the fly (brotli when the browser takes it) above 1 kB.
   api.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
-  api.use('/calc', calcRouter(limits.calc));
+  api.use('/calc', calcRouter(rc));
   api.use(cookieParser());
   api.use(loadUser(db, env));
   api.use(noStoreWhenSignedIn);
   api.use(idempotency(db));
-  api.use('/auth/password-reset', passwordResetRouter(ctx, limits.passwordReset));
-  api.use('/auth', authRouter(db, env, limits.auth));
-  api.use('/clubs', clubsRouter(ctx, limits.clubInvite));
-  api.use('/invitations', invitationsRouter(ctx, limits.invitationAccept));
-  api.use('/admin', adminRouter(ctx));
-  api.use('/recipes', recipesRouter(ctx));
-  api.use('/instruments', instrumentsRouter(db));
-  api.use('/equipment', equipmentRouter(db));
-  api.use(fermentationRouter(ctx));
-  api.use(reviewsRouter(ctx));
-  api.use('/brews', brewsRouter(ctx));
+  api.use('/auth/password-reset', passwordResetRouter(rc));
+  api.use('/auth', authRouter(rc));
+  api.use('/clubs', clubsRouter(rc));
+  api.use('/invitations', invitationsRouter(rc));
+  api.use('/admin', adminRouter(rc));
+  api.use('/recipes', recipesRouter(rc));
+  api.use('/instruments', instrumentsRouter(rc));
+  api.use('/equipment', equipmentRouter(rc));
+  api.use('/fermentation', fermentationSettingsRouter(rc));
+  api.use('/reviews', reviewsRouter(rc));
+  api.use('/brews/:brewId/fermentation.csv', fermentationCsvRouter(rc));
+  api.use('/brews/:brewId/fermentation', fermentationRouter(rc));
+  api.use('/brews/:brewId/review', brewReviewRouter(rc));
+  api.use('/brews/:brewId/comments', commentsRouter(rc));
+  api.use('/brews', brewsRouter(rc));
   api.use(apiNotFound);
   app.use('/api', api);
 

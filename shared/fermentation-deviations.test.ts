@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { describeFermentationDeviation, findFermentationDeviations, type FermentationDeviationReading } from './brew-deviations';
+import { describeFermentationDeviation, findFermentationDeviations, type FermentationDeviationReading } from './fermentation-deviations';
 import { temperatureSummary } from './fermentation/temperature';
 import type { InstrumentSnapshot } from './schemas/instruments';
 import type { BrewDeviation } from './schemas/brews';

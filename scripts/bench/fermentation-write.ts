@@ -6,7 +6,7 @@
  */
 import { defaultSnapshot } from '@shared/instruments';
 import { fermentationReadings } from '../../server/db/schema';
-import { dedupeKey } from '../../server/fermentation/service';
+import { dedupeKey } from '../../server/fermentation/readings';
 import { MAX_READINGS_PER_LOG } from '../../server/lib/reading-limit';
 import { startInProcessApp } from './in-process';
 

@@ -1,13 +1,13 @@
 import { Router, type RequestHandler } from 'express';
 import { adminUsersQuerySchema } from '@shared/schemas/admin';
 import { requireSiteAdmin } from '../auth/permissions';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { NotFound } from '../lib/errors';
 import { caughtMail, listUsers } from './service';
 
 /** `/api/admin`: site admins only; everyone else gets the same 404 as for a route that does not exist. */
-export function adminRouter(ctx: AppContext) {
+export function adminRouter(ctx: RouterContext) {
   const router = Router();
   const onlyAdmins: RequestHandler = (req, _res, next) => {
     requireSiteAdmin(req.user);

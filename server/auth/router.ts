@@ -1,20 +1,18 @@
-import { Router, type RequestHandler } from 'express';
-import { eq } from 'drizzle-orm';
+import { Router } from 'express';
 import { loginSchema, preferencesSchema, signupSchema } from '@shared/schemas/auth';
-import type { Db } from '../db/client';
-import { users } from '../db/schema';
-import type { Env } from '../env';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
-import { createUser, verifyLogin } from './service';
+import { createUser, updatePreferences, verifyLogin } from './service';
 import { clearSession, currentUser, issueSession, loadSessionUser, requireUser, revokeAllSessions, revokeSession, toMe } from './session';
 
-/** `authLimiter`: the sign-up and sign-in limit from server/lib/rate-limit.ts. */
-export function authRouter(db: Db, env: Env, authLimiter: RequestHandler) {
+/** `/api/auth`: sign-up, sign-in (both under the `auth` rate limit), sign-out and the brewer's own settings. */
+export function authRouter(ctx: RouterContext) {
+  const { db, env } = ctx;
   const router = Router();
 
   router.post(
     '/signup',
-    authLimiter,
+    ctx.limits.auth,
     handle({ body: signupSchema }, async ({ body }, _req, res) => {
       const id = await createUser(db, body);
       const user = await loadSessionUser(db, id);
@@ -26,7 +24,7 @@ export function authRouter(db: Db, env: Env, authLimiter: RequestHandler) {
 
   router.post(
     '/login',
-    authLimiter,
+    ctx.limits.auth,
     handle({ body: loginSchema }, async ({ body }, _req, res) => {
       const user = await verifyLogin(db, body);
       issueSession(res, env, user);
@@ -55,9 +53,7 @@ export function authRouter(db: Db, env: Env, authLimiter: RequestHandler) {
     '/me',
     requireUser,
     handle({ body: preferencesSchema }, async ({ body }, req) => {
-      const user = currentUser(req);
-      if (Object.keys(body).length > 0) await db.update(users).set(body).where(eq(users.id, user.id));
-      return toMe((await loadSessionUser(db, user.id))!);
+      return toMe(await updatePreferences(db, currentUser(req).id, body));
     }),
   );
 

@@ -1,10 +1,11 @@
 import argon2 from 'argon2';
 import { eq } from 'drizzle-orm';
-import type { LoginInput, SignupInput } from '@shared/schemas/auth';
+import type { LoginInput, Preferences, SignupInput } from '@shared/schemas/auth';
 import type { Db } from '../db/client';
 import { users } from '../db/schema';
 import { isDuplicateKey } from '../lib/db-errors';
 import { Conflict, Unauthorized } from '../lib/errors';
+import { loadSessionUser, type SessionUser } from './session';
 
 // OWASP's argon2id guidance: 19 MiB memory, 2 iterations, 1 lane.
 const hashOptions = { type: argon2.argon2id, memoryCost: 19_456, timeCost: 2, parallelism: 1 } as const;
@@ -48,4 +49,10 @@ export async function verifyLogin(db: Db, input: LoginInput) {
   }
   if (!(await argon2.verify(user.passwordHash, input.password))) throw new Unauthorized(wrongCredentials);
   return user;
+}
+
+/** Saves the brewer's own settings (only those given) and returns them as the session sees them. */
+export async function updatePreferences(db: Db, userId: number, preferences: Preferences): Promise<SessionUser> {
+  if (Object.keys(preferences).length > 0) await db.update(users).set(preferences).where(eq(users.id, userId));
+  return (await loadSessionUser(db, userId))!;
 }

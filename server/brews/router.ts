@@ -16,7 +16,7 @@ import {
   updateBrewSchema,
 } from '@shared/schemas/brews';
 import { currentUser, requireUser } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { addDecision } from './decisions';
 import { createPhotoStore } from './photo-store';
@@ -28,7 +28,7 @@ import { addNote, deleteBrew, deleteNote, getBrew, listBrews, listReadings, setB
 const at = (iso: string | undefined) => (iso ? new Date(iso) : undefined);
 
 /** `/api/brews`: brew days with their stages, readings, photos, late-boil decisions and notes. */
-export function brewsRouter(ctx: AppContext) {
+export function brewsRouter(ctx: RouterContext) {
   const { db } = ctx;
   const photoStore = createPhotoStore(ctx.env);
   const router = Router();

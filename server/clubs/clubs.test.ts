@@ -1,7 +1,7 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import request from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
-import type { EquipmentProfile } from '@shared/schemas/instruments';
+import type { EquipmentProfile } from '@shared/schemas/equipment';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import { brewClubShares, brews, clubInvitations, clubMemberships, recipeClubShares, recipes } from '../db/schema';
 import { makeUser } from '../db/factories';

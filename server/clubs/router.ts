@@ -1,4 +1,4 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import {
   acceptInvitationSchema,
   clubParamsSchema,
@@ -11,13 +11,13 @@ import {
   updateClubSchema,
 } from '@shared/schemas/clubs';
 import { currentUser, issueSession, loadSessionUser, requireUser, toMe } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { acceptInvitation, inviteToClub, listPendingInvitations, previewInvitation, revokeInvitation } from './invitations';
 import { createClub, getClub, leaveClub, listMyClubs, removeMember, setMemberRole, updateClub } from './service';
 
 /** `/api/clubs`: a brewer's clubs, their members and the organisers' invitations. */
-export function clubsRouter(ctx: AppContext, inviteLimiter: RequestHandler) {
+export function clubsRouter(ctx: RouterContext) {
   const { db } = ctx;
   const router = Router();
   router.use(requireUser);
@@ -58,7 +58,7 @@ export function clubsRouter(ctx: AppContext, inviteLimiter: RequestHandler) {
 
   router.post(
     '/:id/invitations',
-    inviteLimiter,
+    ctx.limits.clubInvite,
     handle({ params: clubParamsSchema, body: inviteSchema }, async ({ params, body }, req, res) => {
       const sent = await inviteToClub(ctx, currentUser(req), params.id, body);
       res.status(201);
@@ -103,7 +103,7 @@ export function clubsRouter(ctx: AppContext, inviteLimiter: RequestHandler) {
 }
 
 /** `/api/invitations/:token`: public, because the person invited may have no account yet. */
-export function invitationsRouter(ctx: AppContext, acceptLimiter: RequestHandler) {
+export function invitationsRouter(ctx: RouterContext) {
   const { db, env } = ctx;
   const router = Router();
 
@@ -114,7 +114,7 @@ export function invitationsRouter(ctx: AppContext, acceptLimiter: RequestHandler
 
   router.post(
     '/:token/accept',
-    acceptLimiter,
+    ctx.limits.invitationAccept,
     handle({ params: tokenParamsSchema, body: acceptInvitationSchema }, async ({ params, body }, req, res) => {
       const accepted = await acceptInvitation(db, params.token, req.user, body);
       const user = (await loadSessionUser(db, accepted.userId))!;

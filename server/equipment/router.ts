@@ -1,13 +1,14 @@
 import { Router } from 'express';
 import { idParamSchema } from '@shared/schemas/common';
-import { equipmentProfileInputSchema, equipmentProfileUpdateSchema } from '@shared/schemas/instruments';
+import { equipmentProfileInputSchema, equipmentProfileUpdateSchema } from '@shared/schemas/equipment';
 import { currentUser, requireUser } from '../auth/session';
-import type { Db } from '../db/client';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { createEquipment, deleteEquipment, getEquipment, getEquipmentProfile, listEquipment, updateEquipment } from './service';
 
 /** /api/equipment: the signed-in brewer's kettle profiles. */
-export function equipmentRouter(db: Db) {
+export function equipmentRouter(ctx: RouterContext) {
+  const { db } = ctx;
   const router = Router();
   router.use(requireUser);
 

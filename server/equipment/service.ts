@@ -5,7 +5,7 @@
  */
 import { and, asc, desc, eq, ne } from 'drizzle-orm';
 import { boilOffRateLPerHour } from '@shared/brewmath';
-import { DEFAULT_EQUIPMENT, type EquipmentProfile, type EquipmentProfileInput, type EquipmentProfileUpdate } from '@shared/schemas/instruments';
+import { DEFAULT_EQUIPMENT, type EquipmentProfile, type EquipmentProfileInput, type EquipmentProfileUpdate } from '@shared/schemas/equipment';
 import { requireAccess, type Actor, type ResourceAction } from '../auth/permissions';
 import type { DbOrTx, Tx } from '../db/client';
 import { lockUserRow } from '../db/locks';

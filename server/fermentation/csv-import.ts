@@ -32,7 +32,9 @@ import { fieldErrors } from '../lib/handle';
 import { BadRequest, Conflict, HttpError } from '../lib/errors';
 import { CsvParseError, CsvTooManyRowsError, detectDelimiter, readCsv, stripBom, unguardFormula, type CsvRecord } from '../lib/csv';
 import { scheduleAfterReadings } from './reminders';
-import { assembleLog, correctRaw, dedupeKey, existingKeys, expectedFgOf, measuredOg, primaryOf, readingRows, requirePitched, verdictFor } from './service';
+import { correctRaw, dedupeKey, existingKeys, primaryOf, requirePitched } from './readings';
+import { assembleLog, measuredOg, readingRows } from './service';
+import { expectedFgOf, verdictFor } from './verdict';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 export class UnsupportedFile extends HttpError {

@@ -10,7 +10,8 @@ import { fermentationReadingInputSchema, type FermentationReadingInput } from '@
 import { DEMO_BREW_NAME } from '../brews/demo-seed';
 import { registerDemoSeed } from '../db/seed';
 import { brews, instruments } from '../db/schema';
-import { addReading, measuredOg } from './service';
+import { addReading } from './readings';
+import { measuredOg } from './service';
 import { DAY_MS } from '@shared/dates';
 
 registerDemoSeed(async (db, people, club) => {

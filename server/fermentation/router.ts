@@ -3,13 +3,15 @@ import { z } from 'zod';
 import { idSchema } from '@shared/schemas/common';
 import { CSV_MAX_BYTES, fermentationReadingInputSchema, fermentationSettingsSchema, packagingInputSchema } from '@shared/schemas/fermentation';
 import { currentUser, requireUser } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { BadRequest } from '../lib/errors';
 import { handle } from '../lib/handle';
 import { singleUpload } from '../lib/upload';
 import { exportCsv } from './csv-export';
 import { importReadings, parseMapping, previewImport } from './csv-import';
-import { addReading, deletePackaging, deleteReading, getLog, recordPackaging, remindersEnabledFor, setRemindersEnabled } from './service';
+import { deletePackaging, recordPackaging } from './packaging';
+import { addReading, deleteReading } from './readings';
+import { getLog, remindersEnabledFor, setRemindersEnabled } from './service';
 
 const idNum = idSchema;
 const brewParams = z.object({ brewId: idNum });
@@ -30,28 +32,32 @@ function fileOf(req: { file?: Express.Multer.File }) {
   return req.file.buffer;
 }
 
-/**
- * The fermentation log of a brew day: `/api/brews/:brewId/fermentation…`, and the brewer's
- * reminder setting at `/api/fermentation/settings`. Mounted on the API root before the brew-day
- * router; it answers only its own paths.
- */
-export function fermentationRouter(ctx: AppContext) {
+/** `/api/fermentation`: the brewer's reminder setting. */
+export function fermentationSettingsRouter(ctx: RouterContext) {
   const { db } = ctx;
   const router = Router();
 
   router.get(
-    '/fermentation/settings',
+    '/settings',
     requireUser,
     handle({}, async (_v, req) => ({ remindersEnabled: await remindersEnabledFor(db, currentUser(req).id) })),
   );
   router.put(
-    '/fermentation/settings',
+    '/settings',
     requireUser,
     handle({ body: fermentationSettingsSchema }, ({ body }, req) => setRemindersEnabled(db, currentUser(req), body.remindersEnabled)),
   );
 
+  return router;
+}
+
+/** `/api/brews/:brewId/fermentation.csv`: the log as a CSV download. */
+export function fermentationCsvRouter(ctx: RouterContext) {
+  const { db } = ctx;
+  const router = Router({ mergeParams: true });
+
   router.get(
-    '/brews/:brewId/fermentation.csv',
+    '/',
     requireUser,
     handle({ params: brewParams }, async ({ params }, req, res) => {
       const { filename, body } = await exportCsv(db, currentUser(req), params.brewId);
@@ -64,14 +70,22 @@ export function fermentationRouter(ctx: AppContext) {
     }),
   );
 
+  return router;
+}
+
+/** `/api/brews/:brewId/fermentation`: the fermentation log of a brew day, its readings, packaging and CSV import. */
+export function fermentationRouter(ctx: RouterContext) {
+  const { db } = ctx;
+  const router = Router({ mergeParams: true });
+
   router.get(
-    '/brews/:brewId/fermentation',
+    '/',
     requireUser,
     handle({ params: brewParams }, ({ params }, req) => getLog(db, currentUser(req), params.brewId)),
   );
 
   router.post(
-    '/brews/:brewId/fermentation/readings',
+    '/readings',
     requireUser,
     handle({ params: brewParams, body: fermentationReadingInputSchema }, async ({ params, body }, req, res) => {
       const result = await addReading(db, currentUser(req), params.brewId, body);
@@ -81,13 +95,13 @@ export function fermentationRouter(ctx: AppContext) {
   );
 
   router.delete(
-    '/brews/:brewId/fermentation/readings/:readingId',
+    '/readings/:readingId',
     requireUser,
     handle({ params: readingParams }, ({ params }, req) => deleteReading(db, currentUser(req), params.brewId, params.readingId)),
   );
 
   router.post(
-    '/brews/:brewId/fermentation/packaging',
+    '/packaging',
     requireUser,
     handle({ params: brewParams, body: packagingInputSchema }, async ({ params, body }, req, res) => {
       const log = await recordPackaging(db, currentUser(req), params.brewId, body);
@@ -97,13 +111,13 @@ export function fermentationRouter(ctx: AppContext) {
   );
 
   router.delete(
-    '/brews/:brewId/fermentation/packaging',
+    '/packaging',
     requireUser,
     handle({ params: brewParams }, ({ params }, req) => deletePackaging(db, currentUser(req), params.brewId)),
   );
 
   router.post(
-    '/brews/:brewId/fermentation/import/preview',
+    '/import/preview',
     requireUser,
     upload,
     handle({ params: brewParams, body: uploadBody }, ({ params, body }, req) =>
@@ -112,7 +126,7 @@ export function fermentationRouter(ctx: AppContext) {
   );
 
   router.post(
-    '/brews/:brewId/fermentation/import',
+    '/import',
     requireUser,
     upload,
     handle({ params: brewParams, body: uploadBody }, async ({ params, body }, req, res) => {

@@ -1,16 +1,13 @@
 import { Router } from 'express';
-import type { Pool } from 'mysql2/promise';
+import type { RouterContext } from '../context';
+import { databaseIsUp } from './service';
 
-/** 200 with db "up", or 503 with db "down"; the pool reconnects by itself when MariaDB is back. */
-export function healthRouter(pool: Pool) {
+/** `/api/health`: 200 with db "up", or 503 with db "down". */
+export function healthRouter(ctx: RouterContext) {
   const router = Router();
   router.get('/', async (_req, res) => {
-    try {
-      await pool.query({ sql: 'SELECT 1', timeout: 2_000 });
-      res.json({ status: 'ok', db: 'up' });
-    } catch {
-      res.status(503).json({ status: 'degraded', db: 'down' });
-    }
+    if (await databaseIsUp(ctx)) res.json({ status: 'ok', db: 'up' });
+    else res.status(503).json({ status: 'degraded', db: 'down' });
   });
   return router;
 }

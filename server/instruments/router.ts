@@ -2,12 +2,13 @@ import { Router } from 'express';
 import { idParamSchema } from '@shared/schemas/common';
 import { calibrateInstrumentSchema, createInstrumentSchema, listInstrumentsQuerySchema, updateInstrumentSchema } from '@shared/schemas/instruments';
 import { currentUser, requireUser } from '../auth/session';
-import type { Db } from '../db/client';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { calibrateInstrument, createInstrument, getInstrument, listCalibrations, listInstruments, updateInstrument } from './service';
 
 /** /api/instruments: the signed-in brewer's own instruments and their calibration log. */
-export function instrumentsRouter(db: Db) {
+export function instrumentsRouter(ctx: RouterContext) {
+  const { db } = ctx;
   const router = Router();
   router.use(requireUser);
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { estimateRecipeOg, OG_AGREEMENT_SG, recipeInputSchema, targetAbv } from '@shared/schemas/recipes';
+import { recipeInputSchema } from '@shared/schemas/recipes';
+import { estimateRecipeOg, OG_AGREEMENT_SG, targetAbv } from '@shared/recipes/estimates';
 import { DEMO_SHARED_RECIPE_NAME, jonahRecipes, priyaRecipes } from './demo-seed';
 
 const all = [...priyaRecipes, ...jonahRecipes];

@@ -6,20 +6,16 @@
 import {
   RECIPE_FILE_FORMAT,
   RECIPE_FILE_VERSION,
-  estimateRecipeColour,
-  estimateRecipeIbu,
-  estimateRecipeOg,
-  recipeBuGu,
   fermentableInputSchema,
   hopInputSchema,
   mashStepInputSchema,
   recipeFileHeaderSchema,
   recipeInputSchema,
-  targetAbv,
   yeastInputSchema,
   type RecipeData,
   type RecipeFile,
 } from '@shared/schemas/recipes';
+import { estimateRecipeColour, estimateRecipeIbu, estimateRecipeOg, recipeBuGu, targetAbv } from '@shared/recipes/estimates';
 import { formulaSafe, writeCsv } from '../lib/csv';
 import { fieldErrors } from '../lib/handle';
 import { BadRequest } from '../lib/errors';

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { idParamSchema } from '@shared/schemas/common';
 import { listRecipesQuerySchema, recipeInputSchema, recipeVersionParamsSchema, recipeUpdateSchema, sharingInputSchema, type RecipeImportResult } from '@shared/schemas/recipes';
 import { currentUser, requireUser } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { singleUpload } from '../lib/upload';
 import { fileSlug, parseRecipeFile, toRecipeCsv, toRecipeFile } from './file-format';
@@ -33,7 +33,7 @@ const upload = singleUpload({
 });
 
 /** `/api/recipes`: a brewer's recipes and those shared with their clubs. */
-export function recipesRouter(ctx: AppContext) {
+export function recipesRouter(ctx: RouterContext) {
   const { db } = ctx;
   const router = Router();
   router.use(requireUser);

@@ -6,11 +6,6 @@
  */
 import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import {
-  estimateRecipeColour,
-  estimateRecipeIbu,
-  estimateRecipeOg,
-  recipeBuGu,
-  targetAbv,
   type ListRecipesQuery,
   type Recipe,
   type RecipeData,
@@ -22,6 +17,7 @@ import {
   type RecipeVersion,
   type RecipeVersionSummary,
 } from '@shared/schemas/recipes';
+import { estimateRecipeColour, estimateRecipeIbu, estimateRecipeOg, recipeBuGu, targetAbv } from '@shared/recipes/estimates';
 import type { listRecipesQuerySchema } from '@shared/schemas/recipes';
 import type { z } from 'zod';
 import { can, requireAccess, type Actor, type ResourceAction } from '../auth/permissions';

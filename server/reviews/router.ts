@@ -1,44 +1,57 @@
 import { Router } from 'express';
 import { brewParamsSchema, commentInputSchema, commentParamsSchema, reviewListQuerySchema } from '@shared/schemas/comments';
 import { currentUser, requireUser } from '../auth/session';
-import type { AppContext } from '../context';
+import type { RouterContext } from '../context';
 import { handle } from '../lib/handle';
 import { addComment, deleteComment, getReview, listComments, listQueue, listReviewed } from './service';
 
-/**
- * A mentor's review: `/api/reviews/queue` and `/api/reviews/reviewed`, and `/api/brews/:brewId/review` and `…/comments` beside
- * the brew-day routes. Mounted on the API root before the brew-day router; it answers only its own paths.
- */
-export function reviewsRouter(ctx: AppContext) {
+/** `/api/reviews`: a mentor's queue of shared brew days awaiting a comment, and those already commented on. */
+export function reviewsRouter(ctx: RouterContext) {
   const { db } = ctx;
   const router = Router();
 
   router.get(
-    '/reviews/queue',
+    '/queue',
     requireUser,
     handle({ query: reviewListQuerySchema }, ({ query }, req) => listQueue(db, currentUser(req), query)),
   );
 
   router.get(
-    '/reviews/reviewed',
+    '/reviewed',
     requireUser,
     handle({ query: reviewListQuerySchema }, ({ query }, req) => listReviewed(db, currentUser(req), query)),
   );
 
+  return router;
+}
+
+/** `/api/brews/:brewId/review`: the review page's data for one shared brew day. */
+export function brewReviewRouter(ctx: RouterContext) {
+  const { db } = ctx;
+  const router = Router({ mergeParams: true });
+
   router.get(
-    '/brews/:brewId/review',
+    '/',
     requireUser,
     handle({ params: brewParamsSchema }, ({ params }, req) => getReview(db, currentUser(req), params.brewId)),
   );
 
+  return router;
+}
+
+/** `/api/brews/:brewId/comments`: comments on a brew day, a reading or a decision. */
+export function commentsRouter(ctx: RouterContext) {
+  const { db } = ctx;
+  const router = Router({ mergeParams: true });
+
   router.get(
-    '/brews/:brewId/comments',
+    '/',
     requireUser,
     handle({ params: brewParamsSchema }, ({ params }, req) => listComments(db, currentUser(req), params.brewId)),
   );
 
   router.post(
-    '/brews/:brewId/comments',
+    '/',
     requireUser,
     handle({ params: brewParamsSchema, body: commentInputSchema }, async ({ params, body }, req, res) => {
       const created = await addComment(ctx, currentUser(req), params.brewId, body);
@@ -48,7 +61,7 @@ export function reviewsRouter(ctx: AppContext) {
   );
 
   router.delete(
-    '/brews/:brewId/comments/:commentId',
+    '/:commentId',
     requireUser,
     handle({ params: commentParamsSchema }, async ({ params }, req, res) => {
       await deleteComment(db, currentUser(req), params.brewId, params.commentId);

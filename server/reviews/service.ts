@@ -6,7 +6,7 @@
  * shares with a lock, so a comment sent a second after the brewer stopped sharing is refused.
  */
 import { and, asc, desc, eq, inArray, max, ne } from 'drizzle-orm';
-import { findFermentationDeviations } from '@shared/brew-deviations';
+import { findFermentationDeviations } from '@shared/fermentation-deviations';
 import { readingKindLabels } from '@shared/schemas/brews';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import type { Page } from '@shared/schemas/common';

@@ -50,6 +50,7 @@ export const preferencesSchema = z
   })
   .partial();
 export type PreferencesInput = z.input<typeof preferencesSchema>;
+export type Preferences = z.output<typeof preferencesSchema>;
 
 export const clubRoleSchema = z.enum(['member', 'mentor', 'organiser']);
 export type ClubRole = z.infer<typeof clubRoleSchema>;

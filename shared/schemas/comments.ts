@@ -4,8 +4,9 @@
  * schemas, so a comment too long is refused with the same words on both sides.
  */
 import { z } from 'zod';
-import type { FermentationDeviation } from '../brew-deviations';
-import { idSchema, pageCursorSchema, pageSizeSchema } from './common';
+import type { FermentationDeviation } from '../fermentation-deviations';
+import { idSchema, pageCursorSchema } from './common';
+import { pageSizeSchema } from './fields';
 import type { BrewDetail, BrewDeviation } from './brews';
 import type { FermentationReading, FermentationVerdict, PackagingRecord, TemperatureSummary } from './fermentation';
 

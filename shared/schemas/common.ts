@@ -8,15 +8,6 @@ export const idParamSchema = z.object({ id: idSchema });
 /** A page cursor as the server handed it out (`nextCursor`); opaque to the client. */
 export const pageCursorSchema = z.string().max(300, { error: 'This list has changed since; start again from the top.' }).optional();
 
-/** The page size of a list paged by key: `what` names one item, e.g. "brew day". */
-export const pageSizeSchema = (what: string, max: number, fallback: number) =>
-  z.coerce
-    .number({ error: 'Page size must be a number.' })
-    .int({ error: 'Page size must be a whole number.' })
-    .min(1, { error: `Ask for at least 1 ${what} a page.` })
-    .max(max, { error: `Ask for at most ${max} ${what}s a page.` })
-    .default(fallback);
-
 /** One page of a list paged by key: ask again with `cursor: nextCursor` for the next (null: the last page). */
 export interface Page<T> {
   items: T[];

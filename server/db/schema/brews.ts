@@ -14,7 +14,8 @@ import {
   varchar,
 } from 'drizzle-orm/mysql-core';
 import { brewStages, brewStatuses, photoMimeTypes, readingKinds, type BrewReading, type DecisionChoice } from '../../../shared/schemas/brews';
-import type { EquipmentProfile, InstrumentSnapshot } from '../../../shared/schemas/instruments';
+import type { InstrumentSnapshot } from '../../../shared/schemas/instruments';
+import type { EquipmentProfile } from '../../../shared/schemas/equipment';
 import type { RecipeTargets } from '../../../shared/schemas/recipes';
 import { clubs } from './clubs';
 import { recipes } from './recipes';
@@ -43,9 +44,9 @@ export const brews = mysqlTable(
     name: varchar('name', { length: 120 }).notNull(),
     status: mysqlEnum('status', brewStatuses).notNull().default('brewing'),
     brewedOn: date('brewed_on', { mode: 'string' }).notNull(),
-    /** RecipeTargets (shared/schemas/recipes.ts) at the start of the day. */
+    /** RecipeTargets (shared/schemas/recipes) at the start of the day. */
     targetsSnapshot: jsonDoc<RecipeTargets>('targets_snapshot').notNull(),
-    /** EquipmentProfile (shared/schemas/instruments.ts) at the start of the day. */
+    /** EquipmentProfile (shared/schemas/equipment.ts) at the start of the day. */
     equipmentSnapshot: jsonDoc<EquipmentProfile>('equipment_snapshot').notNull(),
     /** Today's boil-off rate, when the brewer changed it from the equipment profile's. */
     boilOffLPerHour: double('boil_off_l_per_hour'),

@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { Me } from '@shared/schemas/auth';
 import type { BrewDetail, BrewReading, BrewReadingPage } from '@shared/schemas/brews';
-import type { EquipmentProfile } from '@shared/schemas/instruments';
+import type { EquipmentProfile } from '@shared/schemas/equipment';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import { meQueryOptions } from '@/lib/auth';
 import { BrewLog } from './brew-log';

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { EquipmentProfile } from '@shared/schemas/instruments';
+import type { EquipmentProfile } from '@shared/schemas/equipment';
 import { api } from '@/lib/api-client';
 import { equipmentKeys } from './keys';
 

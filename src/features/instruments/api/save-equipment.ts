@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { EquipmentProfile, EquipmentProfileInput, EquipmentProfileUpdate } from '@shared/schemas/instruments';
+import type { EquipmentProfile, EquipmentProfileInput, EquipmentProfileUpdate } from '@shared/schemas/equipment';
 import { api } from '@/lib/api-client';
 import { equipmentKeys } from './keys';
 

@@ -2,7 +2,7 @@ import { Form, Formik, useFormikContext } from 'formik';
 import { CookingPot, Star, Trash2 } from 'lucide-react';
 import { useEffect, useId } from 'react';
 import { boilOffRateLPerHour, BrewMathError } from '@shared/brewmath';
-import { equipmentProfileInputSchema, type EquipmentProfile, type EquipmentProfileInput } from '@shared/schemas/instruments';
+import { equipmentProfileInputSchema, type EquipmentProfile, type EquipmentProfileInput } from '@shared/schemas/equipment';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { SaveNotice } from '@/components/ui/save-notice';

@@ -1,6 +1,6 @@
 import { Plus } from 'lucide-react';
 import { useState } from 'react';
-import { DEFAULT_EQUIPMENT, type EquipmentProfile } from '@shared/schemas/instruments';
+import { DEFAULT_EQUIPMENT, type EquipmentProfile } from '@shared/schemas/equipment';
 import { Button } from '@/components/ui/button';
 import { Loading } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';

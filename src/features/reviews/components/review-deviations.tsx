@@ -1,4 +1,5 @@
-import { describeDeviation, describeFermentationDeviation } from '@shared/brew-deviations';
+import { describeDeviation } from '@shared/brew-deviations';
+import { describeFermentationDeviation } from '@shared/fermentation-deviations';
 import { brewStageLabels } from '@shared/schemas/brews';
 import type { ReviewDeviation } from '@shared/schemas/comments';
 import type { Units } from '@/lib/units';

@@ -8,7 +8,7 @@ import {
   OG_AGREEMENT_SG,
   recipeBuGu,
   targetAbv,
-} from '@shared/schemas/recipes';
+} from '@shared/recipes/estimates';
 import { Figure } from '@/components/ui/figure';
 import { Notice } from '@/components/ui/notice';
 import { formatColour, useColourScale } from '@/lib/colour';

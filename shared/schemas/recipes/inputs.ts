@@ -1,17 +1,17 @@
 /**
- * Recipes: the request and response shapes, validated by the same zod schemas in the recipe form
- * and in the API (so a 400 and an inline error carry the same words). Everything is SI and
- * specific gravity; the form converts at its edges. Messages that quote a number give it in both
- * metric and US units, because the same message reaches brewers of either preference.
+ * Recipes: the request shapes, validated by the same zod schemas in the recipe form and in the API
+ * (so a 400 and an inline error carry the same words), and the vocabulary both sides share.
+ * Everything is SI and specific gravity; the form converts at its edges. Messages that quote a
+ * number give it in both metric and US units, because the same message reaches brewers of either
+ * preference. The answers are in responses.ts, the estimates in shared/recipes/estimates.ts.
  */
 import { z } from 'zod';
-import { abvPercent, apparentAttenuation } from '../brewmath/abv';
-import { boilOffRateLPerHour } from '../brewmath/boil';
-import { BrewMathError } from '../brewmath/errors';
-import { estimateOg, POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG, type FermentableKind } from '../brewmath/extract';
-import { LITRES_PER_US_GALLON } from '../brewmath/units';
-import { buToGu, ibuTinseth } from '../brewmath/bitterness';
-import { BEER_COLOUR_MAX_SRM, BEER_COLOUR_MIN_SRM, MALT_COLOUR_MAX_LOVIBOND, moreyColour, SRM_TO_EBC } from '../brewmath/colour';
+import { pageCursorSchema } from '../common';
+import { boilOffRateLPerHour } from '../../brewmath/boil';
+import { BrewMathError } from '../../brewmath/errors';
+import { POTENTIAL_MAX_POINTS_L_PER_KG, POTENTIAL_MIN_POINTS_L_PER_KG } from '../../brewmath/extract';
+import { BEER_COLOUR_MAX_SRM, BEER_COLOUR_MIN_SRM, MALT_COLOUR_MAX_LOVIBOND, SRM_TO_EBC } from '../../brewmath/colour';
+import { boundedNumber, num, pageSizeSchema, showF, showGal, type NumberRule } from '../fields';
 
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
@@ -73,69 +73,25 @@ export const RECIPE_LIMITS = {
 // ---------------------------------------------------------------------------------------------
 // Number fields with a brewer's messages
 
-const gal = (litres: number) => `${Number((litres / LITRES_PER_US_GALLON).toFixed(2))} gal`;
-const fahrenheit = (c: number) => `${Number((c * 1.8 + 32).toFixed(1))} °F`;
-
-interface NumberRule {
-  /** Lower-case noun phrase: "the batch volume". */
-  what: string;
-  /** Sentence-start label: "Batch volume". */
-  label: string;
-  min: number;
-  /** When true, the minimum itself is refused ("must be more than 0"). */
-  exclusiveMin?: boolean;
-  max: number;
-  /** Said when the value is out of range. */
-  rangeMessage: string;
-  integer?: boolean;
-  /** A temperature, not an amount: below the minimum is out of range, not "negative". */
-  rangeOnly?: boolean;
-}
-
-function numberField(rule: NumberRule) {
-  // One message per field, and no "abort": an aborted issue would stop the cross-field checks
-  // below from running, and the form should show every problem at once.
-  return z
-    .number({
-      error: (issue) => (issue.input === undefined || issue.input === null || issue.input === '' ? `Enter ${rule.what}.` : `${rule.label} must be a number.`),
-    })
-    .superRefine((v, ctx) => {
-      const message = numberProblem(rule, v);
-      if (message) ctx.addIssue({ code: 'custom', message, input: v });
-    });
-}
-
-function numberProblem(rule: NumberRule, v: number): string | null {
-  if (rule.min === 0 && !rule.rangeOnly) {
-    if (v < 0) return `${rule.label} cannot be negative.`;
-    if (rule.exclusiveMin && v === 0) return `${rule.label} must be more than 0.`;
-  } else if (rule.exclusiveMin ? v <= rule.min : v < rule.min) {
-    return rule.rangeMessage;
-  }
-  if (v > rule.max) return rule.rangeMessage;
-  if (rule.integer && !Number.isInteger(v)) return `${rule.label} must be a whole number.`;
-  return null;
-}
-
 function volumeField(what: string, label: string) {
-  return numberField({
+  return boundedNumber({
     what,
     label,
     min: 0,
     exclusiveMin: true,
     max: RECIPE_LIMITS.volumeL,
-    rangeMessage: `${label} above ${RECIPE_LIMITS.volumeL} L (${gal(RECIPE_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
+    rangeMessage: `${label} above ${RECIPE_LIMITS.volumeL} L (${showGal(RECIPE_LIMITS.volumeL)}) is more than Wortwise handles. Check the number.`,
   });
 }
 
 function temperatureField(what: string, label: string, minC: number, maxC: number) {
-  return numberField({
+  return boundedNumber({
     what,
     label,
     min: minC,
     max: maxC,
     rangeOnly: true,
-    rangeMessage: `${label} must be between ${minC} and ${maxC} °C (${fahrenheit(minC)} and ${fahrenheit(maxC)}).`,
+    rangeMessage: `${label} must be between ${minC} and ${maxC} °C (${showF(minC)} and ${showF(maxC)}).`,
   });
 }
 
@@ -146,7 +102,7 @@ function textField(what: string, max: number, required: boolean) {
 
 /** A number the author may leave empty: null (or absent) means "not set". */
 function optionalNumberField(rule: NumberRule) {
-  return numberField(rule).nullable().default(null);
+  return boundedNumber(rule).nullable().default(null);
 }
 
 const ebc = (srmOrLovibond: number) => `${Number((srmOrLovibond * SRM_TO_EBC).toFixed(0))} EBC`;
@@ -157,7 +113,7 @@ const ebc = (srmOrLovibond: number) => `${Number((srmOrLovibond * SRM_TO_EBC).to
 export const fermentableInputSchema = z.object({
   name: textField('a name for this fermentable', 120, true),
   kind: z.enum(fermentableKinds, { error: 'Choose grain, dry malt extract, liquid malt extract, sugar or other.' }),
-  amountKg: numberField({
+  amountKg: boundedNumber({
     what: 'the amount',
     label: 'Amount',
     min: 0,
@@ -165,7 +121,7 @@ export const fermentableInputSchema = z.object({
     max: RECIPE_LIMITS.fermentableKg,
     rangeMessage: `Amount above ${RECIPE_LIMITS.fermentableKg} kg is more than Wortwise handles. Check the number.`,
   }),
-  potentialPointsLPerKg: numberField({
+  potentialPointsLPerKg: boundedNumber({
     what: 'the extract potential',
     label: 'Potential',
     min: POTENTIAL_MIN_POINTS_L_PER_KG,
@@ -185,7 +141,7 @@ export type FermentableInput = z.input<typeof fermentableInputSchema>;
 
 export const hopInputSchema = z.object({
   name: textField('a name for this hop', 120, true),
-  amountG: numberField({
+  amountG: boundedNumber({
     what: 'the amount',
     label: 'Amount',
     min: 0,
@@ -193,14 +149,14 @@ export const hopInputSchema = z.object({
     max: RECIPE_LIMITS.hopG,
     rangeMessage: `Amount above ${RECIPE_LIMITS.hopG} g is more than Wortwise handles. Check the number.`,
   }),
-  minutes: numberField({
+  minutes: boundedNumber({
     what: 'the minutes it boils',
     label: 'Minutes',
     min: 0,
     max: RECIPE_LIMITS.boilMinutes,
     rangeMessage: `Minutes must be between 0 and ${RECIPE_LIMITS.boilMinutes}.`,
   }),
-  alphaAcidPercent: numberField({
+  alphaAcidPercent: boundedNumber({
     what: 'the alpha acid',
     label: 'Alpha acid',
     min: 0,
@@ -213,7 +169,7 @@ export type HopInput = z.input<typeof hopInputSchema>;
 
 export const mashStepInputSchema = z.object({
   tempC: temperatureField('the step temperature', 'Step temperature', 20, 100),
-  minutes: numberField({
+  minutes: boundedNumber({
     what: 'the step length',
     label: 'Step length',
     min: 0,
@@ -240,21 +196,21 @@ const recipeShape = {
   batchVolumeL: volumeField('the batch volume into the fermenter', 'Batch volume'),
   preBoilVolumeL: volumeField('the pre-boil volume', 'Pre-boil volume'),
   postBoilVolumeL: volumeField('the post-boil volume', 'Post-boil volume'),
-  boilMinutes: numberField({
+  boilMinutes: boundedNumber({
     what: 'the boil length',
     label: 'Boil length',
     min: 0,
     max: RECIPE_LIMITS.boilMinutes,
     rangeMessage: `Boil length must be between 0 and ${RECIPE_LIMITS.boilMinutes} minutes.`,
   }),
-  boilOffLPerHour: numberField({
+  boilOffLPerHour: boundedNumber({
     what: 'the boil-off rate',
     label: 'Boil-off rate',
     min: 0,
     max: RECIPE_LIMITS.boilOffLPerHour,
-    rangeMessage: `Boil-off above ${RECIPE_LIMITS.boilOffLPerHour} L (${gal(RECIPE_LIMITS.boilOffLPerHour)}) per hour is more than Wortwise handles. Check the number.`,
+    rangeMessage: `Boil-off above ${RECIPE_LIMITS.boilOffLPerHour} L (${showGal(RECIPE_LIMITS.boilOffLPerHour)}) per hour is more than Wortwise handles. Check the number.`,
   }),
-  efficiency: numberField({
+  efficiency: boundedNumber({
     what: 'the brewhouse efficiency',
     label: 'Brewhouse efficiency',
     min: 0,
@@ -262,7 +218,7 @@ const recipeShape = {
     max: 1,
     rangeMessage: 'Brewhouse efficiency must be above 0 % and at most 100 %.',
   }),
-  targetOg: numberField({
+  targetOg: boundedNumber({
     what: 'the target OG',
     label: 'Target OG',
     min: 1,
@@ -270,7 +226,7 @@ const recipeShape = {
     max: 1.2,
     rangeMessage: 'Target OG must be above 1.000 and at most 1.200 (about 44 °P).',
   }),
-  targetFg: numberField({
+  targetFg: boundedNumber({
     what: 'the target FG',
     label: 'Target FG',
     min: 0.98,
@@ -301,7 +257,7 @@ const recipeShape = {
     rangeOnly: true,
     rangeMessage: `Souring target pH must be between ${SOURING_PH_LIMITS.min} and ${SOURING_PH_LIMITS.max}; kettle sours usually aim for about 3.2 to 3.6 before the boil.`,
   }),
-  mashPhTarget: numberField({
+  mashPhTarget: boundedNumber({
     what: 'the mash pH target',
     label: 'Mash pH target',
     min: 4.5,
@@ -367,10 +323,10 @@ export function boilOffMismatch(pre: unknown, post: unknown, boilMinutes: unknow
     return { field: 'postBoilVolumeL', message: 'With no boil, the post-boil volume should equal the pre-boil volume.' };
   }
   const implied = impliedBoilOffLPerHour(pre, post, boilMinutes);
-  const impliedText = implied === null ? '' : ` The volumes imply about ${implied.toFixed(1)} L (${gal(implied)}) per hour.`;
+  const impliedText = implied === null ? '' : ` The volumes imply about ${implied.toFixed(1)} L (${showGal(implied)}) per hour.`;
   return {
     field: 'boilOffLPerHour',
-    message: `This boil-off rate does not match the volumes: over ${boilMinutes} minutes it would leave ${Math.max(predictedPostL, 0).toFixed(1)} L (${gal(Math.max(predictedPostL, 0))}), not the post-boil ${post.toFixed(1)} L (${gal(post)}).${impliedText}`,
+    message: `This boil-off rate does not match the volumes: over ${boilMinutes} minutes it would leave ${Math.max(predictedPostL, 0).toFixed(1)} L (${showGal(Math.max(predictedPostL, 0))}), not the post-boil ${post.toFixed(1)} L (${showGal(post)}).${impliedText}`,
   };
 }
 
@@ -392,7 +348,7 @@ export type RecipeData = z.output<typeof recipeInputSchema>;
 export const recipeUpdateSchema = z
   .object({
     ...recipeShape,
-    version: z.number({ error: 'The recipe version is missing; reload the recipe.' }).int().positive({ error: 'The recipe version is missing; reload the recipe.' }),
+    version: num({ notNumber: 'The recipe version is missing; reload the recipe.' }).int().positive({ error: 'The recipe version is missing; reload the recipe.' }),
   })
   .superRefine(crossChecks, { when: () => true });
 export type RecipeUpdateInput = z.input<typeof recipeUpdateSchema>;
@@ -411,8 +367,8 @@ export const listRecipesQuerySchema = z.object({
   sort: z.enum(recipeSorts, { error: 'Sort by name, style, og, abv or updated.' }).default('updated'),
   dir: z.enum(['asc', 'desc'], { error: 'Sort direction is asc or desc.' }).optional(),
   /** Where the previous page ended (its `nextCursor`); absent for the first page. */
-  cursor: z.string().max(300, { error: 'This list has changed since; start again from the top.' }).optional(),
-  pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int().min(1).max(100, { error: 'Ask for at most 100 recipes a page.' }).default(20),
+  cursor: pageCursorSchema,
+  pageSize: pageSizeSchema('recipe', 100, 20),
 });
 /** What a client asks for; the server fills in the defaults. */
 export interface ListRecipesQuery {
@@ -424,68 +380,6 @@ export interface ListRecipesQuery {
   pageSize?: number;
 }
 
-export interface RecipeListItem {
-  id: number;
-  name: string;
-  style: string;
-  ownerId: number;
-  ownerName: string;
-  isOwner: boolean;
-  version: number;
-  batchVolumeL: number;
-  targetOg: number;
-  targetFg: number;
-  abvPercent: number;
-  sharedWithClubIds: number[];
-  updatedAt: string;
-}
-
-/** One page of the list, paged by key: ask again with `cursor: nextCursor` for the next. No total is counted. */
-export interface RecipeList {
-  items: RecipeListItem[];
-  /** Null on the last page. */
-  nextCursor: string | null;
-  pageSize: number;
-}
-
-// ---------------------------------------------------------------------------------------------
-// Responses
-
-export interface Recipe extends RecipeData {
-  id: number;
-  ownerId: number;
-  ownerName: string;
-  version: number;
-  clonedFromId: number | null;
-  sharedWithClubIds: number[];
-  createdAt: string;
-  updatedAt: string;
-  /** What the signed-in user may do; the server enforces it regardless. */
-  permissions: { edit: boolean; share: boolean; delete: boolean; clone: boolean };
-  /** From the fermentables, efficiency and batch volume; null when they give no estimate. */
-  estimatedOg: number | null;
-  /** Tinseth from the hops; null with no hops. */
-  estimatedIbu: number | null;
-  /** Morey from the fermentables' colours; null while any colour is unknown. */
-  estimatedColourSrm: number | null;
-  /** Target IBU over target OG's gravity points; null without a target IBU. */
-  buToGu: number | null;
-  abvPercent: number;
-  apparentAttenuation: number;
-}
-
-/** One saved version in a recipe's history. */
-export interface RecipeVersionSummary {
-  version: number;
-  savedAt: string;
-  savedByName: string | null;
-}
-
-export interface RecipeVersion extends RecipeVersionSummary {
-  recipeId: number;
-  data: RecipeData;
-}
-
 export const recipeVersionParamsSchema = z.object({
   id: z.coerce.number({ error: 'The recipe id must be a number.' }).int().positive({ error: 'The recipe id must be a number.' }),
   version: z.coerce.number({ error: 'The version must be a number.' }).int().positive({ error: 'The version must be a whole number from 1.' }),
@@ -493,15 +387,10 @@ export const recipeVersionParamsSchema = z.object({
 
 export const sharingInputSchema = z.object({
   clubIds: z
-    .array(z.number({ error: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
+    .array(num({ notNumber: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
     .max(50, { error: 'Share with at most 50 clubs.' }),
 });
 export type SharingInput = z.input<typeof sharingInputSchema>;
-
-export interface RecipeSharing {
-  recipeId: number;
-  clubIds: number[];
-}
 
 // ---------------------------------------------------------------------------------------------
 // The targets a brew day is judged against (a snapshot; see server/recipes/service.ts)
@@ -546,165 +435,3 @@ export const recipeFileHeaderSchema = z.object({
   version: z.literal(RECIPE_FILE_VERSIONS_READ, { error: `Wortwise reads recipe files of versions ${RECIPE_FILE_VERSIONS_READ.join(' and ')}: "version" must be one of them.` }),
   recipe: z.record(z.string(), z.unknown(), { error: '"recipe" must be an object with the recipe in it.' }),
 });
-
-export interface RecipeFile {
-  format: typeof RECIPE_FILE_FORMAT;
-  version: typeof RECIPE_FILE_VERSION;
-  exportedAt: string;
-  recipe: RecipeData;
-}
-
-export interface RecipeImportResult {
-  recipe: Recipe;
-  /** Fields in the file that are not part of our format, left out of the saved recipe. */
-  ignored: { path: string; message: string }[];
-}
-
-// ---------------------------------------------------------------------------------------------
-// Numbers derived from a recipe, the same on screen and in the API
-
-/**
- * How our kinds map onto shared/brewmath's: only grain goes through the mash, so only grain is
- * scaled by the brewhouse efficiency; extracts, sugar and "other" (honey, fruit, lactose)
- * dissolve whole. Every recipe fermentable carries its own potential, so the extract kind chosen
- * for sugar and other never supplies a default.
- */
-const brewmathKind: Record<RecipeFermentableKind, FermentableKind> = {
-  grain: 'grain',
-  'dry-extract': 'dme',
-  'liquid-extract': 'lme',
-  sugar: 'sucrose',
-  other: 'sucrose',
-};
-
-export type OgEstimate = { og: number; reason?: undefined } | { og: null; reason: string };
-
-/**
- * OG expected from the fermentables at the brewhouse efficiency, in the batch volume into the
- * fermenter. Brewhouse efficiency is extract into the fermenter over the grain's laboratory
- * extract, so the fermenter volume is the one it divides by
- * (docs/decisions/0004-recipe-storage-and-versions.md).
- */
-export function estimateRecipeOg(recipe: { fermentables?: readonly Partial<Record<keyof FermentableInput, unknown>>[]; efficiency?: unknown; batchVolumeL?: unknown }): OgEstimate {
-  const fermentables = recipe.fermentables ?? [];
-  if (fermentables.length === 0) return { og: null, reason: 'Add fermentables to see an estimate.' };
-  if (!isNum(recipe.batchVolumeL) || recipe.batchVolumeL <= 0) return { og: null, reason: 'Enter the batch volume to see an estimate.' };
-  if (!isNum(recipe.efficiency) || recipe.efficiency <= 0 || recipe.efficiency > 1) return { og: null, reason: 'Enter the brewhouse efficiency to see an estimate.' };
-  const mapped = [];
-  for (const f of fermentables) {
-    const kind = f.kind as RecipeFermentableKind;
-    if (!isNum(f.amountKg) || !isNum(f.potentialPointsLPerKg) || !(kind in brewmathKind)) {
-      return { og: null, reason: 'Complete every fermentable (amount and potential) to see an estimate.' };
-    }
-    mapped.push({ kg: f.amountKg, kind: brewmathKind[kind], potentialPointsLPerKg: f.potentialPointsLPerKg });
-  }
-  try {
-    return { og: estimateOg({ fermentables: mapped, efficiency: recipe.efficiency, volumeL: recipe.batchVolumeL }) };
-  } catch (error) {
-    if (error instanceof BrewMathError) return { og: null, reason: error.message };
-    throw error;
-  }
-}
-
-/** Simple ABV and apparent attenuation from target OG and FG, or null while they are not a pair. */
-export function targetAbv(targetOg: unknown, targetFg: unknown): { abvPercent: number; apparentAttenuation: number } | null {
-  if (!isNum(targetOg) || !isNum(targetFg)) return null;
-  try {
-    return { abvPercent: abvPercent(targetOg, targetFg), apparentAttenuation: apparentAttenuation(targetOg, targetFg) };
-  } catch (error) {
-    if (error instanceof BrewMathError) return null;
-    throw error;
-  }
-}
-
-/** How close the estimate must be to the target to call them in agreement: 2 gravity points (common practice, no source). */
-export const OG_AGREEMENT_SG = 0.002;
-
-// ---------------------------------------------------------------------------------------------
-// Bitterness and colour estimates (shared/brewmath: Tinseth, Morey)
-
-export type IbuEstimateResult = { ibu: number; assumptions: string[]; reason?: undefined } | { ibu: null; assumptions: string[]; reason: string };
-export type ColourEstimateResult = { srm: number; beyondFit: boolean; reason?: undefined } | { srm: null; beyondFit: false; reason: string };
-
-type PartialRecipe = {
-  fermentables?: readonly Partial<Record<keyof FermentableInput, unknown>>[];
-  hops?: readonly Partial<Record<keyof HopInput, unknown>>[];
-  efficiency?: unknown;
-  batchVolumeL?: unknown;
-  preBoilVolumeL?: unknown;
-  postBoilVolumeL?: unknown;
-  targetOg?: unknown;
-};
-
-/**
- * The average gravity the hops boil in, as Tinseth asks: midway between the pre-boil gravity and
- * the OG, the pre-boil gravity following from the OG by conserved extract over the boil's volumes.
- */
-export function recipeBoilSg(og: number, preBoilVolumeL: unknown, postBoilVolumeL: unknown): number {
-  if (!isNum(preBoilVolumeL) || !isNum(postBoilVolumeL) || preBoilVolumeL <= 0 || postBoilVolumeL <= 0 || postBoilVolumeL > preBoilVolumeL) return og;
-  const preBoilSg = 1 + ((og - 1) * postBoilVolumeL) / preBoilVolumeL;
-  return (preBoilSg + og) / 2;
-}
-
-/**
- * Bitterness from the hops by Tinseth, in the batch volume (as the OG estimate), at the recipe's
- * boil gravity from the estimated OG (the target OG while there is no estimate). No hops: no
- * estimate, never "0 IBU".
- */
-export function estimateRecipeIbu(recipe: PartialRecipe): IbuEstimateResult {
-  const hops = recipe.hops ?? [];
-  if (hops.length === 0) return { ibu: null, assumptions: [], reason: 'No hops, so no bitterness estimate.' };
-  if (!isNum(recipe.batchVolumeL) || recipe.batchVolumeL <= 0) return { ibu: null, assumptions: [], reason: 'Enter the batch volume to see an estimate.' };
-  const og = estimateRecipeOg(recipe).og ?? (isNum(recipe.targetOg) && recipe.targetOg > 1 && recipe.targetOg <= 1.2 ? recipe.targetOg : null);
-  if (og === null) return { ibu: null, assumptions: [], reason: 'Enter the target OG or the fermentables to see an estimate.' };
-  const mapped = [];
-  for (const h of hops) {
-    if (!isNum(h.amountG) || !isNum(h.minutes) || !isNum(h.alphaAcidPercent)) {
-      return { ibu: null, assumptions: [], reason: 'Complete every hop (amount, minutes and alpha acid) to see an estimate.' };
-    }
-    mapped.push({ massG: h.amountG, boilMinutes: h.minutes, alphaAcidPercent: h.alphaAcidPercent });
-  }
-  try {
-    const result = ibuTinseth({ hops: mapped, boilSg: recipeBoilSg(og, recipe.preBoilVolumeL, recipe.postBoilVolumeL), volumeL: recipe.batchVolumeL });
-    return { ibu: result.ibu, assumptions: result.assumptions };
-  } catch (error) {
-    if (error instanceof BrewMathError) return { ibu: null, assumptions: [], reason: error.message };
-    throw error;
-  }
-}
-
-/** Colour from the fermentables by Morey, in the batch volume. Every fermentable needs its colour. */
-export function estimateRecipeColour(recipe: PartialRecipe): ColourEstimateResult {
-  const fermentables = recipe.fermentables ?? [];
-  if (fermentables.length === 0) return { srm: null, beyondFit: false, reason: 'Add fermentables to see a colour estimate.' };
-  if (!isNum(recipe.batchVolumeL) || recipe.batchVolumeL <= 0) return { srm: null, beyondFit: false, reason: 'Enter the batch volume to see an estimate.' };
-  const grist = [];
-  for (const f of fermentables) {
-    if (!isNum(f.amountKg) || !isNum(f.colourLovibond)) {
-      return { srm: null, beyondFit: false, reason: 'Give every fermentable its colour to see a colour estimate.' };
-    }
-    grist.push({ massKg: f.amountKg, colourLovibond: f.colourLovibond });
-  }
-  try {
-    const result = moreyColour(grist, recipe.batchVolumeL);
-    return { srm: result.srm, beyondFit: result.beyondFit };
-  } catch (error) {
-    if (error instanceof BrewMathError) return { srm: null, beyondFit: false, reason: error.message };
-    throw error;
-  }
-}
-
-/** BU:GU from a bitterness and an OG, or null while either is missing. */
-export function recipeBuGu(ibu: unknown, og: unknown): number | null {
-  if (!isNum(ibu) || !isNum(og)) return null;
-  try {
-    return buToGu(ibu, og);
-  } catch (error) {
-    if (error instanceof BrewMathError) return null;
-    throw error;
-  }
-}
-
-/** How close the estimate must be to call it in agreement: 3 IBU and 1 SRM (common practice, no source). */
-export const IBU_AGREEMENT = 3;
-export const COLOUR_AGREEMENT_SRM = 1;

@@ -1,9 +1,11 @@
 /**
- * Instruments and equipment: the request and response shapes shared by the API and the forms.
- * SI inside (°C, litres, SG); the forms convert at the edge.
+ * Instruments: the request shapes shared by the API and the forms (creating, editing and
+ * calibrating), and their vocabulary. SI inside (°C, SG); the forms convert at the edge. The
+ * answers and the calibration snapshot a reading keeps are in responses.ts; kettles in ../equipment.ts.
  */
 import { z } from 'zod';
-import { DEFAULT_COOLING_SHRINKAGE, DEFAULT_WCF, ELEVATION_MAX_M, ELEVATION_MIN_M, WCF_MAX, WCF_MIN } from '../brewmath';
+import { DEFAULT_WCF, ELEVATION_MAX_M, ELEVATION_MIN_M, WCF_MAX, WCF_MIN } from '../../brewmath';
+import { num } from '../fields';
 
 export const instrumentKinds = ['hydrometer', 'refractometer', 'thermometer', 'ph_meter'] as const;
 export type InstrumentKind = (typeof instrumentKinds)[number];
@@ -40,8 +42,6 @@ export type WcfSource = (typeof wcfSources)[number];
 // ---------------------------------------------------------------------------------------------
 // Field schemas, each with a message a brewer can act on.
 
-const finite = (label: string) => z.number({ error: `${label}: enter a number.` });
-
 export const instrumentNameSchema = z
   .string({ error: 'Give the instrument a name.' })
   .trim()
@@ -50,31 +50,31 @@ export const instrumentNameSchema = z
 
 const notesSchema = z.string().trim().max(500, { error: 'Use at most 500 characters.' }).nullish();
 
-export const calibrationTempSchema = finite('Calibration temperature')
+export const calibrationTempSchema = num({ notNumber: 'Calibration temperature: enter a number.' })
   .min(HYDROMETER_CALIBRATION_MIN_C, { error: 'Hydrometers are calibrated between 10 and 30 °C (usually 20 °C or 15.56 °C / 60 °F).' })
   .max(HYDROMETER_CALIBRATION_MAX_C, { error: 'Hydrometers are calibrated between 10 and 30 °C (usually 20 °C or 15.56 °C / 60 °F).' });
 
 const wcfMessage = `The wort correction factor must be between ${WCF_MIN} and ${WCF_MAX}; most refractometers need about 1.00 to 1.10.`;
-export const wcfSchema = finite('Wort correction factor').min(WCF_MIN, { error: wcfMessage }).max(WCF_MAX, { error: wcfMessage });
+export const wcfSchema = num({ notNumber: 'Wort correction factor: enter a number.' }).min(WCF_MIN, { error: wcfMessage }).max(WCF_MAX, { error: wcfMessage });
 
 const offsetMessage = `An offset over ${THERMOMETER_OFFSET_MAX_C} °C means the thermometer is broken or was misread: replace it rather than correct it.`;
-export const offsetSchema = finite('Offset').min(-THERMOMETER_OFFSET_MAX_C, { error: offsetMessage }).max(THERMOMETER_OFFSET_MAX_C, { error: offsetMessage });
+export const offsetSchema = num({ notNumber: 'Offset: enter a number.' }).min(-THERMOMETER_OFFSET_MAX_C, { error: offsetMessage }).max(THERMOMETER_OFFSET_MAX_C, { error: offsetMessage });
 
-export const hydrometerResolutionSchema = finite('Scale step')
+export const hydrometerResolutionSchema = num({ notNumber: 'Scale step: enter a number.' })
   .min(0.0001, { error: 'The scale step is the gap between two marks on the hydrometer: between 0.0001 and 0.005 (usually 0.001).' })
   .max(0.005, { error: 'The scale step is the gap between two marks on the hydrometer: between 0.0001 and 0.005 (usually 0.001).' });
 
-export const phResolutionSchema = finite('Resolution')
+export const phResolutionSchema = num({ notNumber: 'Resolution: enter a number.' })
   .positive({ error: 'The resolution is the smallest step the meter shows, e.g. 0.01.' })
   .max(0.5, { error: 'A meter that shows only 0.5 pH steps cannot tell a good mash from a poor one.' });
 
-export const reminderDaysSchema = finite('Reminder interval')
+export const reminderDaysSchema = num({ notNumber: 'Reminder interval: enter a number.' })
   .int({ error: 'Use whole days.' })
   .min(1, { error: 'Choose between 1 and 365 days.' })
   .max(365, { error: 'Calibrate at least once a year: choose 365 days or fewer.' });
 
 const bufferSchema = (label: string) =>
-  finite(label).min(1, { error: 'Calibration buffers lie between pH 1 and 13.' }).max(13, { error: 'Calibration buffers lie between pH 1 and 13.' });
+  num({ notNumber: `${label}: enter a number.` }).min(1, { error: 'Calibration buffers lie between pH 1 and 13.' }).max(13, { error: 'Calibration buffers lie between pH 1 and 13.' });
 
 /**
  * The last calendar day anywhere on Earth (UTC+14), so a brewer ahead of UTC can record today's
@@ -91,7 +91,7 @@ export const pastDateSchema = z
   .refine((d) => d <= latestTodayIso(), { error: 'The calibration date cannot be in the future.' })
   .refine((d) => d >= '2000-01-01', { error: 'Enter a date after 2000.' });
 
-export const elevationSchema = finite('Elevation')
+export const elevationSchema = num({ notNumber: 'Elevation: enter a number.' })
   .min(ELEVATION_MIN_M, { error: `Elevation must be between ${ELEVATION_MIN_M} and ${ELEVATION_MAX_M} m.` })
   .max(ELEVATION_MAX_M, { error: `Elevation must be between ${ELEVATION_MIN_M} and ${ELEVATION_MAX_M} m.` });
 
@@ -164,11 +164,11 @@ export const calibrationMethods = ['created', 'wcf-pairs', 'thermometer-check', 
 export type CalibrationMethod = (typeof calibrationMethods)[number];
 
 export const wcfPairInputSchema = z.object({
-  brix: finite('Brix').min(0, { error: 'Brix is between 0 and 40.' }).max(40, { error: 'Brix is between 0 and 40.' }),
+  brix: num({ notNumber: 'Brix: enter a number.' }).min(0, { error: 'Brix is between 0 and 40.' }).max(40, { error: 'Brix is between 0 and 40.' }),
   /** The hydrometer as read. */
-  sg: finite('Hydrometer reading').min(1, { error: 'Unfermented wort reads above 1.000.' }).max(1.2, { error: 'A hydrometer reading is below 1.200.' }),
+  sg: num({ notNumber: 'Hydrometer reading: enter a number.' }).min(1, { error: 'Unfermented wort reads above 1.000.' }).max(1.2, { error: 'A hydrometer reading is below 1.200.' }),
   /** When given, the reading is corrected from this temperature to the hydrometer's calibration temperature. */
-  sampleTempC: finite('Sample temperature')
+  sampleTempC: num({ notNumber: 'Sample temperature: enter a number.' })
     .min(0, { error: 'Read the sample between 0 and 60 °C; cool hot wort first.' })
     .max(60, { error: 'Read the sample between 0 and 60 °C; cool hot wort first.' })
     .nullish(),
@@ -190,7 +190,7 @@ const wcfPairsCalibration = z.object({
 });
 
 const readingTempSchema = (label: string, min: number, max: number, hint: string) =>
-  finite(label).min(min, { error: hint }).max(max, { error: hint });
+  num({ notNumber: `${label}: enter a number.` }).min(min, { error: hint }).max(max, { error: hint });
 
 const thermometerCheckCalibration = z
   .object({
@@ -252,169 +252,5 @@ export const settableByKind: Record<InstrumentKind, readonly ('calibrationTempC'
   thermometer: ['offsetC'],
   ph_meter: ['resolutionPh', 'reminderDays'],
 };
-
-// ---------------------------------------------------------------------------------------------
-// The calibration snapshot a reading keeps (see docs/decisions/0005-readings-keep-their-calibration.md).
-
-const snapshotBase = {
-  /** null for a common-practice default used without a saved instrument. */
-  instrumentId: z.number().int().positive().nullable(),
-  name: z.string(),
-  /** The calibration history entry in force when the snapshot was taken, if any. */
-  calibrationId: z.number().int().positive().nullable(),
-};
-
-export const hydrometerSnapshotSchema = z.object({
-  ...snapshotBase,
-  kind: z.literal('hydrometer'),
-  calibrationTempC: z.number(),
-  /** Absent in snapshots taken before hydrometers had a scale step: read as 0.001. */
-  resolutionSg: z.number().optional(),
-});
-export const refractometerSnapshotSchema = z.object({ ...snapshotBase, kind: z.literal('refractometer'), wcf: z.number(), wcfSource: z.enum(wcfSources) });
-export const thermometerSnapshotSchema = z.object({
-  ...snapshotBase,
-  kind: z.literal('thermometer'),
-  offsetC: z.number(),
-  /** Two-point (ice and boil) correction: true = (reading − offsetC) × scale; absent means 1. */
-  scale: z.number().optional(),
-  checkedOn: z.string().nullable(),
-});
-export const phMeterSnapshotSchema = z.object({
-  ...snapshotBase,
-  kind: z.literal('ph_meter'),
-  resolutionPh: z.number(),
-  calibratedOn: z.string().nullable(),
-  reminderDays: z.number().int(),
-  bufferLowPh: z.number().nullable(),
-  bufferHighPh: z.number().nullable(),
-});
-
-export const instrumentSnapshotSchema = z.discriminatedUnion('kind', [hydrometerSnapshotSchema, refractometerSnapshotSchema, thermometerSnapshotSchema, phMeterSnapshotSchema]);
-export type InstrumentSnapshot = z.infer<typeof instrumentSnapshotSchema>;
-export type HydrometerSnapshot = z.infer<typeof hydrometerSnapshotSchema>;
-export type RefractometerSnapshot = z.infer<typeof refractometerSnapshotSchema>;
-export type ThermometerSnapshot = z.infer<typeof thermometerSnapshotSchema>;
-export type PhMeterSnapshot = z.infer<typeof phMeterSnapshotSchema>;
-
-// ---------------------------------------------------------------------------------------------
-// Responses.
-
-export interface Instrument {
-  id: number;
-  kind: InstrumentKind;
-  name: string;
-  notes: string | null;
-  archived: boolean;
-  calibrationTempC: number | null;
-  resolutionSg: number | null;
-  wcf: number | null;
-  wcfSource: WcfSource | null;
-  offsetC: number | null;
-  /** Date (YYYY-MM-DD) of the last thermometer check. */
-  offsetCheckedOn: string | null;
-  resolutionPh: number | null;
-  /** Date (YYYY-MM-DD) of the last two-point calibration. */
-  calibratedOn: string | null;
-  bufferLowPh: number | null;
-  bufferHighPh: number | null;
-  reminderDays: number | null;
-  createdAt: string;
-  updatedAt: string;
-  /** What a reading taken now would keep. */
-  snapshot: InstrumentSnapshot;
-}
-
-export interface CalibrationEntry {
-  id: number;
-  instrumentId: number;
-  method: CalibrationMethod;
-  /** What the brewer entered. */
-  inputs: Record<string, unknown>;
-  /** What was worked out from it (per-pair factors, offsets, expected boiling point). */
-  result: Record<string, unknown> | null;
-  before: InstrumentSnapshot | null;
-  after: InstrumentSnapshot;
-  createdAt: string;
-}
-
-export interface CalibrateResponse {
-  instrument: Instrument;
-  calibration: CalibrationEntry;
-}
-
-// ---------------------------------------------------------------------------------------------
-// Equipment: the brewer's kettle and its losses.
-
-/** Common-practice defaults used until a brewer saves their own (common practice, no source). */
-export const DEFAULT_EQUIPMENT = {
-  name: 'My kettle',
-  boilOffLPerHour: 4,
-  trubLossL: 1,
-  deadSpaceL: 0.5,
-  coolingShrinkage: DEFAULT_COOLING_SHRINKAGE,
-  elevationM: null,
-  kettleCapacityL: null,
-} as const;
-
-export const equipmentNameSchema = z
-  .string({ error: 'Give the kettle a name.' })
-  .trim()
-  .min(1, { error: 'Give the kettle a name.' })
-  .max(80, { error: 'Use at most 80 characters.' });
-
-const litres = (label: string, max: number) =>
-  finite(label).min(0, { error: `${label} cannot be below 0 L.` }).max(max, { error: `${label} above ${max} L is beyond a home brewery.` });
-
-export const boilOffMeasurementSchema = z
-  .object({
-    startL: finite('Starting volume').positive({ error: 'The starting volume must be more than 0 L.' }).max(1000, { error: 'Use at most 1000 L.' }),
-    endL: finite('Ending volume').positive({ error: 'The ending volume must be more than 0 L.' }).max(1000, { error: 'Use at most 1000 L.' }),
-    minutes: finite('Boil time').positive({ error: 'The boil time must be more than 0 minutes.' }).max(600, { error: 'Use at most 600 minutes.' }),
-  })
-  .superRefine((v, ctx) => {
-    if (typeof v.startL === 'number' && typeof v.endL === 'number' && v.endL > v.startL) {
-      ctx.addIssue({ code: 'custom', path: ['endL'], message: 'The ending volume is above the starting one; a boil only loses volume. Measure both hot, in the kettle.' });
-    }
-  });
-export type BoilOffMeasurementInput = z.input<typeof boilOffMeasurementSchema>;
-
-export const equipmentProfileInputSchema = z.object({
-  name: equipmentNameSchema,
-  boilOffLPerHour: finite('Boil-off rate').min(0, { error: 'The boil-off rate cannot be below 0 L/h.' }).max(30, { error: 'A boil-off above 30 L/h is beyond a home kettle.' }),
-  trubLossL: litres('Trub loss', 50),
-  deadSpaceL: litres('Dead space', 50),
-  coolingShrinkage: finite('Cooling shrinkage')
-    .min(0, { error: 'Cooling shrinkage is between 0 and 10 %.' })
-    .max(0.1, { error: 'Cooling shrinkage is between 0 and 10 % (about 4 % is usual).' }),
-  elevationM: elevationSchema.nullish(),
-  kettleCapacityL: finite('Kettle size').positive({ error: 'The kettle size must be more than 0 L.' }).max(1000, { error: 'A kettle above 1000 L is beyond a home brewery.' }).nullish(),
-  /** When given, the boil-off rate is worked out from it (start and end volume, minutes of boil). */
-  boilOffMeasurement: boilOffMeasurementSchema.nullish(),
-  isDefault: z.boolean({ error: 'Default is yes or no.' }).optional(),
-});
-export type EquipmentProfileInput = z.input<typeof equipmentProfileInputSchema>;
-
-export const equipmentProfileUpdateSchema = equipmentProfileInputSchema.partial();
-export type EquipmentProfileUpdate = z.input<typeof equipmentProfileUpdateSchema>;
-
-export interface EquipmentProfile {
-  /** null when these are the common-practice defaults, not a saved profile. */
-  id: number | null;
-  name: string;
-  boilOffLPerHour: number;
-  trubLossL: number;
-  deadSpaceL: number;
-  /** A fraction: 0.04 is 4 %. */
-  coolingShrinkage: number;
-  elevationM: number | null;
-  kettleCapacityL: number | null;
-  isDefault: boolean;
-  boilOffMeasurement: { startL: number; endL: number; minutes: number; measuredAt: string } | null;
-  source: 'saved' | 'common-practice';
-  /** Said plainly when the values are defaults. */
-  note: string | null;
-  updatedAt: string | null;
-}
 
 export { DEFAULT_WCF };

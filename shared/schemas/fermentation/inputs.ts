@@ -1,12 +1,11 @@
 /**
- * The fermentation log: request and response shapes shared by the API and the forms. SI inside
- * (°C, litres, grams, SG); the forms convert at their edges. Messages that quote a limit give it
- * in metric and US units, because the same message reaches brewers of either preference.
+ * The fermentation log: the request shapes shared by the API and the forms (readings, packaging,
+ * settings, the CSV import's mapping), and their vocabulary. SI inside (°C, litres, grams, SG);
+ * the forms convert at their edges. Messages that quote a limit give it in metric and US units,
+ * because the same message reaches brewers of either preference. The answers are in responses.ts.
  */
 import { z } from 'zod';
-import { num, ranged, showF, showGal } from './fields';
-import type { FgState } from '../brewmath';
-import type { InstrumentSnapshot } from './instruments';
+import { num, ranged, showF, showGal } from '../fields';
 
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
@@ -110,8 +109,7 @@ export const fermenterTempSchema = ranged(
 
 const noteSchema = z.string({ error: 'The note must be text.' }).trim().max(500, { error: 'Use at most 500 characters.' }).default('');
 
-const instrumentIdSchema = z
-  .number({ error: 'Pick an instrument.' })
+const instrumentIdSchema = num({ notNumber: 'Pick an instrument.' })
   .int({ error: 'Pick an instrument.' })
   .positive({ error: 'Pick an instrument.' })
   .nullable()
@@ -235,7 +233,7 @@ export const csvFieldLabels: Record<CsvField, string> = {
   note: 'Note',
 };
 
-const columnSchema = z.number({ error: 'Choose a column.' }).int().min(0).max(199, { error: 'Choose a column.' }).nullable().default(null);
+const columnSchema = num({ notNumber: 'Choose a column.' }).int().min(0).max(199, { error: 'Choose a column.' }).nullable().default(null);
 
 /** Which file column (0-based) feeds each of our fields; null when the file has none. */
 export const csvMappingSchema = z
@@ -287,217 +285,3 @@ export const CSV_MAX_ROWS = 20_000;
 export const CSV_MAX_BYTES = 5 * 1024 * 1024;
 /** At most this many row problems are listed; the count says how many there were. */
 export const CSV_MAX_ROW_ERRORS = 100;
-
-// ---------------------------------------------------------------------------------------------
-// Responses
-
-export interface FermentationReading {
-  id: number;
-  brewId: number;
-  kind: FermentationReadingKind;
-  method: FermentationMethod;
-  instrumentId: number | null;
-  /** The instrument as it was calibrated when the reading was taken. */
-  instrument: InstrumentSnapshot;
-  raw: FermentationRaw;
-  /** SG for gravity (at the hydrometer's calibration temperature, or the alcohol-corrected estimate), °C for temperature. */
-  corrected: number;
-  correction: Record<string, unknown> | null;
-  /** An alcohol-corrected refractometer estimate: never proves FG on its own. */
-  estimate: boolean;
-  warnings: string[];
-  takenAt: string;
-  /** Days from pitching. */
-  day: number;
-  note: string;
-  source: ReadingSource;
-  createdAt: string;
-}
-
-export interface FermentationVerdict {
-  state: FgState;
-  /** In words, for the banner. */
-  reason: string;
-  /** Refractometer estimates look settled, but only a hydrometer can prove it. */
-  needsHydrometer: boolean;
-  daysSincePitch: number;
-  latestSg: number | null;
-  /** When the next gravity reading is worth taking; null once stable. */
-  nextCheckAt: string | null;
-}
-
-export interface TemperatureExcursion {
-  readingId: number | null;
-  takenAt: string;
-  tempC: number;
-  direction: 'warm' | 'cold';
-  /** How far outside the recipe's range, °C. */
-  byC: number;
-}
-
-/** An API answer lists at most this many temperature excursions, the latest; the count covers them all. */
-export const EXCURSIONS_LISTED = 20;
-
-export interface TemperatureRange {
-  minC: number;
-  maxC: number;
-  count: number;
-  from: string;
-  to: string;
-}
-
-export interface TemperatureSummary {
-  /** The recipe's fermentation range, °C. */
-  target: { minC: number; maxC: number } | null;
-  last24h: TemperatureRange | null;
-  overall: TemperatureRange | null;
-  latest: { takenAt: string; tempC: number } | null;
-  /** Readings outside the range, oldest first; an API answer lists only the latest few (EXCURSIONS_LISTED). */
-  excursions: TemperatureExcursion[];
-  /** How many readings were outside the range, listed or not. */
-  excursionCount: number;
-  /** Within any 24 hours the temperature moved by more than this. */
-  largestSwing24hC: number | null;
-  swingFlagged: boolean;
-}
-
-export interface AbvFigures {
-  apparentAttenuation: number;
-  /** (OG − FG) × 131.25 */
-  abvSimple: number;
-  /** The Balling-based estimate in shared/brewmath/abv.ts */
-  abvExact: number;
-}
-
-export interface FermentationProgress {
-  og: number | null;
-  ogSource: 'measured' | 'target';
-  current: (AbvFigures & { sg: number; estimate: boolean; takenAt: string }) | null;
-  target: (AbvFigures & { og: number; fg: number }) | null;
-  /** Why a figure is missing, in words. */
-  note: string | null;
-}
-
-export interface PackagingRecord {
-  id: number;
-  brewId: number;
-  container: PackagingContainer;
-  volumeL: number;
-  warmestTempC: number;
-  targetCo2Volumes: number;
-  sugar: PackagingSugar;
-  /** Worked out by primingSugarG; null without priming sugar. */
-  primingSugarG: number | null;
-  residualCo2Volumes: number;
-  /** The verdict when it was packaged. */
-  verdictState: FgState;
-  verdictReason: string;
-  override: boolean;
-  overrideReason: string;
-  note: string;
-  packagedAt: string;
-  createdAt: string;
-}
-
-export interface ScheduledReminder {
-  kind: ReminderKind;
-  dueAt: string;
-  sentAt: string | null;
-  outcome: 'sent' | 'skipped' | 'failed' | null;
-}
-
-export interface FermentationBrew {
-  id: number;
-  name: string;
-  status: string;
-  ownerId: number;
-  ownerName: string;
-  isOwner: boolean;
-  pitchedAt: string | null;
-  brewedOn: string | null;
-  targetOg: number | null;
-  targetFg: number | null;
-  fermentationTempMinC: number | null;
-  fermentationTempMaxC: number | null;
-  batchVolumeL: number | null;
-  /** Measured into the fermenter with the brew day's OG reading, when it was given. */
-  fermenterVolumeL: number | null;
-  /** The brew day's measured OG, corrected. */
-  og: number | null;
-}
-
-export interface FermentationLog {
-  brew: FermentationBrew;
-  readings: FermentationReading[];
-  verdict: FermentationVerdict | null;
-  temperature: TemperatureSummary;
-  progress: FermentationProgress;
-  packaging: PackagingRecord | null;
-  /** The owner's reminder setting (null for a club reader). */
-  remindersEnabled: boolean | null;
-  reminders: ScheduledReminder[];
-  /** The server's clock, so "day N" on the page matches the verdict. */
-  now: string;
-}
-
-/**
- * The answer to a new reading: the reading and the parts of the log it changes (verdict,
- * temperature summary, progress, reminders), never the whole readings list.
- */
-export interface FermentationReadingCreated {
-  reading: FermentationReading;
-  /** The same reading was already saved (a retry after a lost answer). */
-  duplicate: boolean;
-  verdict: FermentationVerdict | null;
-  temperature: TemperatureSummary;
-  progress: FermentationProgress;
-  reminders: ScheduledReminder[];
-  now: string;
-}
-
-export interface CsvRowError {
-  /** Spreadsheet row number: the header is row 1. */
-  row: number;
-  field: CsvField | null;
-  message: string;
-}
-
-export interface CsvPreviewRow {
-  row: number;
-  cells: string[];
-  reading: {
-    takenAt: string;
-    kind: FermentationReadingKind;
-    method: FermentationMethod;
-    value: number;
-    unit: string;
-    instrument: string | null;
-    corrected: number | null;
-    duplicate: boolean;
-  } | null;
-  error: string | null;
-}
-
-export interface CsvPreview {
-  delimiter: string;
-  header: string[] | null;
-  columnCount: number;
-  rowCount: number;
-  mapping: CsvMapping;
-  /** The mapping was guessed from the header (the client may change it). */
-  suggested: boolean;
-  rows: CsvPreviewRow[];
-  errors: CsvRowError[];
-  errorCount: number;
-  /** Rows that are already in the log (or twice in the file): they will be skipped. */
-  duplicateCount: number;
-  newCount: number;
-  /** Why the mapping cannot be used yet, per field (e.g. `columns.value`); null when it can. */
-  mappingErrors: Record<string, string> | null;
-}
-
-export interface CsvImportResult {
-  added: number;
-  skipped: number;
-  log: FermentationLog;
-}

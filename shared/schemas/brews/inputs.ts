@@ -1,14 +1,14 @@
 /**
- * Brew days: the request and response shapes shared by the API and the brew-day forms. SI inside
- * (°C, litres, SG); the forms convert at their edges. Messages that quote a limit give it in both
- * metric and US units, because the same message reaches brewers of either preference.
+ * Brew days: the request shapes shared by the API and the brew-day forms, and their vocabulary.
+ * SI inside (°C, litres, SG); the forms convert at their edges. Messages that quote a limit give it
+ * in both metric and US units, because the same message reaches brewers of either preference. The
+ * answers are in responses.ts.
  */
 import { z } from 'zod';
-import { idSchema } from './common';
-import { num, ranged, showF, showGal } from './fields';
-import { boilCheckInputSchema } from './boil-check';
-import type { InstrumentKind, InstrumentSnapshot, EquipmentProfile } from './instruments';
-import type { RecipeTargets } from './recipes';
+import { idSchema, pageCursorSchema } from '../common';
+import { num, pageSizeSchema, ranged, showF, showGal } from '../fields';
+import { boilCheckInputSchema } from '../boil-check';
+import type { InstrumentKind } from '../instruments';
 
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
@@ -180,8 +180,7 @@ export const minutesLeftSchema = num('the minutes left', 'Minutes left')
   .refine((v) => v <= L.minutesLeft.max, { error: `Minutes left above ${L.minutesLeft.max} is longer than any boil. Check the number.`, abort: true });
 
 const noteSchema = z.string({ error: 'The note must be text.' }).trim().max(1000, { error: 'Use at most 1000 characters.' }).default('');
-const instrumentIdSchema = z
-  .number({ error: 'Pick an instrument.' })
+const instrumentIdSchema = num({ notNumber: 'Pick an instrument.' })
   .int({ error: 'Pick an instrument.' })
   .positive({ error: 'Pick an instrument.' })
   .nullable()
@@ -266,7 +265,7 @@ const dateSchema = z
   .pipe(z.iso.date({ error: 'Enter a real calendar date.' }));
 
 export const startBrewSchema = z.object({
-  recipeId: z.number({ error: 'Choose a recipe.' }).int({ error: 'Choose a recipe.' }).positive({ error: 'Choose a recipe.' }),
+  recipeId: num({ notNumber: 'Choose a recipe.' }).int({ error: 'Choose a recipe.' }).positive({ error: 'Choose a recipe.' }),
   /** Defaults to the recipe's name and today's date. */
   name: nameSchema.optional(),
   brewedOn: dateSchema.optional(),
@@ -297,14 +296,11 @@ export const stageParamsSchema = z.object({
   stage: z.enum(brewStages, { error: 'Unknown stage: use mash, souring, boil, chill or og.' }),
 });
 
-/** A page cursor as the server handed it out (`nextCursor`); opaque to the client. */
-const cursorSchema = z.string().max(300, { error: 'This list has changed since; start again from the top.' }).optional();
-
 /** GET /api/brews: newest first, paged by key like the recipe list; ask again with `cursor: nextCursor`. */
 export const listBrewsQuerySchema = z.object({
   scope: z.enum(['mine', 'shared'], { error: 'Choose mine or shared.' }).default('mine'),
-  cursor: cursorSchema,
-  pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int({ error: 'Page size must be a whole number.' }).min(1, { error: 'Ask for at least 1 brew day a page.' }).max(100, { error: 'Ask for at most 100 brew days a page.' }).default(20),
+  cursor: pageCursorSchema,
+  pageSize: pageSizeSchema('brew day', 100, 20),
 });
 /** What a client asks for; the server fills in the defaults. */
 export interface ListBrewsQuery {
@@ -318,8 +314,8 @@ export const READINGS_WINDOW = 50;
 
 /** GET /api/brews/:id/readings: the readings before `cursor` (the brew day's `olderReadings`, or a page's `nextCursor`). */
 export const brewReadingsQuerySchema = z.object({
-  cursor: cursorSchema,
-  pageSize: z.coerce.number({ error: 'Page size must be a number.' }).int({ error: 'Page size must be a whole number.' }).min(1, { error: 'Ask for at least 1 reading a page.' }).max(200, { error: 'Ask for at most 200 readings a page.' }).default(READINGS_WINDOW),
+  cursor: pageCursorSchema,
+  pageSize: pageSizeSchema('reading', 200, READINGS_WINDOW),
 });
 export interface BrewReadingsQuery {
   cursor?: string;
@@ -382,7 +378,7 @@ export type DecisionInput = z.input<typeof decisionInputSchema>;
 
 export const brewSharingSchema = z.object({
   clubIds: z
-    .array(z.number({ error: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
+    .array(num({ notNumber: 'Each club is a number.' }).int().positive({ error: 'Each club is a number.' }), { error: 'Give a list of clubs (empty for private).' })
     .max(50, { error: 'Share with at most 50 clubs.' }),
 });
 export type BrewSharingInput = z.input<typeof brewSharingSchema>;
@@ -393,193 +389,3 @@ export type BrewSharingInput = z.input<typeof brewSharingSchema>;
 export const PHOTO_MAX_BYTES = 5 * 1024 * 1024;
 export const photoMimeTypes = ['image/jpeg', 'image/png', 'image/webp'] as const;
 export type PhotoMime = (typeof photoMimeTypes)[number];
-
-export interface ReadingPhoto {
-  id: number;
-  readingId: number;
-  mime: PhotoMime;
-  sizeBytes: number;
-  sha256: string;
-  createdAt: string;
-  /** Where the image is served, to those who may read the brew day. */
-  url: string;
-}
-
-// ---------------------------------------------------------------------------------------------
-// Responses
-
-/** A correction as an instrument applied it (see shared/instruments). */
-export interface ReadingCorrection {
-  [key: string]: unknown;
-}
-
-export interface BrewReading {
-  id: number;
-  brewId: number;
-  stage: BrewStage;
-  kind: ReadingKind;
-  quantity: ReadingQuantity;
-  instrumentId: number | null;
-  /** The instrument as it was calibrated when the reading was taken. */
-  instrument: InstrumentSnapshot | null;
-  raw: ReadingRaw;
-  /** Corrected gravity (SG), temperature (°C) or pH. */
-  corrected: number;
-  correction: ReadingCorrection | null;
-  warnings: string[];
-  /** The kettle or fermenter volume taken with the reading, litres. */
-  volumeL: number | null;
-  takenAt: string;
-  note: string;
-  /** Set when the brewer re-applied a newer calibration on purpose. */
-  recomputedAt: string | null;
-  recomputedFrom: { corrected: number; instrument: InstrumentSnapshot | null; correction: ReadingCorrection | null } | null;
-  photos: ReadingPhoto[];
-}
-
-export interface BrewStageState {
-  stage: BrewStage;
-  startedAt: string | null;
-  completedAt: string | null;
-  skippedAt: string | null;
-}
-
-export interface BrewDecision {
-  id: number;
-  brewId: number;
-  /** What the brewer entered, as validated: the late-boil check's input. */
-  input: Record<string, unknown>;
-  /** The check recomputed on the server from `input`. */
-  result: Record<string, unknown>;
-  choice: DecisionChoice;
-  /** The option chosen, from `result` (null for the brewer's own action). */
-  chosen: (Record<string, unknown> & { kind: string }) | null;
-  note: string;
-  decidedAt: string;
-}
-
-export type BrewNoteKind = 'note' | 'recompute';
-
-export interface BrewNote {
-  id: number;
-  brewId: number;
-  kind: BrewNoteKind;
-  stage: BrewStage | null;
-  body: string;
-  /** For a recompute: the reading and its old and new values. */
-  details: Record<string, unknown> | null;
-  authorId: number | null;
-  createdAt: string;
-}
-
-export interface BrewSummary {
-  id: number;
-  name: string;
-  status: BrewStatus;
-  brewedOn: string;
-  recipeId: number | null;
-  recipeName: string;
-  ownerId: number;
-  ownerName: string;
-  isOwner: boolean;
-  currentStage: BrewStage;
-  targetOg: number;
-  /** The latest OG reading, corrected; null until one is taken. */
-  og: number | null;
-  pitchedAt: string | null;
-  sharedWithClubIds: number[];
-  createdAt: string;
-  updatedAt: string;
-}
-
-export type DeviationCode =
-  | 'mash-ph-low'
-  | 'mash-ph-high'
-  | 'mash-temp'
-  | 'og-low'
-  | 'og-high'
-  | 'volume-low'
-  | 'volume-high'
-  | 'pitch-too-warm'
-  | 'accepted-off-target'
-  | 'bitterness-low'
-  | 'bitterness-high'
-  | 'colour-lighter'
-  | 'colour-darker'
-  | 'instrument-uncalibrated'
-  | 'instrument-overdue';
-
-export interface BrewDeviation {
-  code: DeviationCode;
-  stage: BrewStage;
-  readingId: number | null;
-  decisionId: number | null;
-  /** SI: °C, SG, pH or litres, per `quantity`. */
-  expected: number | null;
-  actual: number | null;
-  quantity: 'temperature' | 'gravity' | 'ph' | 'volume' | 'ibu' | 'colour' | null;
-  /** For instrument deviations. */
-  instrumentName: string | null;
-  /** A plain sentence in metric units and SG; the client words it in the brewer's units. */
-  message: string;
-}
-
-export interface BrewDetail extends BrewSummary {
-  targets: RecipeTargets;
-  equipment: EquipmentProfile;
-  /** The boil-off rate for today: the equipment profile's, unless the brewer changed it. */
-  boilOffLPerHour: number;
-  notes: string;
-  stages: BrewStageState[];
-  /** The latest readings (at most READINGS_WINDOW), oldest first; older ones from GET /api/brews/:id/readings. */
-  readings: BrewReading[];
-  /** How many readings the brew day has in all. */
-  readingCount: number;
-  /** The cursor for the readings before `readings`; null when they are all here. */
-  olderReadings: string | null;
-  /** Litres measured with the latest OG reading that has a volume: the wort into the fermenter. */
-  fermenterVolumeL: number | null;
-  decisions: BrewDecision[];
-  log: BrewNote[];
-  /** Judged on the server from every reading, not only those sent. */
-  deviations: BrewDeviation[];
-  permissions: { edit: boolean; share: boolean; delete: boolean; comment: boolean };
-}
-
-/** One page of brew days, newest first; no total is counted. */
-export interface BrewList {
-  items: BrewSummary[];
-  /** Null on the last page. */
-  nextCursor: string | null;
-  pageSize: number;
-}
-
-/** One page of older readings, oldest first. */
-export interface BrewReadingPage {
-  items: BrewReading[];
-  /** The cursor for the readings before these; null at the first reading. */
-  nextCursor: string | null;
-  pageSize: number;
-}
-
-/** What a new reading changed on its brew day: the client updates its copy from this instead of reloading the whole day. */
-export interface BrewDayChange {
-  og: number | null;
-  fermenterVolumeL: number | null;
-  readingCount: number;
-  pitchedAt: string | null;
-  currentStage: BrewStage;
-  updatedAt: string;
-  stages: BrewStageState[];
-  deviations: BrewDeviation[];
-}
-
-/** POST /api/brews/:id/readings answers the reading and what it changed. */
-export interface ReadingCreated extends BrewReading {
-  brewDay: BrewDayChange;
-}
-
-export interface BrewSharing {
-  brewId: number;
-  clubIds: number[];
-}

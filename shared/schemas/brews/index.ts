@@ -1,0 +1,3 @@
+/** Brew days: the request shapes and vocabulary (inputs.ts) and the answers (responses.ts). */
+export * from './inputs';
+export * from './responses';
