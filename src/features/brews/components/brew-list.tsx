@@ -1,14 +1,10 @@
-import { ChevronDown } from 'lucide-react';
 import { Link } from 'react-router';
 import { brewStageLabels, brewStatusLabels, type BrewList as BrewPage } from '@shared/schemas/brews';
-import { Button } from '@/components/ui/button';
+import { ShowMore, type NextPages } from '@/components/ui/show-more';
 import { useUnits } from '@/lib/units';
 
-interface BrewPages {
+interface BrewPages extends NextPages {
   data: { pages: readonly BrewPage[] };
-  hasNextPage: boolean;
-  isFetchingNextPage: boolean;
-  fetchNextPage: () => Promise<unknown>;
 }
 
 /** Brew days, newest first, a page at a time: each a big link to its page; "Show more" adds the next page below. */
@@ -36,13 +32,7 @@ export function BrewList({ pages, empty }: { pages: BrewPages; empty: string }) 
           </li>
         ))}
       </ul>
-      {pages.hasNextPage && (
-        <div className="flex justify-center">
-          <Button variant="secondary" disabled={pages.isFetchingNextPage} onClick={() => void pages.fetchNextPage()} icon={<ChevronDown aria-hidden className="size-5" />}>
-            {pages.isFetchingNextPage ? 'Loading more…' : 'Show more brew days'}
-          </Button>
-        </div>
-      )}
+      <ShowMore pages={pages} label="Show more brew days" />
     </div>
   );
 }

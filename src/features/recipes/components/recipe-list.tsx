@@ -1,8 +1,9 @@
-import { ArrowDown, ArrowUp, ChevronDown, Search, Users } from 'lucide-react';
+import { ArrowDown, ArrowUp, Search, Users } from 'lucide-react';
 import { useEffect, useId, useState } from 'react';
 import { Link } from 'react-router';
 import type { ListRecipesQuery, RecipeListItem, RecipeScope, RecipeSort } from '@shared/schemas/recipes';
 import { Button } from '@/components/ui/button';
+import { ShowMore } from '@/components/ui/show-more';
 import { Figure } from '@/components/ui/figure';
 import { Notice } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/page';
@@ -72,13 +73,7 @@ export function RecipeList({ query, onQueryChange }: RecipeListProps) {
           <RecipeTable items={items} sort={sort} dir={dir} onSort={sortBy} />
         </div>
       )}
-      {hasNextPage && !isPlaceholderData && (
-        <div className="flex justify-center">
-          <Button variant="secondary" disabled={isFetchingNextPage} onClick={() => void fetchNextPage()} icon={<ChevronDown aria-hidden className="size-5" />}>
-            {isFetchingNextPage ? 'Loading more…' : 'Show more recipes'}
-          </Button>
-        </div>
-      )}
+      <ShowMore pages={{ hasNextPage, isFetchingNextPage, fetchNextPage }} label="Show more recipes" hidden={isPlaceholderData} />
     </div>
   );
 }

@@ -1,10 +1,10 @@
-import { ChevronDown, ChevronRight } from 'lucide-react';
+import { ChevronRight } from 'lucide-react';
 import { Link } from 'react-router';
 import { DAY_MS } from '@shared/dates';
 import { brewStatusLabels } from '@shared/schemas/brews';
 import type { Page } from '@shared/schemas/common';
 import type { ReviewedItem, ReviewQueueItem } from '@shared/schemas/comments';
-import { Button } from '@/components/ui/button';
+import { ShowMore, type NextPages } from '@/components/ui/show-more';
 import { useUnits } from '@/lib/units';
 
 function ago(what: string, iso: string): string {
@@ -16,11 +16,8 @@ function ago(what: string, iso: string): string {
 
 const isReviewed = (q: ReviewQueueItem | ReviewedItem): q is ReviewedItem => 'reviewedAt' in q;
 
-interface ReviewPages {
+interface ReviewPages extends NextPages {
   data: { pages: readonly Page<ReviewQueueItem | ReviewedItem>[] };
-  hasNextPage: boolean;
-  isFetchingNextPage: boolean;
-  fetchNextPage: () => Promise<unknown>;
 }
 
 /**
@@ -66,13 +63,7 @@ export function ReviewQueue({ pages, label = 'Waiting for a review' }: { pages: 
           </li>
         ))}
       </ul>
-      {pages.hasNextPage && (
-        <div className="flex justify-center">
-          <Button variant="secondary" disabled={pages.isFetchingNextPage} onClick={() => void pages.fetchNextPage()} icon={<ChevronDown aria-hidden className="size-5" />}>
-            {pages.isFetchingNextPage ? 'Loading more…' : 'Show more brew days'}
-          </Button>
-        </div>
-      )}
+      <ShowMore pages={pages} label="Show more brew days" />
     </div>
   );
 }
