@@ -49,8 +49,10 @@ export function createApp(ctx: AppContext) {
   api.use(crossSiteGuard(env));
   api.use('/health', healthRouter(rc));
   api.use(express.json({ limit: '100kb' }));
-  // JSON is compressed on the fly (brotli when the browser takes it) above 1 kB.
-  api.use(compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } }));
+  // JSON is compressed on the fly (brotli when the browser takes it) above 1 kB; a client that
+  // accepts no encoding (a probe, a script) skips the wrapper altogether.
+  const compressJson = compression({ threshold: 1024, brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } } });
+  api.use((req, res, next) => (req.headers['accept-encoding'] ? compressJson(req, res, next) : next()));
   api.use('/calc', calcRouter(rc));
   api.use(cookieParser());
   api.use(loadUser(db, env));

@@ -78,7 +78,9 @@ export function createRateLimits(env: Env, redis?: Redis | null): RateLimits {
     const options: Partial<Options> = {
       windowMs: spec.windowMs,
       limit: spec.limit(env),
-      standardHeaders: 'draft-8',
+      // `RateLimit` and `RateLimit-Policy` as the IETF draft 7 words them; draft 8 adds a partition key
+      // that costs a SHA-256 of the client's key on every request (issue 14: per-request cost).
+      standardHeaders: 'draft-7',
       legacyHeaders: false,
       message: { error: 'rate_limited', message: spec.message },
       passOnStoreError: true,
