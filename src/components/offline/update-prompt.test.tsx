@@ -8,9 +8,9 @@ const setNeedRefresh = vi.fn((v: boolean) => {
   needRefresh = v;
 });
 
-// The registration itself is the browser's (tests/browser/offline.test.ts); here only what the brewer sees and does.
-vi.mock('./use-service-worker', () => ({
-  useServiceWorker: () => ({ needRefresh, setNeedRefresh, updateServiceWorker }),
+// The registration itself is vite-plugin-pwa's; here only what the brewer sees and does.
+vi.mock('virtual:pwa-register/react', () => ({
+  useRegisterSW: () => ({ needRefresh: [needRefresh, setNeedRefresh], offlineReady: [false, vi.fn()], updateServiceWorker }),
 }));
 
 const { UpdatePrompt } = await import('./update-prompt');
@@ -28,7 +28,7 @@ describe('a new version of the app', () => {
     expect(screen.getByText('A new version is ready: reload')).toBeInTheDocument();
     expect(updateServiceWorker).not.toHaveBeenCalled();
     await userEvent.click(screen.getByRole('button', { name: 'Reload' }));
-    expect(updateServiceWorker).toHaveBeenCalled();
+    expect(updateServiceWorker).toHaveBeenCalledWith(true);
   });
 
   it('can be put off until later', async () => {
