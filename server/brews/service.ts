@@ -214,32 +214,46 @@ const fromDbTimestamp = (value: string | Date) => (value instanceof Date ? value
  * them all. Readings stored before the note was kept come whole, judged as before.
  */
 export async function judgedReadings(db: DbOrTx, brewId: number): Promise<{ readings: JudgedReading[]; count: number }> {
+  return (await judgedReadingsOf(db, [brewId])).get(brewId) ?? { readings: [], count: 0 };
+}
+
+/**
+ * judgedReadings for several brew days at once (a page of the review queue), in the same two
+ * statements: the groups of every brew day in one pass, then their rows.
+ */
+export async function judgedReadingsOf(db: DbOrTx, brewIds: readonly number[]): Promise<Map<number, { readings: JudgedReading[]; count: number }>> {
   const r = brewReadings;
+  const judged = new Map<number, { readings: JudgedReading[]; count: number }>();
+  if (brewIds.length === 0) return judged;
   const groups = await db
-    .select({ note: r.instrumentNote, firstAt: sql<string | Date>`min(${r.takenAt})`.as('first_at'), n: count() })
+    .select({ brewId: r.brewId, note: r.instrumentNote, firstAt: sql<string | Date>`min(${r.takenAt})`.as('first_at'), n: count() })
     .from(r)
-    .where(eq(r.brewId, brewId))
-    .groupBy(r.instrumentNote);
-  const total = groups.reduce((sum, g) => sum + Number(g.n), 0);
-  if (total === 0) return { readings: [], count: 0 };
-  const firsts = groups.filter((g) => g.note);
+    .where(inArray(r.brewId, brewIds))
+    .groupBy(r.brewId, r.instrumentNote);
+  if (groups.length === 0) return judged;
   const where: SQL[] = [inArray(r.kind, judgedKinds)];
-  if (groups.some((g) => g.note === null)) where.push(isNull(r.instrumentNote));
-  for (const g of firsts) where.push(and(eq(r.instrumentNote, g.note!), eq(r.takenAt, fromDbTimestamp(g.firstAt)))!);
+  const wholeLogs = [...new Set(groups.filter((g) => g.note === null).map((g) => g.brewId))];
+  if (wholeLogs.length > 0) where.push(and(inArray(r.brewId, wholeLogs), isNull(r.instrumentNote))!);
+  for (const g of groups) if (g.note) where.push(and(eq(r.brewId, g.brewId), eq(r.instrumentNote, g.note), eq(r.takenAt, fromDbTimestamp(g.firstAt)))!);
   const rows = await db
-    .select({ id: r.id, kind: r.kind, corrected: r.correctedValue, volumeL: r.volumeL, instrument: r.instrumentSnapshot, takenAt: r.takenAt, note: r.instrumentNote })
+    .select({ id: r.id, brewId: r.brewId, kind: r.kind, corrected: r.correctedValue, volumeL: r.volumeL, instrument: r.instrumentSnapshot, takenAt: r.takenAt, note: r.instrumentNote })
     .from(r)
-    .where(and(eq(r.brewId, brewId), or(...where)))
-    .orderBy(asc(r.takenAt), asc(r.id));
+    .where(and(inArray(r.brewId, brewIds), or(...where)))
+    .orderBy(asc(r.brewId), asc(r.takenAt), asc(r.id));
+  for (const g of groups) {
+    const entry = judged.get(g.brewId) ?? { readings: [], count: 0 };
+    entry.count += Number(g.n);
+    judged.set(g.brewId, entry);
+  }
   // Two readings may share the first time of a call-out: the lower id is the first.
   const seen = new Set<string>();
-  const readings: JudgedReading[] = [];
-  for (const row of rows) {
-    const first = row.note ? !seen.has(row.note) : true;
-    if (row.note) seen.add(row.note);
-    if (first || judgedKinds.includes(row.kind as (typeof judgedKinds)[number])) readings.push({ ...row, takenAt: row.takenAt.toISOString() });
+  for (const { brewId, note, ...row } of rows) {
+    const key = note ? `${brewId}:${note}` : null;
+    const first = key ? !seen.has(key) : true;
+    if (key) seen.add(key);
+    if (first || judgedKinds.includes(row.kind as (typeof judgedKinds)[number])) judged.get(brewId)!.readings.push({ ...row, takenAt: row.takenAt.toISOString() });
   }
-  return { readings, count: total };
+  return judged;
 }
 
 /** OG and the volume into the fermenter: the latest OG reading, and the latest one with a volume. */

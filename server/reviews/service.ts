@@ -12,7 +12,7 @@ import type { RecipeTargets } from '@shared/schemas/recipes';
 import type { Page } from '@shared/schemas/common';
 import type { BrewComment, BrewReview, CommentBody, CommentCreated, CommentTarget, ReviewDeviation, ReviewedItem, ReviewQueueItem } from '@shared/schemas/comments';
 import { can, canDeleteComment, canSeeComment, type Actor, type OwnedResource } from '../auth/permissions';
-import { brewDayDeviations, getBrew, loadBrewForActor, toDecision, toReading, type StoredBrew } from '../brews/service';
+import { brewDayDeviations, getBrew, judgedReadingsOf, loadBrewForActor, toDecision, type StoredBrew } from '../brews/service';
 import type { AppContext } from '../context';
 import type { Db, DbOrTx } from '../db/client';
 import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, packagingRecords, users, type CommentRow } from '../db/schema';
@@ -280,16 +280,17 @@ async function mentorShares(db: DbOrTx, actor: Actor) {
 
 /**
  * The summary of each brew day with its deviation count (brew day and fermentation, as on the
- * review page), for any number of brew days in six statements: each table is read once with an
- * `IN (…)` list rather than once per brew day.
+ * review page), for any number of brew days in seven statements: each table is read once with an
+ * `IN (…)` list rather than once per brew day, and of the brew-day readings only those that decide
+ * the deviations and the OG (judgedReadingsOf: two statements), however long each log is.
  */
 async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubShare>, now = new Date()): Promise<ReviewQueueItem[]> {
   const ids = [...entries.keys()];
   if (ids.length === 0) return [];
-  const [brewRows, shareRows, readingRows, decisionRows, fermentationRows, packagingRows] = await Promise.all([
+  const [brewRows, shareRows, judged, decisionRows, fermentationRows, packagingRows] = await Promise.all([
     db.select({ row: brews, ownerName: users.displayName }).from(brews).innerJoin(users, eq(users.id, brews.ownerId)).where(inArray(brews.id, ids)),
     db.select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId }).from(brewClubShares).where(inArray(brewClubShares.brewId, ids)).orderBy(asc(brewClubShares.clubId)),
-    db.select().from(brewReadings).where(inArray(brewReadings.brewId, ids)).orderBy(asc(brewReadings.takenAt), asc(brewReadings.id)),
+    judgedReadingsOf(db, ids),
     db.select().from(brewDecisions).where(inArray(brewDecisions.brewId, ids)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
     db.select().from(fermentationReadings).where(inArray(fermentationReadings.brewId, ids)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id)),
     db.select().from(packagingRecords).where(inArray(packagingRecords.brewId, ids)),
@@ -304,7 +305,6 @@ async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubSha
     return map;
   };
   const shares = byBrew(shareRows);
-  const readings = byBrew(readingRows);
   const decisions = byBrew(decisionRows);
   const fermentation = byBrew(fermentationRows);
   const packaging = new Map(packagingRows.map((p) => [p.brewId, p]));
@@ -313,7 +313,7 @@ async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubSha
     const stored: StoredBrew = { row, ownerName, sharedWithClubIds: (shares.get(row.id) ?? []).map((s) => s.clubId) };
     // Unshared or deleted between the queries: not waiting any more.
     if (!can(actor, 'read', resourceOf(stored))) continue;
-    const brewReadingList = (readings.get(row.id) ?? []).map((r) => toReading(r));
+    const brewReadingList = judged.get(row.id)?.readings ?? [];
     const brewDay = brewDayDeviations(row.targetsSnapshot as RecipeTargets, brewReadingList, (decisions.get(row.id) ?? []).map(toDecision));
     const later = fermentationDeviations(actor, stored, fermentation.get(row.id) ?? [], packaging.get(row.id) ?? null, brewDay, now);
     const og = brewReadingList.findLast((r) => r.kind === 'og')?.corrected ?? null;
