@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import type { FocusEvent, ReactNode } from 'react';
 
 /** Ids a field's input must carry so its label, hint and error are read with it. */
 export function fieldAria(id: string, { invalid, hint }: { invalid: boolean; hint?: ReactNode }) {
@@ -51,5 +51,43 @@ export function FieldShell({ id, label, hint, error, suffix, className = '', hid
         </p>
       )}
     </div>
+  );
+}
+
+interface DecimalInputProps {
+  /** The shell's id: the label, hint and error are wired to it. */
+  id: string;
+  name: string;
+  text: string;
+  onText: (text: string) => void;
+  onBlur: (event: FocusEvent<HTMLInputElement>) => void;
+  error: string | null;
+  hint?: ReactNode;
+  placeholder?: string;
+  disabled?: boolean;
+  size?: 'normal' | 'large';
+  /** A unit is drawn inside the right edge: the text keeps clear of it. */
+  withUnit: boolean;
+}
+
+/**
+ * The text box of every number field (NumberField, QuantityField, the late-boil check's own): a
+ * decimal keyboard on phones, no autofill, read with its label and message, big for a reading.
+ */
+export function DecimalInput({ id, name, text, onText, onBlur, error, hint, placeholder, disabled, size = 'normal', withUnit }: DecimalInputProps) {
+  return (
+    <input
+      name={name}
+      type="text"
+      inputMode="decimal"
+      autoComplete="off"
+      value={text}
+      placeholder={placeholder}
+      disabled={disabled}
+      onChange={(e) => onText(e.target.value)}
+      onBlur={onBlur}
+      {...fieldAria(id, { invalid: Boolean(error), hint })}
+      className={inputClass(Boolean(error), `py-2 pl-3 ${withUnit ? 'pr-16' : 'pr-3'} tabular-nums ${size === 'large' ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`)}
+    />
   );
 }

@@ -1,7 +1,7 @@
 import { useField } from 'formik';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { parseDecimal } from '@/lib/decimal';
-import { FieldShell, fieldAria, inputClass } from './field-shell';
+import { DecimalInput, FieldShell } from './field-shell';
 
 interface NumberFieldProps {
   /** Formik field holding a number ('' when empty, NaN while the text is not a number). */
@@ -56,21 +56,20 @@ export function NumberField({ name, label, unit, hint, scale = 1, toShown, shown
   }
 
   const error = meta.touched && typeof meta.error === 'string' ? meta.error : null;
-  const big = size === 'large';
   return (
     <FieldShell id={id} label={label} hint={hint} error={error} suffix={unit} className={className}>
-      <input
+      <DecimalInput
+        id={id}
         name={name}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        value={text}
+        text={text}
+        onText={onChange}
+        onBlur={field.onBlur}
+        error={error}
+        hint={hint}
         placeholder={placeholder}
         disabled={disabled}
-        onChange={(e) => onChange(e.target.value)}
-        onBlur={field.onBlur}
-        {...fieldAria(id, { invalid: Boolean(error), hint })}
-        className={inputClass(Boolean(error), `py-2 pl-3 ${unit ? 'pr-16' : 'pr-3'} tabular-nums ${big ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`)}
+        size={size}
+        withUnit={Boolean(unit)}
       />
     </FieldShell>
   );

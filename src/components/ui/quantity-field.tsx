@@ -2,7 +2,7 @@ import { useField } from 'formik';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { parseDecimal } from '@/lib/decimal';
 import { displayDecimals, useUnits, type QuantityKind, type Units } from '@/lib/units';
-import { FieldShell, fieldAria, inputClass } from './field-shell';
+import { DecimalInput, FieldShell } from './field-shell';
 
 interface QuantityFieldProps {
   /** Formik field holding the SI value (number, or '' / null when empty). */
@@ -80,21 +80,20 @@ export function QuantityField({ name, kind, label, hint, className = '', size = 
 
   const fieldError = meta.touched && typeof meta.error === 'string' ? meta.error : null;
   const error = conversionError ?? fieldError;
-  const big = size === 'large';
   return (
     <FieldShell id={id} label={label} hint={hint} error={error} suffix={units.unit(kind)} className={className}>
-      <input
+      <DecimalInput
+        id={id}
         name={name}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        value={text}
-        disabled={disabled}
-        placeholder={placeholder}
-        onChange={(e) => onChange(e.target.value)}
+        text={text}
+        onText={onChange}
         onBlur={field.onBlur}
-        {...fieldAria(id, { invalid: Boolean(error), hint })}
-        className={inputClass(Boolean(error), `py-2 pl-3 pr-16 tabular-nums ${big ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`)}
+        error={error}
+        hint={hint}
+        placeholder={placeholder}
+        disabled={disabled}
+        size={size}
+        withUnit
       />
     </FieldShell>
   );

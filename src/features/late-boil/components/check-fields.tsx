@@ -4,7 +4,7 @@
  * memoised, so a keystroke renders only the field typed in (issue 14: typing speed).
  */
 import { memo, useId, useState, type ReactNode } from 'react';
-import { FieldShell, fieldAria, inputClass } from '@/components/ui/field-shell';
+import { DecimalInput, FieldShell } from '@/components/ui/field-shell';
 import { displayDecimals, type QuantityKind, type Units } from '@/lib/units';
 import { parseDecimal } from '@/lib/decimal';
 import type { NumberValue } from './form-values';
@@ -38,9 +38,6 @@ function useShownText(value: NumberValue, show: (value: NumberValue) => string, 
 
 const parseTyped = (text: string) => parseDecimal(text) ?? null;
 
-const inputProps = (big: boolean, suffix: boolean) =>
-  `py-2 pl-3 ${suffix ? 'pr-16' : 'pr-3'} tabular-nums ${big ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`;
-
 /** A number without a unit system behind it (°Brix, minutes, a percentage, a correction factor). */
 export const CheckNumberField = memo(function CheckNumberField({
   name,
@@ -67,18 +64,7 @@ export const CheckNumberField = memo(function CheckNumberField({
   const shownError = error ?? null;
   return (
     <FieldShell id={id} label={label} hint={hint} error={shownError} suffix={unit}>
-      <input
-        name={name}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        value={text}
-        placeholder={placeholder}
-        onChange={(e) => onChange(e.target.value)}
-        onBlur={() => onTouch(name)}
-        {...fieldAria(id, { invalid: Boolean(shownError), hint })}
-        className={inputClass(Boolean(shownError), inputProps(size === 'large', Boolean(unit)))}
-      />
+      <DecimalInput id={id} name={name} text={text} onText={onChange} onBlur={() => onTouch(name)} error={shownError} hint={hint} placeholder={placeholder} size={size} withUnit={Boolean(unit)} />
     </FieldShell>
   );
 });
@@ -124,18 +110,7 @@ export const CheckQuantityField = memo(function CheckQuantityField({ name, value
   const shownError = (conversion && conversion.text === text ? conversion.error : null) ?? error ?? null;
   return (
     <FieldShell id={id} label={label} hint={hint} error={shownError} suffix={units.unit(kind)}>
-      <input
-        name={name}
-        type="text"
-        inputMode="decimal"
-        autoComplete="off"
-        value={text}
-        placeholder={placeholder}
-        onChange={(e) => onChange(e.target.value)}
-        onBlur={() => onTouch(name)}
-        {...fieldAria(id, { invalid: Boolean(shownError), hint })}
-        className={inputClass(Boolean(shownError), inputProps(size === 'large', true))}
-      />
+      <DecimalInput id={id} name={name} text={text} onText={onChange} onBlur={() => onTouch(name)} error={shownError} hint={hint} placeholder={placeholder} size={size} withUnit />
     </FieldShell>
   );
 });
