@@ -2,7 +2,7 @@
  * The late-boil form's values: SI numbers (or '' while a field is empty, NaN while it holds
  * text that is not a number), shaped like BoilCheckInput so a zod issue's path is the field's name.
  */
-import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckOutcome } from '@shared/boil-check/check';
+import { DEFAULT_CALIBRATION_TEMP_C, runBoilCheck, type BoilCheckInput, type BoilCheckOutcome } from '@shared/boil-check/check';
 import { BrewMathError, DEFAULT_COOLING_SHRINKAGE, DEFAULT_WCF, EXTRACT_KINDS, type ExtractKind } from '@shared/brewmath';
 import { boilCheckFieldIssues, brewMathIssue, isMissing, type BoilCheckIssue } from '@shared/schemas/boil-check-rules';
 import type { BoilCheckParsed } from '@shared/schemas/boil-check';
@@ -36,21 +36,9 @@ export interface LateBoilFormValues {
  * What a caller may prefill, all SI: a brew day passes its snapshot of the recipe's targets
  * and the equipment profile (boil-off, kettle size, refractometer WCF, hydrometer calibration).
  */
-export interface LateBoilInitialValues {
+export type LateBoilInitialValues = Partial<Omit<BoilCheckInput, 'reading'>> & {
   reading?: Partial<{ kind: ReadingKind; brix: number; wcf: number; sg: number; sampleTempC: number; calibrationTempC: number }>;
-  volumeL?: number;
-  minutesLeft?: number;
-  boilOffLPerHour?: number;
-  targetSg?: number;
-  targetVolumeL?: number;
-  targetFg?: number;
-  extractsOnHand?: readonly ExtractKind[];
-  potentials?: Partial<Record<ExtractKind, number>>;
-  kettleCapacityL?: number;
-  coolingShrinkage?: number;
-  /** The kettle profile's trub loss plus dead space. */
-  kettleLossL?: number;
-}
+};
 
 const v = (value: number | null | undefined): NumberValue => (typeof value === 'number' ? value : '');
 
