@@ -102,7 +102,9 @@ async function scriptTransfer(page: Page, urlPath: string, ready: (page: Page) =
   const sizes = new Map<string, number>();
   // Bytes on the wire when the headers arrived: taken off the total so only the (encoded) body counts.
   const headerBytes = new Map<string, number>();
+  const urls = new Map<string, string>();
   cdp.on('Network.responseReceived', (e) => {
+    urls.set(e.requestId, e.response.url);
     const encoding = Object.entries(e.response.headers).find(([k]) => k.toLowerCase() === 'content-encoding')?.[1] ?? 'identity';
     if (e.type === 'Script') scripts.set(e.requestId, String(encoding));
     headerBytes.set(e.requestId, e.response.encodedDataLength);
@@ -113,7 +115,14 @@ async function scriptTransfer(page: Page, urlPath: string, ready: (page: Page) =
   await page.waitForLoadState('networkidle');
   await cdp.detach();
   let bytes = 0;
-  for (const id of scripts.keys()) bytes += Math.max(0, (sizes.get(id) ?? 0) - (headerBytes.get(id) ?? 0));
+  const listed: [string, number][] = [];
+  for (const id of scripts.keys()) {
+    const body = Math.max(0, (sizes.get(id) ?? 0) - (headerBytes.get(id) ?? 0));
+    bytes += body;
+    listed.push([new URL(urls.get(id) ?? '', 'http://x').pathname, body]);
+  }
+  // BENCH_LIST_SCRIPTS=1 prints each script of the load with its bytes on the wire, largest first.
+  if (process.env.BENCH_LIST_SCRIPTS) console.log(`\n${urlPath}:\n${listed.sort((a, b) => b[1] - a[1]).map(([u, n]) => `  ${(n / 1000).toFixed(1).padStart(6)} kB  ${u}`).join('\n')}`);
   return { bytes, scripts: scripts.size, encodings: new Set(scripts.values()) };
 }
 
