@@ -4,14 +4,15 @@
  * shows live. A later calibration never rewrites a stored reading; recompute re-applies the
  * instrument's current calibration only when the brewer asks, and logs the old and new values.
  */
-import { and, eq, isNull } from 'drizzle-orm';
+import { and, eq, isNull, sql } from 'drizzle-orm';
 import { instrumentNoteKey } from '@shared/brew-deviations';
 import { correctReading, defaultSnapshot, type RawByKind } from '@shared/instruments';
 import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingCreated, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
 import type { InstrumentKind, InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { Actor } from '../auth/permissions';
-import type { Db } from '../db/client';
+import type { Db, DbOrTx } from '../db/client';
 import { lockBrewRow } from '../db/locks';
+import { prepared } from '../db/prepared';
 import { brewNotes, brewReadings, brews } from '../db/schema';
 import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, NotFound } from '../lib/errors';
@@ -80,6 +81,9 @@ async function snapshotFor(db: Db, actor: Actor, kind: InstrumentKind, instrumen
   }
 }
 
+/** The stored reading a write answers with, built once per database handle (server/db/prepared.ts). */
+const readingById = (db: DbOrTx) => db.select().from(brewReadings).where(eq(brewReadings.id, sql.placeholder('id')));
+
 export async function addReading(db: Db, actor: Actor, brewId: number, body: ReadingBody): Promise<ReadingCreated> {
   const stored = await loadBrewForActor(db, actor, brewId, 'update');
   if (body.kind === 'souring_ph' && stored.row.targetsSnapshot.souringTargetPh == null) {
@@ -122,7 +126,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
     }
     return id;
   });
-  const [[row], brewDay] = await Promise.all([db.select().from(brewReadings).where(eq(brewReadings.id, id)), brewDayChange(db, brewId)]);
+  const [[row], brewDay] = await Promise.all([prepared(db, readingById).execute({ id }), brewDayChange(db, brewId)]);
   return { ...toReading(row), brewDay };
 }
 

@@ -45,6 +45,7 @@ import {
   type BrewRow,
 } from '../db/schema';
 import { lockBrewRow } from '../db/locks';
+import { inList, prepared } from '../db/prepared';
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
 import { cursorInstant, decodeCursor, encodeCursor, isCursorId } from '../lib/cursor';
@@ -58,14 +59,39 @@ export interface StoredBrew {
   sharedWithClubIds: number[];
 }
 
-async function findBrew(db: DbOrTx, id: number): Promise<StoredBrew | null> {
-  const [found] = await db
+// The brew day's reads, built once per database handle (server/db/prepared.ts).
+const brewById = (db: DbOrTx) =>
+  db
     .select({ row: brews, ownerName: users.displayName })
     .from(brews)
     .innerJoin(users, eq(users.id, brews.ownerId))
-    .where(eq(brews.id, id));
+    .where(eq(brews.id, sql.placeholder('id')));
+const sharesOfBrew = (db: DbOrTx) =>
+  db.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, sql.placeholder('id'))).orderBy(asc(brewClubShares.clubId));
+const brewRowById = (db: DbOrTx) => db.select().from(brews).where(eq(brews.id, sql.placeholder('id')));
+const stagesOfBrew = (db: DbOrTx) => db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, sql.placeholder('id')));
+const decisionsOfBrew = (db: DbOrTx) =>
+  db.select().from(brewDecisions).where(eq(brewDecisions.brewId, sql.placeholder('id'))).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id));
+const notesOfBrew = (db: DbOrTx) => db.select().from(brewNotes).where(eq(brewNotes.brewId, sql.placeholder('id'))).orderBy(asc(brewNotes.createdAt), asc(brewNotes.id));
+const latestReadings = (db: DbOrTx) =>
+  db.select().from(brewReadings).where(eq(brewReadings.brewId, sql.placeholder('id'))).orderBy(desc(brewReadings.takenAt), desc(brewReadings.id)).limit(sql.placeholder('limit'));
+const photosOfReadings = (db: DbOrTx) =>
+  db
+    .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
+    .from(readingPhotos)
+    .where(and(eq(readingPhotos.brewId, sql.placeholder('brewId')), inList(readingPhotos.readingId, 'readingIds')))
+    .orderBy(asc(readingPhotos.id));
+const readingGroups = (db: DbOrTx) =>
+  db
+    .select({ brewId: brewReadings.brewId, note: brewReadings.instrumentNote, firstAt: sql<string | Date>`min(${brewReadings.takenAt})`.as('first_at'), n: count() })
+    .from(brewReadings)
+    .where(inList(brewReadings.brewId, 'brewIds'))
+    .groupBy(brewReadings.brewId, brewReadings.instrumentNote);
+
+async function findBrew(db: DbOrTx, id: number): Promise<StoredBrew | null> {
+  const [found] = await prepared(db, brewById).execute({ id });
   if (!found) return null;
-  const shares = await db.select({ clubId: brewClubShares.clubId }).from(brewClubShares).where(eq(brewClubShares.brewId, id)).orderBy(asc(brewClubShares.clubId));
+  const shares = await prepared(db, sharesOfBrew).execute({ id });
   return { row: found.row, ownerName: found.ownerName, sharedWithClubIds: shares.map((s) => s.clubId) };
 }
 
@@ -225,11 +251,7 @@ export async function judgedReadingsOf(db: DbOrTx, brewIds: readonly number[]): 
   const r = brewReadings;
   const judged = new Map<number, { readings: JudgedReading[]; count: number }>();
   if (brewIds.length === 0) return judged;
-  const groups = await db
-    .select({ brewId: r.brewId, note: r.instrumentNote, firstAt: sql<string | Date>`min(${r.takenAt})`.as('first_at'), n: count() })
-    .from(r)
-    .where(inArray(r.brewId, brewIds))
-    .groupBy(r.brewId, r.instrumentNote);
+  const groups = await prepared(db, readingGroups).execute({ brewIds });
   if (groups.length === 0) return judged;
   const where: SQL[] = [inArray(r.kind, judgedKinds)];
   const wholeLogs = [...new Set(groups.filter((g) => g.note === null).map((g) => g.brewId))];
@@ -273,11 +295,7 @@ function decodeReadingCursor(cursor: string) {
 async function photosOf(db: DbOrTx, brewId: number, readingIds: number[]) {
   const byReading = new Map<number, ReadingPhoto[]>();
   if (readingIds.length === 0) return byReading;
-  const rows = await db
-    .select({ id: readingPhotos.id, readingId: readingPhotos.readingId, mime: readingPhotos.mime, sizeBytes: readingPhotos.sizeBytes, sha256: readingPhotos.sha256, createdAt: readingPhotos.createdAt })
-    .from(readingPhotos)
-    .where(and(eq(readingPhotos.brewId, brewId), inArray(readingPhotos.readingId, readingIds)))
-    .orderBy(asc(readingPhotos.id));
+  const rows = await prepared(db, photosOfReadings).execute({ brewId, readingIds });
   for (const p of rows) {
     const list = byReading.get(p.readingId) ?? [];
     list.push({ ...p, createdAt: p.createdAt.toISOString(), url: photoUrl(brewId, p.readingId, p.id) });
@@ -292,14 +310,14 @@ async function photosOf(db: DbOrTx, brewId: number, readingIds: number[]) {
  */
 export async function readingPage(db: DbOrTx, brewId: number, query: { cursor?: string; pageSize: number }): Promise<BrewReadingPage> {
   const before = query.cursor ? decodeReadingCursor(query.cursor) : null;
-  const where: SQL[] = [eq(brewReadings.brewId, brewId)];
-  if (before) where.push(or(lt(brewReadings.takenAt, before.at), and(eq(brewReadings.takenAt, before.at), lt(brewReadings.id, before.id)))!);
-  const rows = await db
-    .select()
-    .from(brewReadings)
-    .where(and(...where))
-    .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
-    .limit(query.pageSize + 1);
+  const rows = before
+    ? await db
+        .select()
+        .from(brewReadings)
+        .where(and(eq(brewReadings.brewId, brewId), or(lt(brewReadings.takenAt, before.at), and(eq(brewReadings.takenAt, before.at), lt(brewReadings.id, before.id)))))
+        .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
+        .limit(query.pageSize + 1)
+    : await prepared(db, latestReadings).execute({ id: brewId, limit: query.pageSize + 1 });
   const page = rows.slice(0, query.pageSize).reverse();
   const photos = await photosOf(db, brewId, page.map((r) => r.id));
   const first = page[0];
@@ -322,10 +340,10 @@ export async function listReadings(db: DbOrTx, actor: Actor, id: number, query: 
  */
 export async function brewDayChange(db: DbOrTx, brewId: number): Promise<BrewDayChange> {
   const [[row], stageRows, judged, decisionRows] = await Promise.all([
-    db.select().from(brews).where(eq(brews.id, brewId)),
-    db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, brewId)),
+    prepared(db, brewRowById).execute({ id: brewId }),
+    prepared(db, stagesOfBrew).execute({ id: brewId }),
     judgedReadings(db, brewId),
-    db.select().from(brewDecisions).where(eq(brewDecisions.brewId, brewId)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
+    prepared(db, decisionsOfBrew).execute({ id: brewId }),
   ]);
   return {
     ...ogFigures(judged.readings),
@@ -356,11 +374,11 @@ async function allReadingsOf(db: DbOrTx, id: number): Promise<BrewReadingPage> {
 async function assembleBrew(db: DbOrTx, actor: Actor, stored: StoredBrew, allReadings: boolean): Promise<BrewDetail> {
   const id = stored.row.id;
   const [stageRows, latest, judged, decisionRows, noteRows] = await Promise.all([
-    db.select().from(brewStagesTable).where(eq(brewStagesTable.brewId, id)),
+    prepared(db, stagesOfBrew).execute({ id }),
     allReadings ? allReadingsOf(db, id) : readingPage(db, id, { pageSize: READINGS_WINDOW }),
     judgedReadings(db, id),
-    db.select().from(brewDecisions).where(eq(brewDecisions.brewId, id)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
-    db.select().from(brewNotes).where(eq(brewNotes.brewId, id)).orderBy(asc(brewNotes.createdAt), asc(brewNotes.id)),
+    prepared(db, decisionsOfBrew).execute({ id }),
+    prepared(db, notesOfBrew).execute({ id }),
   ]);
   const decisions = decisionRows.map(toDecision);
   const targets = stored.row.targetsSnapshot;

@@ -24,6 +24,7 @@ import { can, requireAccess, type Actor, type ResourceAction } from '../auth/per
 import { checkShareTargets, diffShares, lockShareTargets } from '../lib/sharing';
 import { BAD_CURSOR, decodeCursor, encodeCursor } from '../lib/cursor';
 import type { DbOrTx, Tx } from '../db/client';
+import { inList, prepared } from '../db/prepared';
 import { recipeClubShares, recipeFermentables, recipeHops, recipeMashSteps, recipes, recipeVersions, users, type RecipeRow } from '../db/schema';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 
@@ -182,6 +183,10 @@ interface ListRow {
  * with the table. Paged by key (the last row's sort value and id) rather than OFFSET, and "more"
  * is known from one extra row rather than a count of everything.
  */
+/** A page's club shares, built once per database handle (server/db/prepared.ts). */
+const sharesOfRecipes = (db: DbOrTx) =>
+  db.select({ recipeId: recipeClubShares.recipeId, clubId: recipeClubShares.clubId }).from(recipeClubShares).where(inList(recipeClubShares.recipeId, 'ids')).orderBy(asc(recipeClubShares.clubId));
+
 export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<typeof listRecipesQuerySchema>): Promise<RecipeList> {
   const key = sortColumns[query.sort];
   const dir = query.dir ?? (query.sort === 'updated' ? 'desc' : 'asc');
@@ -225,11 +230,7 @@ export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<type
   const page = rows.slice(0, query.pageSize);
   const shares =
     page.length > 0
-      ? await db
-          .select({ recipeId: recipeClubShares.recipeId, clubId: recipeClubShares.clubId })
-          .from(recipeClubShares)
-          .where(inArray(recipeClubShares.recipeId, page.map((r) => r.id)))
-          .orderBy(asc(recipeClubShares.clubId))
+      ? await prepared(db, sharesOfRecipes).execute({ ids: page.map((r) => r.id) })
       : [];
   const items: RecipeListItem[] = page.map((r) => ({
     id: r.id,

@@ -5,7 +5,7 @@
  * server/auth/permissions.ts. A comment is written in a transaction that re-reads the brew day's
  * shares with a lock, so a comment sent a second after the brewer stopped sharing is refused.
  */
-import { and, asc, desc, eq, inArray, max, ne } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, max, ne, sql } from 'drizzle-orm';
 import { findFermentationDeviations } from '@shared/fermentation-deviations';
 import { readingKindLabels } from '@shared/schemas/brews';
 import type { RecipeTargets } from '@shared/schemas/recipes';
@@ -15,6 +15,7 @@ import { can, canDeleteComment, canSeeComment, type Actor, type OwnedResource } 
 import { brewDayDeviations, getBrew, judgedReadingsOf, loadBrewForActor, toDecision, type StoredBrew } from '../brews/service';
 import type { AppContext } from '../context';
 import type { Db, DbOrTx } from '../db/client';
+import { inList, prepared } from '../db/prepared';
 import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, packagingRecords, users, type CommentRow } from '../db/schema';
 import { assembleLog, fermentationDeviations } from '../fermentation/service';
 import { decodeCursor, encodeCursor, isCursorId } from '../lib/cursor';
@@ -238,32 +239,31 @@ interface ClubShare {
  * of that club has commented (a comment counts for a club when its author is a mentor of that club
  * now, not the brewer). Two statements whatever the number of shares.
  */
+const sharesWithMentorClubs = (db: DbOrTx) =>
+  db
+    .select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId, clubName: clubs.name, sharedAt: brewClubShares.sharedAt, brewedOn: brews.brewedOn })
+    .from(brewClubShares)
+    .innerJoin(brews, eq(brews.id, brewClubShares.brewId))
+    .innerJoin(clubs, eq(clubs.id, brewClubShares.clubId))
+    .where(and(inList(brewClubShares.clubId, 'clubIds'), ne(brews.ownerId, sql.placeholder('actorId'))))
+    .orderBy(desc(brewClubShares.sharedAt), desc(brews.brewedOn), desc(brews.id));
+const mentorComments = (db: DbOrTx) =>
+  db
+    .select({ brewId: comments.brewId, clubId: clubMemberships.clubId, lastAt: max(comments.createdAt) })
+    .from(comments)
+    .innerJoin(brews, eq(brews.id, comments.brewId))
+    .innerJoin(clubMemberships, and(eq(clubMemberships.userId, comments.authorId), eq(clubMemberships.role, 'mentor')))
+    .where(and(inList(comments.brewId, 'brewIds'), inList(clubMemberships.clubId, 'clubIds'), ne(comments.authorId, brews.ownerId)))
+    .groupBy(comments.brewId, clubMemberships.clubId);
+
 async function mentorShares(db: DbOrTx, actor: Actor) {
   const waiting = new Map<number, ClubShare>();
   const reviewed = new Map<number, ClubShare>();
   const mentorClubIds = actor.memberships.filter((m) => m.role === 'mentor').map((m) => m.clubId);
   if (mentorClubIds.length === 0) return { waiting, reviewed };
-  const shares = await db
-    .select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId, clubName: clubs.name, sharedAt: brewClubShares.sharedAt, brewedOn: brews.brewedOn })
-    .from(brewClubShares)
-    .innerJoin(brews, eq(brews.id, brewClubShares.brewId))
-    .innerJoin(clubs, eq(clubs.id, brewClubShares.clubId))
-    .where(and(inArray(brewClubShares.clubId, mentorClubIds), ne(brews.ownerId, actor.id)))
-    .orderBy(desc(brewClubShares.sharedAt), desc(brews.brewedOn), desc(brews.id));
+  const shares = await prepared(db, sharesWithMentorClubs).execute({ clubIds: mentorClubIds, actorId: actor.id });
   if (shares.length === 0) return { waiting, reviewed };
-  const commented = await db
-    .select({ brewId: comments.brewId, clubId: clubMemberships.clubId, lastAt: max(comments.createdAt) })
-    .from(comments)
-    .innerJoin(brews, eq(brews.id, comments.brewId))
-    .innerJoin(clubMemberships, and(eq(clubMemberships.userId, comments.authorId), eq(clubMemberships.role, 'mentor')))
-    .where(
-      and(
-        inArray(comments.brewId, [...new Set(shares.map((s) => s.brewId))]),
-        inArray(clubMemberships.clubId, mentorClubIds),
-        ne(comments.authorId, brews.ownerId),
-      ),
-    )
-    .groupBy(comments.brewId, clubMemberships.clubId);
+  const commented = await prepared(db, mentorComments).execute({ brewIds: [...new Set(shares.map((s) => s.brewId))], clubIds: mentorClubIds });
   const done = new Map(commented.map((r) => [`${r.brewId}:${r.clubId}`, r.lastAt]));
   for (const s of shares) {
     const key = `${s.brewId}:${s.clubId}`;
@@ -284,16 +284,23 @@ async function mentorShares(db: DbOrTx, actor: Actor) {
  * `IN (…)` list rather than once per brew day, and of the brew-day readings only those that decide
  * the deviations and the OG (judgedReadingsOf: two statements), however long each log is.
  */
+// The queue's reads of a page of brew days, built once per database handle (server/db/prepared.ts).
+const brewsByIds = (db: DbOrTx) => db.select({ row: brews, ownerName: users.displayName }).from(brews).innerJoin(users, eq(users.id, brews.ownerId)).where(inList(brews.id, 'ids'));
+const sharesOfBrews = (db: DbOrTx) =>
+  db.select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId }).from(brewClubShares).where(inList(brewClubShares.brewId, 'ids')).orderBy(asc(brewClubShares.clubId));
+const decisionsOfBrews = (db: DbOrTx) => db.select().from(brewDecisions).where(inList(brewDecisions.brewId, 'ids')).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id));
+const packagingOfBrews = (db: DbOrTx) => db.select().from(packagingRecords).where(inList(packagingRecords.brewId, 'ids'));
+
 async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubShare>, now = new Date()): Promise<ReviewQueueItem[]> {
   const ids = [...entries.keys()];
   if (ids.length === 0) return [];
   const [brewRows, shareRows, judged, decisionRows, fermentationRows, packagingRows] = await Promise.all([
-    db.select({ row: brews, ownerName: users.displayName }).from(brews).innerJoin(users, eq(users.id, brews.ownerId)).where(inArray(brews.id, ids)),
-    db.select({ brewId: brewClubShares.brewId, clubId: brewClubShares.clubId }).from(brewClubShares).where(inArray(brewClubShares.brewId, ids)).orderBy(asc(brewClubShares.clubId)),
+    prepared(db, brewsByIds).execute({ ids }),
+    prepared(db, sharesOfBrews).execute({ ids }),
     judgedReadingsOf(db, ids),
-    db.select().from(brewDecisions).where(inArray(brewDecisions.brewId, ids)).orderBy(asc(brewDecisions.decidedAt), asc(brewDecisions.id)),
+    prepared(db, decisionsOfBrews).execute({ ids }),
     db.select().from(fermentationReadings).where(inArray(fermentationReadings.brewId, ids)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id)),
-    db.select().from(packagingRecords).where(inArray(packagingRecords.brewId, ids)),
+    prepared(db, packagingOfBrews).execute({ ids }),
   ]);
   const byBrew = <T extends { brewId: number }>(rows: readonly T[]) => {
     const map = new Map<number, T[]>();
