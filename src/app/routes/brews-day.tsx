@@ -1,24 +1,24 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useQuery } from '@tanstack/react-query';
 import { FlaskConical, ScrollText } from 'lucide-react';
-import { useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useMemo } from 'react';
 import { Link, useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
-import { type BrewDetail, type BrewStage, type DecisionChoice } from '@shared/schemas/brews';
-import type { BoilCheckParsed } from '@shared/schemas/boil-check';
-import { useAddDecision } from '@/features/brews/api/add-decision';
+import { type BrewDetail, type BrewStage } from '@shared/schemas/brews';
 import { brewQueryOptions, useBrew } from '@/features/brews/api/get-brew';
 import { BrewDay } from '@/features/brews/components/brew-day';
 import { BrewMissing } from '@/features/brews/components/brew-missing';
 import { DeleteBrew } from '@/features/brews/components/delete-brew';
-import { DecisionExtras, DecisionReason } from '@/features/brews/components/decision-extras';
 import { BrewSharingPanel } from '@/features/brews/components/sharing-panel';
 import { instrumentsQueryOptions } from '@/features/instruments/api/list-instruments';
 import type { LateBoilInitialValues } from '@/features/late-boil/components/form-values';
-import { LateBoilCheck, type LateBoilChoice } from '@/features/late-boil/components/late-boil-check';
 import { OfflineStatus } from '@/components/offline/offline-status';
 import { QueuedList } from '@/components/offline/queued-list';
 import { ButtonLink } from '@/components/ui/button';
 import { Loading, PageHeader } from '@/components/ui/page';
+
+// The late-boil check shows on the boil stage only: a brew day opened at another stage does not load it.
+const loadBoilCheck = () => import('@/app/brew-boil-check');
+const BrewBoilCheck = lazy(() => loadBoilCheck().then((m) => ({ default: m.BrewBoilCheck })));
 
 export function loader(queryClient: QueryClient) {
   return async ({ params }: LoaderFunctionArgs) => {
@@ -44,18 +44,12 @@ function checkStart(brew: BrewDetail, wcf: number | undefined, calibrationTempC:
   };
 }
 
-const toChoice = (option: LateBoilChoice['option']): DecisionChoice =>
-  option.kind === 'extract' ? { kind: 'extract', extract: option.extract } : { kind: option.kind };
-
 export function Component() {
   const id = Number(useParams().id);
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const { data: brew, isPending, error } = useBrew(id);
   const instruments = useQuery({ ...instrumentsQueryOptions(), enabled: Boolean(brew?.permissions.edit) });
-  const addDecision = useAddDecision(id);
-  const reason = useRef('');
-  const [checkKey, setCheckKey] = useState(0);
 
   const refractometer = instruments.data?.find((i) => i.kind === 'refractometer' && !i.archived);
   const hydrometer = instruments.data?.find((i) => i.kind === 'hydrometer' && !i.archived);
@@ -74,27 +68,10 @@ export function Component() {
   const selected = stageParam && brew.stages.some((s) => s.stage === stageParam) ? stageParam : brew.currentStage;
   const select = (stage: BrewStage) => setParams({ stage }, { replace: true });
 
-  const saveDecision = (input: BoilCheckParsed, choice: DecisionChoice) => addDecision.mutateAsync({ input, choice, note: reason.current });
-
   const boilCheck = brew.permissions.edit ? (
-    <>
-      <LateBoilCheck
-        key={checkKey}
-        initialValues={initialValues}
-        recipe={brew.targets}
-        onChoose={({ option, input }) => saveDecision(input, toChoice(option))}
-        renderBeforeOptions={() => <DecisionReason initial={reason.current} onReasonChange={(text) => (reason.current = text)} />}
-        renderAfterOptions={(check) => (
-          <DecisionExtras
-            ready={check !== null}
-            onOwnAction={(description) => (check ? saveDecision(check.input, { kind: 'own', description }) : Promise.resolve())}
-          />
-        )}
-      />
-      <button type="button" className="no-print min-h-touch text-sm font-semibold text-cellar-700 underline" onClick={() => setCheckKey((k) => k + 1)}>
-        Start a fresh check
-      </button>
-    </>
+    <Suspense fallback={<Loading label="Loading the late-boil check…" />}>
+      <BrewBoilCheck brew={brew} initialValues={initialValues} />
+    </Suspense>
   ) : undefined;
 
   return (
