@@ -259,7 +259,9 @@ async function main() {
     const childEnv = { ...process.env, NODE_ENV: 'production', JWT_SECRET: jwtSecret, DATABASE_URL: url, HOST: '127.0.0.1', AUTH_RATE_LIMIT_MAX: '1000000', CALC_RATE_LIMIT_MAX: '1000000000', SMTP_HOST: '127.0.0.1', SMTP_PORT: String(await freePort()), CLIENT_DIST: path.join(tmp, 'no-client') };
     // BENCH_CPU_PROF=<dir> writes a V8 CPU profile of the Wortwise process there, for finding where its time goes.
     const profile = process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${path.resolve(process.env.BENCH_CPU_PROF)}`] : [];
-    const ww = spawn(process.execPath, [...profile, ...(process.env.WW_FLAGS ? process.env.WW_FLAGS.split(' ') : []), '--import', 'tsx', 'server/index.ts'], { cwd: root, env: { ...childEnv, PORT: String(wwPort) }, stdio: ['ignore', 'ignore', 'inherit'] });
+    // BENCH_NODE_FLAGS="--flag …" adds Node options to the Wortwise process only, for trying a runtime setting against the same baseline.
+    const nodeFlags = process.env.BENCH_NODE_FLAGS?.split(' ').filter(Boolean) ?? [];
+    const ww = spawn(process.execPath, [...profile, ...nodeFlags, '--import', 'tsx', 'server/index.ts'], { cwd: root, env: { ...childEnv, PORT: String(wwPort) }, stdio: ['ignore', 'ignore', 'inherit'] });
     const bare = spawn(process.execPath, ['--import', 'tsx', path.join(import.meta.dirname, 'bare-server.ts')], {
       cwd: projectRoot,
       env: { ...childEnv, PORT: String(barePort), BENCH_STATEMENTS: statementsFile },
