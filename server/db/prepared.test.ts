@@ -45,4 +45,12 @@ describe('prepared queries (server/db/prepared.ts)', () => {
     ).rejects.toBe(rolledBack);
     expect(seen).toEqual([expect.objectContaining({ name: 'Only in the transaction' })]);
   });
+
+  it('refuses a builder made per call, which would grow the cache without end', () => {
+    const db = {} as DbOrTx;
+    const fake = () => ({ prepare: () => ({}) });
+    expect(() => {
+      for (let i = 0; i < 1000; i++) prepared(db, () => fake());
+    }).toThrow(/module-level/);
+  });
 });

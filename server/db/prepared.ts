@@ -13,12 +13,17 @@ import { sql, type AnyColumn, type SQL } from 'drizzle-orm';
 import type { DbOrTx } from './client';
 
 const cache = new WeakMap<DbOrTx, Map<unknown, unknown>>();
+/** Far more than the queries in the code: more builders than this means one is made per call. */
+const MAX_BUILDERS = 500;
 
 export function prepared<P>(db: DbOrTx, build: (db: DbOrTx) => { prepare(): P }): P {
   let byBuild = cache.get(db);
   if (!byBuild) cache.set(db, (byBuild = new Map()));
   let query = byBuild.get(build) as P | undefined;
-  if (!query) byBuild.set(build, (query = build(db).prepare()));
+  if (!query) {
+    if (byBuild.size >= MAX_BUILDERS) throw new Error('prepared(): `build` must be a module-level function, not one made per call');
+    byBuild.set(build, (query = build(db).prepare()));
+  }
   return query;
 }
 
