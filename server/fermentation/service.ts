@@ -5,10 +5,19 @@
  * writes, everyone else gets a 404. Adding and removing readings is in readings.ts, packaging in
  * packaging.ts, what the readings decide in verdict.ts.
  */
-import { and, asc, desc, eq } from 'drizzle-orm';
+import { and, asc, desc, eq, type SQL } from 'drizzle-orm';
 import { findFermentationDeviations, type FermentationDeviation } from '@shared/fermentation-deviations';
 import type { BrewDeviation } from '@shared/schemas/brews';
-import type { FermentationBrew, FermentationLog, FermentationReading, PackagingRecord, ScheduledReminder } from '@shared/schemas/fermentation';
+import { READINGS_WINDOW } from '@shared/schemas/brews';
+import type {
+  FermentationBrew,
+  FermentationLog,
+  FermentationPoint,
+  FermentationReading,
+  FermentationReadingPage,
+  PackagingRecord,
+  ScheduledReminder,
+} from '@shared/schemas/fermentation';
 import type { Actor } from '../auth/permissions';
 import { loadBrewForActor, type StoredBrew } from '../brews/service';
 import type { Db, DbOrTx } from '../db/client';
@@ -21,7 +30,8 @@ import {
   type FermentationReadingRow,
   type PackagingRecordRow,
 } from '../db/schema';
-import { derivedParts, rangeOf, targetsOf, temperatureOf } from './verdict';
+import { beforeTimeKey, decodeTimeCursor, encodeTimeCursor } from '../lib/cursor';
+import { derivedParts, derivedRows, rangeOf, targetsOf, temperatureOf, type DerivedRow } from './verdict';
 import { DAY_MS } from '@shared/dates';
 
 const iso = (d: Date) => d.toISOString();
@@ -160,11 +170,60 @@ export function fermentationDeviations(
   });
 }
 
-export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date()): Promise<FermentationLog> {
+/** A cursor into one brew day's fermentation readings (server/lib/cursor.ts); a brew-day readings cursor is refused. */
+const CURSOR_TAG = 'fermentation-readings';
+
+/**
+ * The readings before `cursor` (the latest when absent), oldest first: read backwards along the
+ * (brew, time) index, so a page costs the same however long the log.
+ */
+export async function fermentationReadingPage(db: DbOrTx, stored: StoredBrew, query: { cursor?: string; pageSize: number }): Promise<FermentationReadingPage> {
+  const brewId = stored.row.id;
+  const before = query.cursor ? decodeTimeCursor(CURSOR_TAG, query.cursor) : null;
+  const where: SQL[] = [eq(fermentationReadings.brewId, brewId)];
+  if (before) where.push(beforeTimeKey(fermentationReadings.takenAt, fermentationReadings.id, before));
+  const rows = await db
+    .select()
+    .from(fermentationReadings)
+    .where(and(...where))
+    .orderBy(desc(fermentationReadings.takenAt), desc(fermentationReadings.id))
+    .limit(query.pageSize + 1);
+  const page = rows.slice(0, query.pageSize).reverse();
+  const first = page[0];
+  return {
+    items: page.map((r) => toFermentationReading(r, stored.row.pitchedAt)),
+    nextCursor: rows.length > query.pageSize && first ? encodeTimeCursor(CURSOR_TAG, { at: first.takenAt, id: first.id }) : null,
+    pageSize: query.pageSize,
+  };
+}
+
+/** GET /api/brews/:brewId/fermentation/readings: older readings of a log the actor may read. */
+export async function listFermentationReadings(db: DbOrTx, actor: Actor, brewId: number, query: { cursor?: string; pageSize: number }): Promise<FermentationReadingPage> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  return fermentationReadingPage(db, stored, query);
+}
+
+/** Every reading as the chart draws it, from the rows the verdict already read (no statement of its own). */
+export const seriesOf = (rows: readonly DerivedRow[]): FermentationPoint[] =>
+  rows.map((r) => ({ id: r.id, kind: r.kind, takenAt: iso(r.takenAt), corrected: r.correctedValue, estimate: r.estimate }));
+
+async function allReadingsPage(db: DbOrTx, stored: StoredBrew): Promise<FermentationReadingPage> {
+  const rows = await readingRows(db, stored.row.id);
+  return { items: rows.map((r) => toFermentationReading(r, stored.row.pitchedAt)), nextCursor: null, pageSize: rows.length };
+}
+
+/**
+ * The log as its page opens: the latest READINGS_WINDOW readings with the cursor for older ones,
+ * and what every reading decides (verdict, temperature, progress, the chart's series) from their
+ * narrow columns only, so it costs the same statements with 10 readings as with 2,000.
+ * `allReadings` sends every reading whole (a mentor's review anchors comments to any of them).
+ */
+export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date(), options: { allReadings?: boolean } = {}): Promise<FermentationLog> {
   const brewId = stored.row.id;
   const isOwner = stored.row.ownerId === actor.id;
-  const [rows, ogRead, [packagingRow], reminderRows, enabled] = await Promise.all([
-    readingRows(db, brewId),
+  const [latest, rows, ogRead, [packagingRow], reminderRows, enabled] = await Promise.all([
+    options.allReadings ? allReadingsPage(db, stored) : fermentationReadingPage(db, stored, { pageSize: READINGS_WINDOW }),
+    derivedRows(db, brewId),
     ogReading(db, brewId),
     db.select().from(packagingRecords).where(eq(packagingRecords.brewId, brewId)),
     isOwner
@@ -172,17 +231,17 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
       : Promise.resolve([]),
     isOwner ? remindersEnabledFor(db, actor.id) : Promise.resolve(null),
   ]);
-  const pitchedAt = stored.row.pitchedAt;
   const brew = brewOf(actor, stored, ogRead);
-  const og = ogRead.og;
-  const reminders = reminderRows;
   return {
     brew,
-    readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
-    ...derivedParts(stored, brew, og, rows, now),
+    readings: latest.items,
+    readingCount: rows.length,
+    olderReadings: latest.nextCursor,
+    series: seriesOf(rows),
+    ...derivedParts(stored, brew, ogRead.og, rows, now),
     packaging: packagingRow ? toPackaging(packagingRow) : null,
     remindersEnabled: enabled,
-    reminders: reminders.map(toScheduled),
+    reminders: reminderRows.map(toScheduled),
     now: iso(now),
   };
 }

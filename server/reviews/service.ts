@@ -198,7 +198,7 @@ export async function deleteComment(db: Db, actor: Actor, brewId: number, commen
 
 /** The brew day (as its log shows it), its fermentation and every deviation of both. */
 async function reviewParts(db: DbOrTx, actor: Actor, stored: StoredBrew) {
-  const [brew, log] = await Promise.all([getBrew(db, actor, stored.row.id, { allReadings: true }), assembleLog(db, actor, stored)]);
+  const [brew, log] = await Promise.all([getBrew(db, actor, stored.row.id, { allReadings: true }), assembleLog(db, actor, stored, new Date(), { allReadings: true })]);
   const deviations: ReviewDeviation[] = [
     ...brew.deviations,
     ...findFermentationDeviations({
