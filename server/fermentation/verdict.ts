@@ -51,8 +51,9 @@ export async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRo
       takenAt: fermentationReadings.takenAt,
       correctedValue: fermentationReadings.correctedValue,
       estimate: fermentationReadings.estimate,
-      // The one figure the verdict reads from the snapshot, not thousands of snapshots parsed.
-      resolutionSg: sql<number | null>`CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE)`,
+      // The one figure the verdict reads from the snapshot, and only for gravity readings: a
+      // temperature logger's thousands of snapshots are never parsed.
+      resolutionSg: sql<number | null>`CASE WHEN ${fermentationReadings.kind} = 'gravity' THEN CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE) END`,
     })
     .from(fermentationReadings)
     .where(eq(fermentationReadings.brewId, brewId))
