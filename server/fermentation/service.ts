@@ -5,9 +5,10 @@
  * writes, everyone else gets a 404. Adding and removing readings is in readings.ts, packaging in
  * packaging.ts, what the readings decide in verdict.ts.
  */
-import { and, asc, desc, eq, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, or, sql, type SQL } from 'drizzle-orm';
 import { findFermentationDeviations, type FermentationDeviation } from '@shared/fermentation-deviations';
 import type { BrewDeviation } from '@shared/schemas/brews';
+import type { InstrumentSnapshot } from '@shared/schemas/instruments';
 import { READINGS_WINDOW } from '@shared/schemas/brews';
 import type {
   FermentationBrew,
@@ -57,7 +58,7 @@ export function toFermentationReading(row: FermentationReadingRow, pitchedAt: Da
   };
 }
 
-function toPackaging(row: PackagingRecordRow): PackagingRecord {
+export function toPackaging(row: PackagingRecordRow): PackagingRecord {
   return {
     id: row.id,
     brewId: row.brewId,
@@ -146,25 +147,87 @@ export async function readingRows(db: DbOrTx, brewId: number) {
 }
 
 /**
- * Fermentation's deviations from its rows alone (no query), as the review shows them after the
- * brew day's own: the mentor's queue counts them for many brew days loaded at once.
+ * What fermentation's deviations read of a reading: every temperature reading's value and time
+ * (its spells), and the instrument snapshot of the first reading of each distinct snapshot (null
+ * on the others: the same snapshot calls out the same instrument, once).
+ */
+export interface DeviationRow {
+  id: number;
+  brewId: number;
+  kind: FermentationReading['kind'];
+  takenAt: Date;
+  correctedValue: number;
+  instrumentSnapshot: InstrumentSnapshot | null;
+}
+
+/**
+ * The rows fermentation's deviations need, for many brew days in one statement: temperature
+ * readings narrow, and of the gravity readings only those that first show a snapshot, so a long
+ * log sends its temperatures and a handful of snapshots, never thousands of whole rows.
+ */
+export async function deviationRowsOf(db: DbOrTx, brewIds: readonly number[]): Promise<Map<number, DeviationRow[]>> {
+  const byBrew = new Map<number, DeviationRow[]>();
+  if (brewIds.length === 0) return byBrew;
+  const r = fermentationReadings;
+  const ranked = db
+    .select({
+      id: r.id,
+      brewId: r.brewId,
+      kind: r.kind,
+      takenAt: r.takenAt,
+      correctedValue: r.correctedValue,
+      snapshot: sql<string>`${r.instrumentSnapshot}`.as('snapshot'),
+      // MD5 groups equal snapshots without sorting whole JSON documents.
+      rank: sql<number>`ROW_NUMBER() OVER (PARTITION BY ${r.brewId}, MD5(${r.instrumentSnapshot}) ORDER BY ${r.takenAt}, ${r.id})`.as('snapshot_rank'),
+    })
+    .from(r)
+    .where(inArray(r.brewId, [...brewIds]))
+    .as('ranked');
+  const rows = await db
+    .select({
+      id: ranked.id,
+      brewId: ranked.brewId,
+      kind: ranked.kind,
+      takenAt: ranked.takenAt,
+      correctedValue: ranked.correctedValue,
+      snapshot: sql<string | InstrumentSnapshot | null>`CASE WHEN ${ranked.rank} = 1 THEN ${ranked.snapshot} END`,
+    })
+    .from(ranked)
+    .where(or(eq(ranked.kind, 'temperature'), eq(ranked.rank, 1)))
+    .orderBy(asc(ranked.takenAt), asc(ranked.id));
+  for (const row of rows) {
+    const { snapshot, ...rest } = row;
+    // The driver hands a JSON document back parsed or as text, depending on how MariaDB typed the CASE.
+    const instrumentSnapshot = snapshot === null ? null : ((typeof snapshot === 'string' ? JSON.parse(snapshot) : snapshot) as InstrumentSnapshot);
+    const parsed: DeviationRow = { ...rest, instrumentSnapshot };
+    const list = byBrew.get(row.brewId);
+    if (list) list.push(parsed);
+    else byBrew.set(row.brewId, [parsed]);
+  }
+  return byBrew;
+}
+
+/**
+ * Fermentation's deviations from its deviation rows alone (no query), as the review shows them
+ * after the brew day's own: the mentor's queue counts them for many brew days loaded at once.
  */
 export function fermentationDeviations(
   actor: Actor,
   stored: StoredBrew,
-  rows: readonly FermentationReadingRow[],
-  packagingRow: PackagingRecordRow | null,
+  rows: readonly DeviationRow[],
+  packaging: PackagingRecord | null,
   brewDay: readonly BrewDeviation[],
   now: Date,
 ): FermentationDeviation[] {
   const brew = brewOf(actor, stored, { og: null, volumeL: null });
-  const range = rangeOf(brew);
-  const temperature = temperatureOf(rows, range, now);
+  const temperature = temperatureOf(rows, rangeOf(brew), now);
+  const asReading = (row: DeviationRow) => ({ id: row.id, kind: row.kind, instrument: row.instrumentSnapshot, takenAt: iso(row.takenAt) });
   return findFermentationDeviations({
     range: temperature.target,
-    readings: rows.map((r) => toFermentationReading(r, stored.row.pitchedAt)),
+    readings: rows.filter((row) => row.kind === 'temperature').map(asReading),
+    instrumentReadings: rows.filter((row) => row.instrumentSnapshot !== null).map(asReading),
     excursions: temperature.excursions,
-    packaging: packagingRow ? toPackaging(packagingRow) : null,
+    packaging,
     pitchedAt: brew.pitchedAt,
     brewDay,
   });

@@ -64,7 +64,7 @@ export function rangeOf(brew: FermentationBrew): { minC: number; maxC: number } 
   return brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
 }
 
-export function temperatureOf(rows: readonly DerivedRow[], range: { minC: number; maxC: number } | null, now: Date) {
+export function temperatureOf(rows: readonly Pick<DerivedRow, 'id' | 'kind' | 'takenAt' | 'correctedValue'>[], range: { minC: number; maxC: number } | null, now: Date) {
   const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
   return temperatureSummary(temps, range, now);
 }
