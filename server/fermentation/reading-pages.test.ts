@@ -35,7 +35,7 @@ async function idsInOrder(brewId: number) {
   return rows.map((r) => r.id);
 }
 
-/** `total` readings: one at 17 °C on day 1 (below a 18–22 °C range, as the test recipe's), then logger copies of it. */
+/** `total` readings: one at 17 °C on day 1 (below the test recipe's 18–20 °C range), then logger copies of it. */
 async function longLog(total: number, options: { shared?: boolean } = {}): Promise<FermentationScene> {
   const s = await makeFermentationScene(h, { pitchedDaysAgo: 30, shared: options.shared });
   await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'thermometer', tempC: 17, takenAt: s.day(1) }).expect(201);
