@@ -452,7 +452,7 @@ const cases: Case[] = [
       label: shared ? 'shared' : 'private',
       prepare: () => fresh.brewReading(shared ? scene.sharedBrew.id : scene.privateBrew.id),
       call: (a, id) => a.delete(`/api/brews/${shared ? scene.sharedBrew.id : scene.privateBrew.id}/readings/${id}`),
-      expected: shared ? sharedWrite(204) : ownerOnly(204),
+      expected: shared ? sharedWrite(200) : ownerOnly(200),
     }),
   ),
   ...bothBrews('POST /api/brews/:id/readings/:readingId/recompute', (a, b) => a.post(`/api/brews/${b.id}/readings/${b.readingId}/recompute`), sharedWrite(200)),
@@ -488,6 +488,7 @@ const cases: Case[] = [
   { route: 'PUT /api/fermentation/settings', call: (a) => a.put('/api/fermentation/settings').send({ remindersEnabled: true }), expected: signedIn(200) },
   ...bothBrews('GET /api/brews/:brewId/fermentation.csv', (a, b) => a.get(`/api/brews/${b.id}/fermentation.csv`), sharedRead(200)),
   ...bothBrews('GET /api/brews/:brewId/fermentation', (a, b) => a.get(`/api/brews/${b.id}/fermentation`), sharedRead(200)),
+  ...bothBrews('GET /api/brews/:brewId/fermentation/readings', (a, b) => a.get(`/api/brews/${b.id}/fermentation/readings`), sharedRead(200)),
   ...bothBrews(
     'POST /api/brews/:brewId/fermentation/readings',
     (a, b) => a.post(`/api/brews/${b.id}/fermentation/readings`).send({ method: 'thermometer', tempC: 18.2, takenAt: new Date(b.pitchedAt.getTime() + 4 * DAY_MS).toISOString() }),

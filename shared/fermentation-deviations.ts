@@ -79,6 +79,12 @@ export function findFermentationDeviations(input: {
   range: { minC: number; maxC: number } | null;
   /** In time order. */
   readings: readonly FermentationDeviationReading[];
+  /**
+   * The readings whose instruments are checked, in time order (default: `readings`). The first
+   * reading of each distinct instrument snapshot is enough: later ones with the same snapshot
+   * repeat its call-out, which is given once.
+   */
+  instrumentReadings?: readonly FermentationDeviationReading[];
   /** temperatureSummary(...).excursions for the same readings and range. */
   excursions: readonly FermentationDeviationExcursion[];
   packaging: FermentationDeviationPackaging | null;
@@ -149,7 +155,7 @@ export function findFermentationDeviations(input: {
 
   // Instruments: the same checks as on brew day, once per instrument across the whole brew.
   const seen = new Set((input.brewDay ?? []).filter((d) => d.code === 'instrument-uncalibrated' || d.code === 'instrument-overdue').map((d) => `${d.code}:${d.instrumentName}`));
-  for (const r of input.readings) {
+  for (const r of input.instrumentReadings ?? input.readings) {
     const found = instrumentDeviation({ id: r.id, kind: 'og', corrected: 0, volumeL: null, instrument: r.instrument, takenAt: r.takenAt }, 'og');
     if (!found || (found.code !== 'instrument-uncalibrated' && found.code !== 'instrument-overdue')) continue;
     const key = `${found.code}:${found.instrumentName}`;

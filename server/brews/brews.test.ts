@@ -328,7 +328,11 @@ describe('readings', () => {
     const taken = await scene.owner.agent.post(`/api/brews/${id}/readings`).send({ kind: 'mash_temp', tempC: 66 }).expect(201);
     await shareWithClub(scene, id);
     await scene.member.agent.delete(`/api/brews/${id}/readings/${taken.body.id}`).expect(403);
-    await scene.owner.agent.delete(`/api/brews/${id}/readings/${taken.body.id}`).expect(204);
+    const before = (await scene.owner.agent.get(`/api/brews/${id}`).expect(200)).body;
+    const deleted = await scene.owner.agent.delete(`/api/brews/${id}/readings/${taken.body.id}`).expect(200);
+    // What the deletion changed, not the day: the page drops the reading from what it holds.
+    expect(deleted.body).toMatchObject({ readingId: taken.body.id, brewDay: { readingCount: before.readingCount - 1 } });
+    expect(deleted.body.brewDay).not.toHaveProperty('readings');
     await scene.owner.agent.delete(`/api/brews/${id}/readings/${taken.body.id}`).expect(404);
   });
 });

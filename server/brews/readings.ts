@@ -7,7 +7,7 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import { instrumentNoteKey } from '@shared/brew-deviations';
 import { correctReading, defaultSnapshot, type RawByKind } from '@shared/instruments';
-import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingCreated, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
+import { readingInstrumentKinds, readingKindLabels, readingQuantity, readingStage, type BrewReading, type ReadingBody, type ReadingCreated, type ReadingDeleted, type ReadingKind, type ReadingRaw } from '@shared/schemas/brews';
 import type { InstrumentKind, InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { Actor } from '../auth/permissions';
 import type { Db, DbOrTx } from '../db/client';
@@ -139,10 +139,12 @@ export async function loadReading(db: Db, brewId: number, readingId: number) {
   return row;
 }
 
-export async function deleteReading(db: Db, actor: Actor, brewId: number, readingId: number): Promise<void> {
+/** Removes one reading and answers what that changed on the day (OG, count, deviations…), not the day itself. */
+export async function deleteReading(db: Db, actor: Actor, brewId: number, readingId: number): Promise<ReadingDeleted> {
   await loadBrewForActor(db, actor, brewId, 'update');
   await loadReading(db, brewId, readingId);
   await db.delete(brewReadings).where(eq(brewReadings.id, readingId));
+  return { readingId, brewDay: await brewDayChange(db, brewId) };
 }
 
 const showValue = (kind: ReadingKind, value: number) => {

@@ -98,10 +98,7 @@ export function brewsRouter(ctx: RouterContext) {
 
   router.delete(
     '/:id/readings/:readingId',
-    handle({ params: readingParamsSchema }, async ({ params }, req, res) => {
-      await deleteReading(db, currentUser(req), params.id, params.readingId);
-      res.status(204).end();
-    }),
+    handle({ params: readingParamsSchema }, ({ params }, req) => deleteReading(db, currentUser(req), params.id, params.readingId)),
   );
 
   router.post(

@@ -48,7 +48,7 @@ import { lockBrewRow } from '../db/locks';
 import { inList, prepared } from '../db/prepared';
 import { getEquipmentProfile } from '../equipment/service';
 import { BadRequest, NotFound } from '../lib/errors';
-import { cursorInstant, decodeCursor, encodeCursor, isCursorId } from '../lib/cursor';
+import { beforeTimeKey, decodeCursor, decodeTimeCursor, encodeCursor, encodeTimeCursor, isCursorId } from '../lib/cursor';
 import { getRecipeTargets, loadRecipeForActor } from '../recipes/service';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import { utcDay } from '@shared/dates';
@@ -284,14 +284,6 @@ function ogFigures(readings: readonly JudgedReading[]) {
   return { og: ogs.at(-1)?.corrected ?? null, fermenterVolumeL: ogs.findLast((r) => r.volumeL !== null)?.volumeL ?? null };
 }
 
-/** A readings cursor: the last reading's time and id (server/lib/cursor.ts). */
-function decodeReadingCursor(cursor: string) {
-  return decodeCursor(cursor, (parts) => {
-    const at = parts.length === 3 && parts[0] === 'readings' ? cursorInstant(parts[1]) : null;
-    return at && isCursorId(parts[2]) ? { at, id: parts[2] } : null;
-  });
-}
-
 async function photosOf(db: DbOrTx, brewId: number, readingIds: number[]) {
   const byReading = new Map<number, ReadingPhoto[]>();
   if (readingIds.length === 0) return byReading;
@@ -309,12 +301,12 @@ async function photosOf(db: DbOrTx, brewId: number, readingIds: number[]) {
  * backwards along the (brew, time) index, so a page costs the same however long the log.
  */
 export async function readingPage(db: DbOrTx, brewId: number, query: { cursor?: string; pageSize: number }): Promise<BrewReadingPage> {
-  const before = query.cursor ? decodeReadingCursor(query.cursor) : null;
+  const before = query.cursor ? decodeTimeCursor('readings', query.cursor) : null;
   const rows = before
     ? await db
         .select()
         .from(brewReadings)
-        .where(and(eq(brewReadings.brewId, brewId), or(lt(brewReadings.takenAt, before.at), and(eq(brewReadings.takenAt, before.at), lt(brewReadings.id, before.id)))))
+        .where(and(eq(brewReadings.brewId, brewId), beforeTimeKey(brewReadings.takenAt, brewReadings.id, before)))
         .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
         .limit(query.pageSize + 1)
     : await prepared(db, latestReadings).execute({ id: brewId, limit: query.pageSize + 1 });
@@ -323,7 +315,7 @@ export async function readingPage(db: DbOrTx, brewId: number, query: { cursor?: 
   const first = page[0];
   return {
     items: page.map((r) => toReading(r, photos.get(r.id))),
-    nextCursor: rows.length > query.pageSize && first ? encodeCursor(['readings', first.takenAt.toISOString(), first.id]) : null,
+    nextCursor: rows.length > query.pageSize && first ? encodeTimeCursor('readings', { at: first.takenAt, id: first.id }) : null,
     pageSize: query.pageSize,
   };
 }

@@ -33,8 +33,8 @@ import { BadRequest, Conflict, HttpError } from '../lib/errors';
 import { CsvParseError, CsvTooManyRowsError, detectDelimiter, readCsv, stripBom, unguardFormula, type CsvRecord } from '../lib/csv';
 import { scheduleAfterReadings } from './reminders';
 import { correctRaw, dedupeKey, existingKeys, primaryOf, requirePitched } from './readings';
-import { assembleLog, measuredOg, readingRows } from './service';
-import { expectedFgOf, verdictFor } from './verdict';
+import { assembleLog, measuredOg } from './service';
+import { derivedRows, expectedFgOf, verdictFor } from './verdict';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 
 export class UnsupportedFile extends HttpError {
@@ -337,7 +337,7 @@ export async function importReadings(db: Db, actor: Actor, brewId: number, buffe
     if (isDuplicateKey(error)) throw new Conflict('Some of these readings were saved by another import just now. Nothing was imported; try again and the rest will be added.');
     throw error;
   }
-  if (added > 0) await scheduleAfterReadings(db, stored, verdictFor(await readingRows(db, brewId), stored.row.pitchedAt, now, expectedFgOf(stored)), now);
+  if (added > 0) await scheduleAfterReadings(db, stored, verdictFor(await derivedRows(db, brewId), stored.row.pitchedAt, now, expectedFgOf(stored)), now);
   const log = await assembleLog(db, actor, stored, now);
   return { added, skipped: prepared.length - added, log };
 }

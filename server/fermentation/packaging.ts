@@ -13,8 +13,8 @@ import { brewNotes, brews, packagingRecords } from '../db/schema';
 import { isDuplicateKey } from '../lib/db-errors';
 import { Conflict, NotFound } from '../lib/errors';
 import { checkTakenAt, requirePitched } from './readings';
-import { assembleLog, readingRows } from './service';
-import { expectedFgOf, verdictFor } from './verdict';
+import { assembleLog } from './service';
+import { derivedRows, expectedFgOf, verdictFor } from './verdict';
 
 /**
  * Records how the beer was packaged. Before the verdict is "stable" the brewer must say so
@@ -26,7 +26,7 @@ export async function recordPackaging(db: Db, actor: Actor, brewId: number, body
   const pitchedAt = requirePitched(stored);
   const packagedAt = body.packagedAt ? new Date(body.packagedAt) : now;
   checkTakenAt(packagedAt, pitchedAt, now, 'packagedAt');
-  const rows = await readingRows(db, brewId);
+  const rows = await derivedRows(db, brewId);
   const verdict = verdictFor(rows, pitchedAt, now, expectedFgOf(stored))!;
   if (verdict.state === 'stuck' && !body.override) {
     throw new Conflict('The gravity is steady but well above where this recipe should finish: a stuck fermentation can restart in the bottle and burst it.', {

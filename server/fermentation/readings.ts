@@ -12,6 +12,7 @@ import {
   type FermentationRaw,
   type FermentationReadingBody,
   type FermentationReadingCreated,
+  type FermentationReadingDeleted,
 } from '@shared/schemas/fermentation';
 import type { InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { Actor } from '../auth/permissions';
@@ -23,7 +24,7 @@ import { loadInstrumentSnapshot } from '../instruments/service';
 import { BadRequest, Conflict, NotFound } from '../lib/errors';
 import { lockAndCheckReadingLimit } from '../lib/reading-limit';
 import { scheduleAfterReadings } from './reminders';
-import { assembleLog, brewOf, ogReading, toFermentationReading, toScheduled } from './service';
+import { brewOf, ogReading, toFermentationReading, toScheduled } from './service';
 import { derivedParts, derivedRows, expectedFgOf, verdictFor, type DerivedRow } from './verdict';
 
 const iso = (d: Date) => d.toISOString();
@@ -115,6 +116,7 @@ async function assembleChange(db: DbOrTx, actor: Actor, stored: StoredBrew, read
   return {
     reading: toFermentationReading(row, stored.row.pitchedAt),
     duplicate,
+    readingCount: rows.length,
     ...derivedParts(stored, brew, ogRead.og, rows, now),
     reminders: reminderRows.map(toScheduled),
     now: iso(now),
@@ -174,7 +176,11 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Fer
   return assembleChange(db, actor, stored, id, duplicate, rows, now);
 }
 
-export async function deleteReading(db: Db, actor: Actor, brewId: number, readingId: number) {
+/**
+ * Removes one reading and answers what that changed (count, verdict, temperature summary,
+ * progress), never the log itself: the page drops the reading from what it holds.
+ */
+export async function deleteReading(db: Db, actor: Actor, brewId: number, readingId: number): Promise<FermentationReadingDeleted> {
   const stored = await loadBrewForActor(db, actor, brewId, 'update');
   const [row] = await db
     .select({ id: fermentationReadings.id })
@@ -182,7 +188,10 @@ export async function deleteReading(db: Db, actor: Actor, brewId: number, readin
     .where(and(eq(fermentationReadings.id, readingId), eq(fermentationReadings.brewId, brewId)));
   if (!row) throw new NotFound('That reading was not found.');
   await db.delete(fermentationReadings).where(eq(fermentationReadings.id, readingId));
-  return assembleLog(db, actor, stored);
+  const now = new Date();
+  const [rows, ogRead] = await Promise.all([derivedRows(db, brewId), ogReading(db, brewId)]);
+  const brew = brewOf(actor, stored, ogRead);
+  return { readingId, readingCount: rows.length, ...derivedParts(stored, brew, ogRead.og, rows, now), now: iso(now) };
 }
 
 export async function existingKeys(db: DbOrTx, brewId: number, keys: string[]): Promise<Set<string>> {

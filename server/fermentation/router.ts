@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { idSchema } from '@shared/schemas/common';
-import { CSV_MAX_BYTES, fermentationReadingInputSchema, fermentationSettingsSchema, packagingInputSchema } from '@shared/schemas/fermentation';
+import { CSV_MAX_BYTES, fermentationReadingInputSchema, fermentationReadingsQuerySchema, fermentationSettingsSchema, packagingInputSchema } from '@shared/schemas/fermentation';
 import { currentUser, requireUser } from '../auth/session';
 import type { RouterContext } from '../context';
 import { BadRequest } from '../lib/errors';
@@ -11,7 +11,7 @@ import { exportCsv } from './csv-export';
 import { importReadings, parseMapping, previewImport } from './csv-import';
 import { deletePackaging, recordPackaging } from './packaging';
 import { addReading, deleteReading } from './readings';
-import { getLog, remindersEnabledFor, setRemindersEnabled } from './service';
+import { getLog, listFermentationReadings, remindersEnabledFor, setRemindersEnabled } from './service';
 
 const idNum = idSchema;
 const brewParams = z.object({ brewId: idNum });
@@ -73,7 +73,7 @@ export function fermentationCsvRouter(ctx: RouterContext) {
   return router;
 }
 
-/** `/api/brews/:brewId/fermentation`: the fermentation log of a brew day, its readings, packaging and CSV import. */
+/** `/api/brews/:brewId/fermentation`: the fermentation log of a brew day (its latest readings; older ones page by page), its readings, packaging and CSV import. */
 export function fermentationRouter(ctx: RouterContext) {
   const { db } = ctx;
   const router = Router({ mergeParams: true });
@@ -82,6 +82,12 @@ export function fermentationRouter(ctx: RouterContext) {
     '/',
     requireUser,
     handle({ params: brewParams }, ({ params }, req) => getLog(db, currentUser(req), params.brewId)),
+  );
+
+  router.get(
+    '/readings',
+    requireUser,
+    handle({ params: brewParams, query: fermentationReadingsQuerySchema }, ({ params, query }, req) => listFermentationReadings(db, currentUser(req), params.brewId, query)),
   );
 
   router.post(

@@ -5,10 +5,20 @@
  * writes, everyone else gets a 404. Adding and removing readings is in readings.ts, packaging in
  * packaging.ts, what the readings decide in verdict.ts.
  */
-import { and, asc, desc, eq } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, or, sql, type SQL } from 'drizzle-orm';
 import { findFermentationDeviations, type FermentationDeviation } from '@shared/fermentation-deviations';
 import type { BrewDeviation } from '@shared/schemas/brews';
-import type { FermentationBrew, FermentationLog, FermentationReading, PackagingRecord, ScheduledReminder } from '@shared/schemas/fermentation';
+import type { InstrumentSnapshot } from '@shared/schemas/instruments';
+import { READINGS_WINDOW } from '@shared/schemas/brews';
+import type {
+  FermentationBrew,
+  FermentationLog,
+  FermentationPoint,
+  FermentationReading,
+  FermentationReadingPage,
+  PackagingRecord,
+  ScheduledReminder,
+} from '@shared/schemas/fermentation';
 import type { Actor } from '../auth/permissions';
 import { loadBrewForActor, type StoredBrew } from '../brews/service';
 import type { Db, DbOrTx } from '../db/client';
@@ -21,7 +31,8 @@ import {
   type FermentationReadingRow,
   type PackagingRecordRow,
 } from '../db/schema';
-import { derivedParts, rangeOf, targetsOf, temperatureOf } from './verdict';
+import { beforeTimeKey, decodeTimeCursor, encodeTimeCursor } from '../lib/cursor';
+import { derivedParts, derivedRows, rangeOf, targetsOf, temperatureOf, type DerivedRow } from './verdict';
 import { DAY_MS } from '@shared/dates';
 
 const iso = (d: Date) => d.toISOString();
@@ -47,7 +58,7 @@ export function toFermentationReading(row: FermentationReadingRow, pitchedAt: Da
   };
 }
 
-function toPackaging(row: PackagingRecordRow): PackagingRecord {
+export function toPackaging(row: PackagingRecordRow): PackagingRecord {
   return {
     id: row.id,
     brewId: row.brewId,
@@ -136,35 +147,146 @@ export async function readingRows(db: DbOrTx, brewId: number) {
 }
 
 /**
- * Fermentation's deviations from its rows alone (no query), as the review shows them after the
- * brew day's own: the mentor's queue counts them for many brew days loaded at once.
+ * What fermentation's deviations read of a reading: every temperature reading's value and time
+ * (its spells), and the instrument snapshot of the first reading of each distinct snapshot (null
+ * on the others: the same snapshot calls out the same instrument, once).
+ */
+export interface DeviationRow {
+  id: number;
+  brewId: number;
+  kind: FermentationReading['kind'];
+  takenAt: Date;
+  correctedValue: number;
+  instrumentSnapshot: InstrumentSnapshot | null;
+}
+
+/**
+ * The rows fermentation's deviations need, for many brew days in one statement: temperature
+ * readings narrow, and of the gravity readings only those that first show a snapshot, so a long
+ * log sends its temperatures and a handful of snapshots, never thousands of whole rows.
+ */
+export async function deviationRowsOf(db: DbOrTx, brewIds: readonly number[]): Promise<Map<number, DeviationRow[]>> {
+  const byBrew = new Map<number, DeviationRow[]>();
+  if (brewIds.length === 0) return byBrew;
+  const r = fermentationReadings;
+  const ranked = db
+    .select({
+      id: r.id,
+      brewId: r.brewId,
+      kind: r.kind,
+      takenAt: r.takenAt,
+      correctedValue: r.correctedValue,
+      snapshot: sql<string>`${r.instrumentSnapshot}`.as('snapshot'),
+      // MD5 groups equal snapshots without sorting whole JSON documents.
+      rank: sql<number>`ROW_NUMBER() OVER (PARTITION BY ${r.brewId}, MD5(${r.instrumentSnapshot}) ORDER BY ${r.takenAt}, ${r.id})`.as('snapshot_rank'),
+    })
+    .from(r)
+    .where(inArray(r.brewId, [...brewIds]))
+    .as('ranked');
+  const rows = await db
+    .select({
+      id: ranked.id,
+      brewId: ranked.brewId,
+      kind: ranked.kind,
+      takenAt: ranked.takenAt,
+      correctedValue: ranked.correctedValue,
+      snapshot: sql<string | InstrumentSnapshot | null>`CASE WHEN ${ranked.rank} = 1 THEN ${ranked.snapshot} END`,
+    })
+    .from(ranked)
+    .where(or(eq(ranked.kind, 'temperature'), eq(ranked.rank, 1)))
+    .orderBy(asc(ranked.takenAt), asc(ranked.id));
+  for (const row of rows) {
+    const { snapshot, ...rest } = row;
+    // The driver hands a JSON document back parsed or as text, depending on how MariaDB typed the CASE.
+    const instrumentSnapshot = snapshot === null ? null : ((typeof snapshot === 'string' ? JSON.parse(snapshot) : snapshot) as InstrumentSnapshot);
+    const parsed: DeviationRow = { ...rest, instrumentSnapshot };
+    const list = byBrew.get(row.brewId);
+    if (list) list.push(parsed);
+    else byBrew.set(row.brewId, [parsed]);
+  }
+  return byBrew;
+}
+
+/**
+ * Fermentation's deviations from its deviation rows alone (no query), as the review shows them
+ * after the brew day's own: the mentor's queue counts them for many brew days loaded at once.
  */
 export function fermentationDeviations(
   actor: Actor,
   stored: StoredBrew,
-  rows: readonly FermentationReadingRow[],
-  packagingRow: PackagingRecordRow | null,
+  rows: readonly DeviationRow[],
+  packaging: PackagingRecord | null,
   brewDay: readonly BrewDeviation[],
   now: Date,
 ): FermentationDeviation[] {
   const brew = brewOf(actor, stored, { og: null, volumeL: null });
-  const range = rangeOf(brew);
-  const temperature = temperatureOf(rows, range, now);
+  const temperature = temperatureOf(rows, rangeOf(brew), now);
+  const asReading = (row: DeviationRow) => ({ id: row.id, kind: row.kind, instrument: row.instrumentSnapshot, takenAt: iso(row.takenAt) });
   return findFermentationDeviations({
     range: temperature.target,
-    readings: rows.map((r) => toFermentationReading(r, stored.row.pitchedAt)),
+    readings: rows.filter((row) => row.kind === 'temperature').map(asReading),
+    instrumentReadings: rows.filter((row) => row.instrumentSnapshot !== null).map(asReading),
     excursions: temperature.excursions,
-    packaging: packagingRow ? toPackaging(packagingRow) : null,
+    packaging,
     pitchedAt: brew.pitchedAt,
     brewDay,
   });
 }
 
-export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date()): Promise<FermentationLog> {
+/** A cursor into one brew day's fermentation readings (server/lib/cursor.ts); a brew-day readings cursor is refused. */
+const CURSOR_TAG = 'fermentation-readings';
+
+/**
+ * The readings before `cursor` (the latest when absent), oldest first: read backwards along the
+ * (brew, time) index, so a page costs the same however long the log.
+ */
+export async function fermentationReadingPage(db: DbOrTx, stored: StoredBrew, query: { cursor?: string; pageSize: number }): Promise<FermentationReadingPage> {
+  const brewId = stored.row.id;
+  const before = query.cursor ? decodeTimeCursor(CURSOR_TAG, query.cursor) : null;
+  const where: SQL[] = [eq(fermentationReadings.brewId, brewId)];
+  if (before) where.push(beforeTimeKey(fermentationReadings.takenAt, fermentationReadings.id, before));
+  const rows = await db
+    .select()
+    .from(fermentationReadings)
+    .where(and(...where))
+    .orderBy(desc(fermentationReadings.takenAt), desc(fermentationReadings.id))
+    .limit(query.pageSize + 1);
+  const page = rows.slice(0, query.pageSize).reverse();
+  const first = page[0];
+  return {
+    items: page.map((r) => toFermentationReading(r, stored.row.pitchedAt)),
+    nextCursor: rows.length > query.pageSize && first ? encodeTimeCursor(CURSOR_TAG, { at: first.takenAt, id: first.id }) : null,
+    pageSize: query.pageSize,
+  };
+}
+
+/** GET /api/brews/:brewId/fermentation/readings: older readings of a log the actor may read. */
+export async function listFermentationReadings(db: DbOrTx, actor: Actor, brewId: number, query: { cursor?: string; pageSize: number }): Promise<FermentationReadingPage> {
+  const stored = await loadBrewForActor(db, actor, brewId, 'read');
+  return fermentationReadingPage(db, stored, query);
+}
+
+/** Every reading as the chart draws it, from the rows the verdict already read (no statement of its own). */
+export const seriesOf = (rows: readonly DerivedRow[]): FermentationPoint[] =>
+  rows.map((r) => ({ id: r.id, kind: r.kind, takenAt: iso(r.takenAt), corrected: r.correctedValue, estimate: r.estimate }));
+
+async function allReadingsPage(db: DbOrTx, stored: StoredBrew): Promise<FermentationReadingPage> {
+  const rows = await readingRows(db, stored.row.id);
+  return { items: rows.map((r) => toFermentationReading(r, stored.row.pitchedAt)), nextCursor: null, pageSize: rows.length };
+}
+
+/**
+ * The log as its page opens: the latest READINGS_WINDOW readings with the cursor for older ones,
+ * and what every reading decides (verdict, temperature, progress, the chart's series) from their
+ * narrow columns only, so it costs the same statements with 10 readings as with 2,000.
+ * `allReadings` sends every reading whole (a mentor's review anchors comments to any of them).
+ */
+export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, now = new Date(), options: { allReadings?: boolean } = {}): Promise<FermentationLog> {
   const brewId = stored.row.id;
   const isOwner = stored.row.ownerId === actor.id;
-  const [rows, ogRead, [packagingRow], reminderRows, enabled] = await Promise.all([
-    readingRows(db, brewId),
+  const [latest, rows, ogRead, [packagingRow], reminderRows, enabled] = await Promise.all([
+    options.allReadings ? allReadingsPage(db, stored) : fermentationReadingPage(db, stored, { pageSize: READINGS_WINDOW }),
+    derivedRows(db, brewId),
     ogReading(db, brewId),
     db.select().from(packagingRecords).where(eq(packagingRecords.brewId, brewId)),
     isOwner
@@ -172,17 +294,17 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
       : Promise.resolve([]),
     isOwner ? remindersEnabledFor(db, actor.id) : Promise.resolve(null),
   ]);
-  const pitchedAt = stored.row.pitchedAt;
   const brew = brewOf(actor, stored, ogRead);
-  const og = ogRead.og;
-  const reminders = reminderRows;
   return {
     brew,
-    readings: rows.map((r) => toFermentationReading(r, pitchedAt)),
-    ...derivedParts(stored, brew, og, rows, now),
+    readings: latest.items,
+    readingCount: rows.length,
+    olderReadings: latest.nextCursor,
+    series: seriesOf(rows),
+    ...derivedParts(stored, brew, ogRead.og, rows, now),
     packaging: packagingRow ? toPackaging(packagingRow) : null,
     remindersEnabled: enabled,
-    reminders: reminders.map(toScheduled),
+    reminders: reminderRows.map(toScheduled),
     now: iso(now),
   };
 }

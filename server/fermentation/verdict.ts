@@ -51,8 +51,9 @@ export async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRo
       takenAt: fermentationReadings.takenAt,
       correctedValue: fermentationReadings.correctedValue,
       estimate: fermentationReadings.estimate,
-      // The one figure the verdict reads from the snapshot, not thousands of snapshots parsed.
-      resolutionSg: sql<number | null>`CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE)`,
+      // The one figure the verdict reads from the snapshot, and only for gravity readings: a
+      // temperature logger's thousands of snapshots are never parsed.
+      resolutionSg: sql<number | null>`CASE WHEN ${fermentationReadings.kind} = 'gravity' THEN CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE) END`,
     })
     .from(fermentationReadings)
     .where(eq(fermentationReadings.brewId, brewId))
@@ -63,7 +64,7 @@ export function rangeOf(brew: FermentationBrew): { minC: number; maxC: number } 
   return brew.fermentationTempMinC !== null && brew.fermentationTempMaxC !== null ? { minC: brew.fermentationTempMinC, maxC: brew.fermentationTempMaxC } : null;
 }
 
-export function temperatureOf(rows: readonly DerivedRow[], range: { minC: number; maxC: number } | null, now: Date) {
+export function temperatureOf(rows: readonly Pick<DerivedRow, 'id' | 'kind' | 'takenAt' | 'correctedValue'>[], range: { minC: number; maxC: number } | null, now: Date) {
   const temps = rows.filter((r) => r.kind === 'temperature').map((r) => ({ id: r.id, takenAt: r.takenAt, tempC: r.correctedValue }));
   return temperatureSummary(temps, range, now);
 }

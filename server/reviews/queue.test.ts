@@ -1,11 +1,11 @@
 import request from 'supertest';
-import { and, eq } from 'drizzle-orm';
+import { and, asc, eq, sql } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { recipeInputSchema } from '@shared/schemas/recipes';
 import { loadSessionUser } from '../auth/session';
 import { createDb } from '../db/client';
 import { addMember, makeUser } from '../db/factories';
-import { brewClubShares } from '../db/schema';
+import { brewClubShares, fermentationReadings } from '../db/schema';
 import { createRecipe } from '../recipes/service';
 import { createHarness, type TestHarness } from '../../tests/support/api';
 import { testRecipe } from '../brews/test-scene';
@@ -189,6 +189,42 @@ describe('the queue and the reviewed list read each table once, whatever their l
       expect(large.reviewed.statements).toBe(small.reviewed.statements);
       // Two to find the shares and the comments, seven to read the brew days' rows.
       expect(large.queue.statements).toBeLessThanOrEqual(9);
+    } finally {
+      await counted.pool.end();
+    }
+  });
+});
+
+describe('a shared brew day with a long fermentation log', () => {
+  it('costs the queue no more statements, and counts the same deviations as its review lists, every warm spell', async () => {
+    const s = await makeFermentationScene(h, { shared: true, pitchedDaysAgo: 30 });
+    await s.owner.agent.post(`/api/brews/${s.brewId}/fermentation/readings`).send({ method: 'thermometer', tempC: 21.5, takenAt: s.day(1) }).expect(201);
+    let statements = 0;
+    const counted = createDb(h.ctx.env.DATABASE_URL, { poolSize: 2, logger: { logQuery: () => void statements++ } });
+    try {
+      const actor = (await loadSessionUser(h.ctx.db, s.mentor.user.id))!;
+      const queue = async () => {
+        statements = 0;
+        const page = await listQueue(counted.db, actor);
+        return { statements, item: page.items.find((i) => i.brewId === s.brewId)! };
+      };
+      const short = await queue();
+      // A logger every 15 minutes for three weeks: 21.5 °C (above the recipe's 18–20 °C) with every
+      // 50th reading back in range, so about forty warm spells, far more than a log lists (EXCURSIONS_LISTED).
+      const [first] = await h.ctx.db.select().from(fermentationReadings).where(eq(fermentationReadings.brewId, s.brewId)).orderBy(asc(fermentationReadings.id)).limit(1);
+      await h.ctx.db.execute(
+        sql`insert into ${fermentationReadings} (brew_id, kind, method, instrument_id, instrument_snapshot, raw, corrected_value, correction, warnings, estimate, taken_at, note, source, dedupe_key)
+            select brew_id, kind, method, instrument_id, instrument_snapshot, raw, if(s.seq mod 50 = 0, 19, 21.5), correction, warnings, estimate, taken_at + interval (s.seq * 15) minute, note, source, sha2(concat(dedupe_key, s.seq), 256)
+            from ${fermentationReadings} r join seq_1_to_1999 s where r.id = ${first.id}`,
+      );
+      const long = await queue();
+      expect(long.statements).toBe(short.statements);
+      const review = (await s.mentor.agent.get(`/api/brews/${s.brewId}/review`).expect(200)).body;
+      const spells = review.deviations.filter((d: { code: string }) => d.code === 'ferment-temp-high');
+      // 2,000 readings, 39 of them (every 50th copy) in range: 40 warm spells.
+      expect(spells).toHaveLength(40);
+      expect(long.item.deviationCount).toBe(review.deviations.length);
+      expect(long.item.deviationCount).toBeGreaterThan(short.item.deviationCount);
     } finally {
       await counted.pool.end();
     }

@@ -6,7 +6,6 @@
  * shares with a lock, so a comment sent a second after the brewer stopped sharing is refused.
  */
 import { and, asc, desc, eq, inArray, max, ne, sql } from 'drizzle-orm';
-import { findFermentationDeviations } from '@shared/fermentation-deviations';
 import { readingKindLabels } from '@shared/schemas/brews';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import type { Page } from '@shared/schemas/common';
@@ -17,7 +16,7 @@ import type { AppContext } from '../context';
 import type { Db, DbOrTx } from '../db/client';
 import { inList, prepared } from '../db/prepared';
 import { brewClubShares, brewDecisions, brewReadings, brews, clubMemberships, clubs, comments, fermentationReadings, packagingRecords, users, type CommentRow } from '../db/schema';
-import { assembleLog, fermentationDeviations } from '../fermentation/service';
+import { assembleLog, deviationRowsOf, fermentationDeviations, toPackaging } from '../fermentation/service';
 import { decodeCursor, encodeCursor, isCursorId } from '../lib/cursor';
 import { Forbidden, NotFound } from '../lib/errors';
 import { sendAfterCommit } from '../mail/mailer';
@@ -199,18 +198,15 @@ export async function deleteComment(db: Db, actor: Actor, brewId: number, commen
 
 /** The brew day (as its log shows it), its fermentation and every deviation of both. */
 async function reviewParts(db: DbOrTx, actor: Actor, stored: StoredBrew) {
-  const [brew, log] = await Promise.all([getBrew(db, actor, stored.row.id, { allReadings: true }), assembleLog(db, actor, stored)]);
-  const deviations: ReviewDeviation[] = [
-    ...brew.deviations,
-    ...findFermentationDeviations({
-      range: log.temperature.target,
-      readings: log.readings,
-      excursions: log.temperature.excursions,
-      packaging: log.packaging,
-      pitchedAt: brew.pitchedAt,
-      brewDay: brew.deviations,
-    }),
-  ];
+  const now = new Date();
+  const [brew, log, rows] = await Promise.all([
+    getBrew(db, actor, stored.row.id, { allReadings: true }),
+    assembleLog(db, actor, stored, now, { allReadings: true }),
+    deviationRowsOf(db, [stored.row.id]),
+  ]);
+  // Judged as the queue judges them (every excursion, not only those the log lists), so the two agree.
+  const later = fermentationDeviations(actor, stored, rows.get(stored.row.id) ?? [], log.packaging, brew.deviations, now);
+  const deviations: ReviewDeviation[] = [...brew.deviations, ...later];
   return { brew, log, deviations };
 }
 
@@ -282,7 +278,8 @@ async function mentorShares(db: DbOrTx, actor: Actor) {
  * The summary of each brew day with its deviation count (brew day and fermentation, as on the
  * review page), for any number of brew days in seven statements: each table is read once with an
  * `IN (…)` list rather than once per brew day, and of the brew-day readings only those that decide
- * the deviations and the OG (judgedReadingsOf: two statements), however long each log is.
+ * the deviations and the OG (judgedReadingsOf: two statements), of the fermentation readings only
+ * the narrow rows their deviations read (deviationRowsOf), however long each log is.
  */
 // The queue's reads of a page of brew days, built once per database handle (server/db/prepared.ts).
 const brewsByIds = (db: DbOrTx) => db.select({ row: brews, ownerName: users.displayName }).from(brews).innerJoin(users, eq(users.id, brews.ownerId)).where(inList(brews.id, 'ids'));
@@ -294,12 +291,12 @@ const packagingOfBrews = (db: DbOrTx) => db.select().from(packagingRecords).wher
 async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubShare>, now = new Date()): Promise<ReviewQueueItem[]> {
   const ids = [...entries.keys()];
   if (ids.length === 0) return [];
-  const [brewRows, shareRows, judged, decisionRows, fermentationRows, packagingRows] = await Promise.all([
+  const [brewRows, shareRows, judged, decisionRows, fermentation, packagingRows] = await Promise.all([
     prepared(db, brewsByIds).execute({ ids }),
     prepared(db, sharesOfBrews).execute({ ids }),
     judgedReadingsOf(db, ids),
     prepared(db, decisionsOfBrews).execute({ ids }),
-    db.select().from(fermentationReadings).where(inArray(fermentationReadings.brewId, ids)).orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id)),
+    deviationRowsOf(db, ids),
     prepared(db, packagingOfBrews).execute({ ids }),
   ]);
   const byBrew = <T extends { brewId: number }>(rows: readonly T[]) => {
@@ -313,7 +310,6 @@ async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubSha
   };
   const shares = byBrew(shareRows);
   const decisions = byBrew(decisionRows);
-  const fermentation = byBrew(fermentationRows);
   const packaging = new Map(packagingRows.map((p) => [p.brewId, p]));
   const items: ReviewQueueItem[] = [];
   for (const { row, ownerName } of brewRows) {
@@ -322,7 +318,8 @@ async function queueItems(db: DbOrTx, actor: Actor, entries: Map<number, ClubSha
     if (!can(actor, 'read', resourceOf(stored))) continue;
     const brewReadingList = judged.get(row.id)?.readings ?? [];
     const brewDay = brewDayDeviations(row.targetsSnapshot as RecipeTargets, brewReadingList, (decisions.get(row.id) ?? []).map(toDecision));
-    const later = fermentationDeviations(actor, stored, fermentation.get(row.id) ?? [], packaging.get(row.id) ?? null, brewDay, now);
+    const packagingRow = packaging.get(row.id);
+    const later = fermentationDeviations(actor, stored, fermentation.get(row.id) ?? [], packagingRow ? toPackaging(packagingRow) : null, brewDay, now);
     const og = brewReadingList.findLast((r) => r.kind === 'og')?.corrected ?? null;
     items.push(toQueueItem(stored, og, entries.get(row.id)!, brewDay.length + later.length));
   }

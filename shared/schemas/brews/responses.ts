@@ -189,6 +189,12 @@ export interface ReadingCreated extends BrewReading {
   brewDay: BrewDayChange;
 }
 
+/** The answer to a deleted brew-day reading: what that changed, so the page drops the reading instead of reloading the day. */
+export interface ReadingDeleted {
+  readingId: number;
+  brewDay: BrewDayChange;
+}
+
 export interface BrewSharing {
   brewId: number;
   clubIds: number[];

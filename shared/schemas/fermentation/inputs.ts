@@ -5,7 +5,9 @@
  * because the same message reaches brewers of either preference. The answers are in responses.ts.
  */
 import { z } from 'zod';
-import { num, ranged, showF, showGal } from '../fields';
+import { READINGS_WINDOW } from '../brews';
+import { pageCursorSchema } from '../common';
+import { num, pageSizeSchema, ranged, showF, showGal } from '../fields';
 
 // ---------------------------------------------------------------------------------------------
 // Vocabulary
@@ -204,6 +206,22 @@ export const packagingInputSchema = z
   });
 export type PackagingInput = z.input<typeof packagingInputSchema>;
 export type PackagingBody = z.output<typeof packagingInputSchema>;
+
+// ---------------------------------------------------------------------------------------------
+// Paging the readings
+
+/**
+ * GET /api/brews/:brewId/fermentation/readings: the readings before `cursor` (the log's
+ * `olderReadings`, or a page's `nextCursor`), a page the size of the brew day's (READINGS_WINDOW).
+ */
+export const fermentationReadingsQuerySchema = z.object({
+  cursor: pageCursorSchema,
+  pageSize: pageSizeSchema('reading', 200, READINGS_WINDOW),
+});
+export interface FermentationReadingsQuery {
+  cursor?: string;
+  pageSize?: number;
+}
 
 // ---------------------------------------------------------------------------------------------
 // Settings

@@ -1,5 +1,6 @@
 /** The fermentation log: what the API answers (the requests and the vocabulary are in inputs.ts). */
 import type { FgState } from '../../brewmath';
+import type { Page } from '../common';
 import type { InstrumentSnapshot } from '../instruments';
 import type { CsvField, CsvMapping, FermentationMethod, FermentationRaw, FermentationReadingKind, PackagingContainer, PackagingSugar, ReadingSource, ReminderKind } from './inputs';
 
@@ -138,9 +139,37 @@ export interface FermentationBrew {
   og: number | null;
 }
 
+/**
+ * One reading as the chart draws it: every reading of the log comes this way (the same narrow
+ * row the verdict reads), while whole readings come a page at a time (decision 0024).
+ */
+export interface FermentationPoint {
+  id: number;
+  kind: FermentationReadingKind;
+  takenAt: string;
+  /** SG for gravity, °C for temperature, as in FermentationReading.corrected. */
+  corrected: number;
+  estimate: boolean;
+}
+
+/** One page of older fermentation readings, oldest first. */
+export interface FermentationReadingPage extends Page<FermentationReading> {
+  pageSize: number;
+}
+
 export interface FermentationLog {
   brew: FermentationBrew;
+  /**
+   * The latest readings (at most READINGS_WINDOW), oldest first; older ones from
+   * GET /api/brews/:brewId/fermentation/readings. A mentor's review carries them all.
+   */
   readings: FermentationReading[];
+  /** How many readings the log has in all. */
+  readingCount: number;
+  /** The cursor for the readings before `readings`; null when they are all here. */
+  olderReadings: string | null;
+  /** Every reading, in time order, as the chart draws it. */
+  series: FermentationPoint[];
   verdict: FermentationVerdict | null;
   temperature: TemperatureSummary;
   progress: FermentationProgress;
@@ -160,10 +189,22 @@ export interface FermentationReadingCreated {
   reading: FermentationReading;
   /** The same reading was already saved (a retry after a lost answer). */
   duplicate: boolean;
+  /** How many readings the log has now. */
+  readingCount: number;
   verdict: FermentationVerdict | null;
   temperature: TemperatureSummary;
   progress: FermentationProgress;
   reminders: ScheduledReminder[];
+  now: string;
+}
+
+/** The answer to a deleted reading: what it changed, so the page drops it from what it has instead of reloading the log. */
+export interface FermentationReadingDeleted {
+  readingId: number;
+  readingCount: number;
+  verdict: FermentationVerdict | null;
+  temperature: TemperatureSummary;
+  progress: FermentationProgress;
   now: string;
 }
 

@@ -120,8 +120,8 @@ export function Component() {
       </div>
 
       <Card>
-        <h2 className="mb-1 text-lg font-semibold text-cellar-900">Readings ({log.readings.length})</h2>
-        <ReadingsList brewId={brew.id} readings={log.readings} pitchedAt={brew.pitchedAt} canEdit={canEdit} />
+        <h2 className="mb-1 text-lg font-semibold text-cellar-900">Readings ({(log.readingCount ?? log.readings.length).toLocaleString('en')})</h2>
+        <ReadingsList log={log} canEdit={canEdit} />
       </Card>
 
       <Card>

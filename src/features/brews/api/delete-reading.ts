@@ -1,8 +1,14 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type InfiniteData } from '@tanstack/react-query';
+import type { BrewDetail, BrewReadingPage, ReadingDeleted } from '@shared/schemas/brews';
 import { api } from '@/lib/api-client';
 import { brewKeys } from './keys';
 
-export const deleteReading = (brewId: number, readingId: number) => api.delete(`/api/brews/${brewId}/readings/${readingId}`);
+export const deleteReading = (brewId: number, readingId: number) => api.delete<ReadingDeleted>(`/api/brews/${brewId}/readings/${readingId}`);
+
+/** The brew day without the deleted reading, with what the server says the deletion changed (OG, count, deviations…). */
+export function withoutReading(brew: BrewDetail, deleted: ReadingDeleted): BrewDetail {
+  return { ...brew, ...deleted.brewDay, readings: brew.readings.filter((r) => r.id !== deleted.readingId) };
+}
 
 export function useDeleteReading(brewId: number) {
   const queryClient = useQueryClient();
@@ -10,6 +16,16 @@ export function useDeleteReading(brewId: number) {
     // Send even when the browser says it is offline: a failed save must say so and offer a retry, not wait silently.
     networkMode: 'always',
     mutationFn: (readingId: number) => deleteReading(brewId, readingId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: brewKeys.all }),
+    // The day is updated from the answer rather than reloaded whole; only the lists (OG) are asked again.
+    onSuccess: (deleted) => {
+      const had = queryClient.getQueryData<BrewDetail>(brewKeys.detail(brewId));
+      if (had) queryClient.setQueryData(brewKeys.detail(brewId), withoutReading(had, deleted));
+      else void queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) });
+      queryClient.setQueriesData<InfiniteData<BrewReadingPage>>(
+        { queryKey: brewKeys.olderReadings(brewId) },
+        (older) => older && { ...older, pages: older.pages.map((p) => ({ ...p, items: p.items.filter((r) => r.id !== deleted.readingId) })) },
+      );
+      return queryClient.invalidateQueries({ queryKey: brewKeys.lists() });
+    },
   });
 }

@@ -13,7 +13,7 @@ export function OlderReadings({ loaded }: { loaded: LoadedReadings }) {
       <p className="text-ink-soft" role="status">
         Showing the latest {shown} of {total} readings.
       </p>
-      <Button variant="secondary" busy={loaded.loadingOlder} icon={<History aria-hidden className="size-5" />} onClick={loaded.showOlder}>
+      <Button variant="secondary" busy={loaded.loadingOlder} icon={<History aria-hidden className="size-5" />} onClick={() => void loaded.showOlder()}>
         {loaded.loadingOlder ? 'Loading older readings…' : 'Show older readings'}
       </Button>
       {loaded.error && <Notice tone="error">Older readings could not be loaded: {loaded.error.message} Try again.</Notice>}

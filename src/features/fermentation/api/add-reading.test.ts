@@ -8,6 +8,9 @@ const reading = (id: number, takenAt: string) => ({ id, takenAt }) as Fermentati
 const log = {
   brew: { id: 7 },
   readings: [reading(1, '2026-03-02T10:00:00.000Z'), reading(3, '2026-03-04T10:00:00.000Z')],
+  readingCount: 2,
+  olderReadings: null,
+  series: [reading(1, '2026-03-02T10:00:00.000Z'), reading(3, '2026-03-04T10:00:00.000Z')],
   verdict: { state: 'too-early' },
   temperature: { latest: null },
   progress: { og: 1.05 },
@@ -21,6 +24,7 @@ const created = (r: FermentationReading, duplicate = false) =>
   ({
     reading: r,
     duplicate,
+    readingCount: duplicate ? 2 : 3,
     verdict: { state: 'moving' },
     temperature: { latest: { tempC: 19 } },
     progress: { og: 1.05, current: { sg: 1.012 } },
@@ -32,6 +36,8 @@ describe('adding a reading to the cached fermentation log', () => {
   it('puts a late-entered reading in time order and takes the verdict, summary, progress and reminders from the answer', () => {
     const next = withFermentationReading(log, created(reading(4, '2026-03-03T10:00:00.000Z')));
     expect(next.readings.map((r) => r.id)).toEqual([1, 4, 3]);
+    expect(next.series.map((p) => p.id)).toEqual([1, 4, 3]);
+    expect(next.readingCount).toBe(3);
     expect(next.verdict).toEqual({ state: 'moving' });
     expect(next.temperature).toEqual({ latest: { tempC: 19 } });
     expect(next.progress).toEqual({ og: 1.05, current: { sg: 1.012 } });
@@ -44,5 +50,7 @@ describe('adding a reading to the cached fermentation log', () => {
   it('keeps a retried reading once', () => {
     const next = withFermentationReading(log, created(reading(3, '2026-03-04T10:00:00.000Z'), true));
     expect(next.readings.map((r) => r.id)).toEqual([1, 3]);
+    expect(next.series.map((p) => p.id)).toEqual([1, 3]);
+    expect(next.readingCount).toBe(2);
   });
 });

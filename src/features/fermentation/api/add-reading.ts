@@ -8,11 +8,16 @@ import { fermentationKeys } from './keys';
 export const addFermentationReading = (brewId: number, input: FermentationReadingInput) =>
   api.post<FermentationReadingCreated>(`/api/brews/${brewId}/fermentation/readings`, input);
 
-/** The log with a new reading in time order and the parts the server says it changed. */
+const byTime = (a: { takenAt: string; id: number }, b: { takenAt: string; id: number }) => a.takenAt.localeCompare(b.takenAt) || a.id - b.id;
+
+/** The log with a new reading in time order (in its readings and the chart's series) and the parts the server says it changed. */
 export function withFermentationReading(log: FermentationLog, created: FermentationReadingCreated): FermentationLog {
-  const { reading, verdict, temperature, progress, reminders, now } = created;
-  const readings = [...log.readings.filter((r) => r.id !== reading.id), reading].sort((a, b) => a.takenAt.localeCompare(b.takenAt) || a.id - b.id);
-  return { ...log, readings, verdict, temperature, progress, reminders, now };
+  const { reading, verdict, temperature, progress, reminders, now, readingCount } = created;
+  const readings = [...log.readings.filter((r) => r.id !== reading.id), reading].sort(byTime);
+  const point = { id: reading.id, kind: reading.kind, takenAt: reading.takenAt, corrected: reading.corrected, estimate: reading.estimate };
+  // A log kept on the device before the series existed draws its chart from its readings.
+  const series = log.series && [...log.series.filter((p) => p.id !== reading.id), point].sort(byTime);
+  return { ...log, readings, series, readingCount: readingCount ?? readings.length, verdict, temperature, progress, reminders, now };
 }
 
 /** Puts an accepted reading into the cached log; without a cached log, the log is asked for again. */

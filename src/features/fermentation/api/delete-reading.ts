@@ -1,15 +1,31 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { FermentationLog } from '@shared/schemas/fermentation';
+import { useMutation, useQueryClient, type InfiniteData, type QueryClient } from '@tanstack/react-query';
+import type { FermentationLog, FermentationReadingDeleted, FermentationReadingPage } from '@shared/schemas/fermentation';
 import { api } from '@/lib/api-client';
 import { fermentationKeys } from './keys';
 
 export const deleteFermentationReading = (brewId: number, readingId: number) =>
-  api.delete<FermentationLog>(`/api/brews/${brewId}/fermentation/readings/${readingId}`);
+  api.delete<FermentationReadingDeleted>(`/api/brews/${brewId}/fermentation/readings/${readingId}`);
+
+/** The log without the deleted reading, with the count, verdict, summary and progress the server answered. */
+export function withoutFermentationReading(log: FermentationLog, deleted: FermentationReadingDeleted): FermentationLog {
+  const { readingId, readingCount, verdict, temperature, progress, now } = deleted;
+  const keep = <T extends { id: number }>(list: T[]) => list.filter((r) => r.id !== readingId);
+  return { ...log, readings: keep(log.readings), series: log.series && keep(log.series), readingCount, verdict, temperature, progress, now };
+}
+
+/** Drops the reading wherever the page holds it (the log's latest readings, its series, an older page), instead of reloading the log. */
+function applyDeleted(queryClient: QueryClient, brewId: number, deleted: FermentationReadingDeleted) {
+  queryClient.setQueryData<FermentationLog>(fermentationKeys.log(brewId), (log) => log && withoutFermentationReading(log, deleted));
+  queryClient.setQueriesData<InfiniteData<FermentationReadingPage>>(
+    { queryKey: fermentationKeys.olderReadings(brewId) },
+    (older) => older && { ...older, pages: older.pages.map((p) => ({ ...p, items: p.items.filter((r) => r.id !== deleted.readingId) })) },
+  );
+}
 
 export function useDeleteFermentationReading(brewId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (readingId: number) => deleteFermentationReading(brewId, readingId),
-    onSuccess: (log) => queryClient.setQueryData(fermentationKeys.log(brewId), log),
+    onSuccess: (deleted) => applyDeleted(queryClient, brewId, deleted),
   });
 }

@@ -13,10 +13,12 @@ const day = (d: number) => new Date(Date.parse(pitchedAt) + d * 86_400_000).toIS
 /** Only what the chart reads; the rest of a log does not matter to it. */
 const log = {
   brew: { pitchedAt, targetFg: 1.012 },
-  readings: [
-    { kind: 'gravity', takenAt: day(0), corrected: 1.05, estimate: false },
-    { kind: 'temperature', takenAt: day(1), corrected: 20, estimate: false },
-    { kind: 'gravity', takenAt: day(12), corrected: 1.012, estimate: false },
+  // The page of whole readings holds only the latest; the chart draws the series of all.
+  readings: [{ kind: 'gravity', takenAt: day(12), corrected: 1.012, estimate: false }],
+  series: [
+    { id: 1, kind: 'gravity', takenAt: day(0), corrected: 1.05, estimate: false },
+    { id: 2, kind: 'temperature', takenAt: day(1), corrected: 20, estimate: false },
+    { id: 3, kind: 'gravity', takenAt: day(12), corrected: 1.012, estimate: false },
   ],
   temperature: { target: { minC: 18, maxC: 21 } },
   verdict: { daysSincePitch: 12 },
@@ -56,8 +58,8 @@ describe('the fermentation chart’s text alternative', () => {
   });
 
   it('draws a long table a hundred rows at a time', async () => {
-    const readings = Array.from({ length: 150 }, (_, i) => ({ kind: 'temperature', takenAt: day(i / 10), corrected: 19, estimate: false }));
-    renderChart({ unitSystem: 'metric', gravityUnit: 'sg' }, { ...log, readings } as unknown as FermentationLog);
+    const series = Array.from({ length: 150 }, (_, i) => ({ id: i + 1, kind: 'temperature', takenAt: day(i / 10), corrected: 19, estimate: false }));
+    renderChart({ unitSystem: 'metric', gravityUnit: 'sg' }, { ...log, series } as unknown as FermentationLog);
     await userEvent.click(screen.getByText('The numbers as a table'));
     const table = screen.getByRole('table', { name: 'Fermentation readings by day since pitching' });
     // A header row and the first hundred readings.
@@ -65,5 +67,11 @@ describe('the fermentation chart’s text alternative', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Show 50 more rows (50 not shown)' }));
     expect(within(table).getAllByRole('row')).toHaveLength(151);
     expect(screen.queryByRole('button', { name: /more rows/ })).toBeNull();
+  });
+
+  it('draws a log kept on the device before the series existed from its readings', () => {
+    const { series, ...old } = log;
+    renderChart({ unitSystem: 'metric', gravityUnit: 'sg' }, { ...old, readings: series } as unknown as FermentationLog);
+    expect(screen.getByTestId('chart-summary').textContent).toContain('2 gravity readings and 1 temperature reading over 12 days since pitching.');
   });
 });

@@ -6,14 +6,19 @@ import { DAY_MS } from '@shared/dates';
 
 const dayText = (d: number) => String(Number(d.toFixed(1)));
 
-/** Gravity (left) and fermenter temperature (right) over the days since pitching, with the target FG and the recipe's range marked. */
+/**
+ * Gravity (left) and fermenter temperature (right) over the days since pitching, with the target
+ * FG and the recipe's range marked: every reading of the log, from its compact series (decision 0024).
+ */
 export function FermentationChart({ log }: { log: FermentationLog }) {
   const units = useUnits();
   const pitched = log.brew.pitchedAt ? Date.parse(log.brew.pitchedAt) : null;
   if (pitched === null) return null;
   const dayOf = (iso: string) => (Date.parse(iso) - pitched) / DAY_MS;
-  const gravity = log.readings.filter((r) => r.kind === 'gravity').map((r) => ({ d: dayOf(r.takenAt), v: r.corrected, estimate: r.estimate }));
-  const temps = log.readings.filter((r) => r.kind === 'temperature').map((r) => ({ d: dayOf(r.takenAt), v: r.corrected }));
+  // Every reading as a point (a log kept on the device before the series existed has them all as readings).
+  const points = log.series ?? log.readings;
+  const gravity = points.filter((r) => r.kind === 'gravity').map((r) => ({ d: dayOf(r.takenAt), v: r.corrected, estimate: r.estimate }));
+  const temps = points.filter((r) => r.kind === 'temperature').map((r) => ({ d: dayOf(r.takenAt), v: r.corrected }));
   const targetFg = log.brew.targetFg;
   const range = log.temperature.target;
   const lastDay = Math.max(14, log.verdict?.daysSincePitch ?? 0, ...gravity.map((g) => g.d), ...temps.map((t) => t.d));

@@ -1,24 +1,43 @@
 import { Trash2 } from 'lucide-react';
 import { useState } from 'react';
-import type { FermentationReading } from '@shared/schemas/fermentation';
-import { countOf } from '@/lib/plural';
+import { READINGS_WINDOW } from '@shared/schemas/brews';
+import type { FermentationLog, FermentationReading } from '@shared/schemas/fermentation';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { ShowMore, type NextPages } from '@/components/ui/show-more';
 import { useUnits } from '@/lib/units';
 import { useDeleteFermentationReading } from '../api/delete-reading';
+import { useLoadedFermentationReadings } from '../api/older-readings';
 import { dayLabel, methodLabels, shortDateTime } from './words';
 
-/** Every reading, newest first, with the instrument and correction it was taken with. */
-export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId: number; readings: FermentationReading[]; pitchedAt: string | null; canEdit: boolean }) {
+/**
+ * The readings, newest first, with the instrument and correction each was taken with: the latest
+ * few of those the log came with, then older ones on "Show older readings", first from what is
+ * already here, then a page at a time from the server.
+ */
+export function ReadingsList({ log, canEdit }: { log: Pick<FermentationLog, 'brew' | 'readings' | 'readingCount' | 'olderReadings'>; canEdit: boolean }) {
+  const brewId = log.brew.id;
+  const pitchedAt = log.brew.pitchedAt;
   const units = useUnits();
   const remove = useDeleteFermentationReading(brewId);
+  const loaded = useLoadedFermentationReadings(log);
   const [confirm, setConfirm] = useState<number | null>(null);
   const [limit, setLimit] = useState(SHOWN);
-  if (readings.length === 0) return <p className="text-ink-soft">No readings yet.</p>;
+  const { readings } = loaded;
+  if (readings.length === 0 && !loaded.hasOlder) return <p className="text-ink-soft">No readings yet.</p>;
   // Only the rows shown are copied and drawn: a long log (thousands of readings) opens at once.
   const shown: FermentationReading[] = [];
   for (let i = readings.length - 1; i >= 0 && shown.length < limit; i--) shown.push(readings[i]);
   const hidden = readings.length - shown.length;
+  const older: NextPages = {
+    hasNextPage: hidden > 0 || loaded.hasOlder,
+    isFetchingNextPage: loaded.loadingOlder,
+    fetchNextPage: async () => {
+      setLimit(shown.length + READINGS_WINDOW);
+      // What is here first; the server's next page when that is not enough.
+      if (hidden < READINGS_WINDOW && loaded.hasOlder) await loaded.showOlder();
+    },
+  };
   return (
     <>
       {remove.error && <Notice tone="error">{remove.error.message}</Notice>}
@@ -67,13 +86,12 @@ export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId:
           );
         })}
       </ol>
-      {readings.length > SHOWN && (
-        <div className="mt-2 flex flex-col gap-2 sm:flex-row">
-          {hidden > 0 && (
-            <Button variant="secondary" className="w-full sm:w-auto" onClick={() => setLimit(limit + MORE)}>
-              {`Show ${Math.min(MORE, hidden)} more (${countOf(hidden, 'reading')} not shown)`}
-            </Button>
-          )}
+      {(older.hasNextPage || limit > SHOWN) && (
+        <div className="mt-2 flex flex-col gap-2 sm:flex-row sm:flex-wrap sm:items-center">
+          <p className="text-sm text-ink-soft" role="status">
+            Showing the latest {shown.length.toLocaleString('en')} of {loaded.total.toLocaleString('en')} readings.
+          </p>
+          <ShowMore pages={older} label="Show older readings" />
           {limit > SHOWN && (
             <Button variant="quiet" className="w-full sm:w-auto" onClick={() => setLimit(SHOWN)}>
               Show the latest only
@@ -81,14 +99,13 @@ export function ReadingsList({ brewId, readings, pitchedAt, canEdit }: { brewId:
           )}
         </div>
       )}
+      {loaded.error && <Notice tone="error">Older readings could not be loaded: {loaded.error.message} Try again.</Notice>}
     </>
   );
 }
 
 /** The latest few; a phone should not scroll past a month of temperatures to reach packaging. */
 const SHOWN = 6;
-/** Each "Show more" adds this many older readings. */
-const MORE = 100;
 
 function describe(r: FermentationReading, units: ReturnType<typeof useUnits>) {
   switch (r.raw.method) {
