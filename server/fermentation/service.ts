@@ -5,7 +5,7 @@
  * writes, everyone else gets a 404. Adding and removing readings is in readings.ts, packaging in
  * packaging.ts, what the readings decide in verdict.ts.
  */
-import { and, asc, desc, eq, inArray, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, or, sql } from 'drizzle-orm';
 import { findFermentationDeviations, type FermentationDeviation } from '@shared/fermentation-deviations';
 import type { BrewDeviation } from '@shared/schemas/brews';
 import type { InstrumentSnapshot } from '@shared/schemas/instruments';
@@ -22,6 +22,7 @@ import type {
 import type { Actor } from '../auth/permissions';
 import { loadBrewForActor, type StoredBrew } from '../brews/service';
 import type { Db, DbOrTx } from '../db/client';
+import { inList, prepared } from '../db/prepared';
 import {
   brewReadings,
   fermentationReadings,
@@ -86,6 +87,26 @@ export const toScheduled = (r: { kind: ScheduledReminder['kind']; dueAt: Date; s
   outcome: r.outcome,
 });
 
+// The log's reads, built once per database handle (server/db/prepared.ts).
+const latestOg = (db: DbOrTx) =>
+  db
+    .select({ value: brewReadings.correctedValue, volumeL: brewReadings.volumeL })
+    .from(brewReadings)
+    .where(and(eq(brewReadings.brewId, sql.placeholder('brewId')), eq(brewReadings.kind, 'og')))
+    .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
+    .limit(1);
+const reminderSetting = (db: DbOrTx) => db.select({ on: fermentationSettings.remindersEnabled }).from(fermentationSettings).where(eq(fermentationSettings.userId, sql.placeholder('userId')));
+const packagingOfBrew = (db: DbOrTx) => db.select().from(packagingRecords).where(eq(packagingRecords.brewId, sql.placeholder('brewId')));
+const remindersOfBrew = (db: DbOrTx) =>
+  db.select().from(fermentationReminders).where(eq(fermentationReminders.brewId, sql.placeholder('brewId'))).orderBy(asc(fermentationReminders.dueAt));
+const latestFermentationReadings = (db: DbOrTx) =>
+  db
+    .select()
+    .from(fermentationReadings)
+    .where(eq(fermentationReadings.brewId, sql.placeholder('brewId')))
+    .orderBy(desc(fermentationReadings.takenAt), desc(fermentationReadings.id))
+    .limit(sql.placeholder('limit'));
+
 export async function measuredOg(db: DbOrTx, brewId: number): Promise<number | null> {
   const [row] = await db
     .select({ value: brewReadings.correctedValue })
@@ -98,17 +119,12 @@ export async function measuredOg(db: DbOrTx, brewId: number): Promise<number | n
 
 /** The brew day's latest OG reading: its corrected gravity and the volume measured into the fermenter with it. */
 export async function ogReading(db: DbOrTx, brewId: number): Promise<{ og: number | null; volumeL: number | null }> {
-  const [row] = await db
-    .select({ value: brewReadings.correctedValue, volumeL: brewReadings.volumeL })
-    .from(brewReadings)
-    .where(and(eq(brewReadings.brewId, brewId), eq(brewReadings.kind, 'og')))
-    .orderBy(desc(brewReadings.takenAt), desc(brewReadings.id))
-    .limit(1);
+  const [row] = await prepared(db, latestOg).execute({ brewId });
   return { og: row?.value ?? null, volumeL: row?.volumeL ?? null };
 }
 
 export async function remindersEnabledFor(db: DbOrTx, userId: number): Promise<boolean> {
-  const [row] = await db.select({ on: fermentationSettings.remindersEnabled }).from(fermentationSettings).where(eq(fermentationSettings.userId, userId));
+  const [row] = await prepared(db, reminderSetting).execute({ userId });
   return row?.on ?? true;
 }
 
@@ -160,14 +176,8 @@ export interface DeviationRow {
   instrumentSnapshot: InstrumentSnapshot | null;
 }
 
-/**
- * The rows fermentation's deviations need, for many brew days in one statement: temperature
- * readings narrow, and of the gravity readings only those that first show a snapshot, so a long
- * log sends its temperatures and a handful of snapshots, never thousands of whole rows.
- */
-export async function deviationRowsOf(db: DbOrTx, brewIds: readonly number[]): Promise<Map<number, DeviationRow[]>> {
-  const byBrew = new Map<number, DeviationRow[]>();
-  if (brewIds.length === 0) return byBrew;
+/** deviationRowsOf's one statement, built once per database handle (server/db/prepared.ts). */
+const deviationRows = (db: DbOrTx) => {
   const r = fermentationReadings;
   const ranked = db
     .select({
@@ -181,9 +191,9 @@ export async function deviationRowsOf(db: DbOrTx, brewIds: readonly number[]): P
       rank: sql<number>`ROW_NUMBER() OVER (PARTITION BY ${r.brewId}, MD5(${r.instrumentSnapshot}) ORDER BY ${r.takenAt}, ${r.id})`.as('snapshot_rank'),
     })
     .from(r)
-    .where(inArray(r.brewId, [...brewIds]))
+    .where(inList(r.brewId, 'brewIds'))
     .as('ranked');
-  const rows = await db
+  return db
     .select({
       id: ranked.id,
       brewId: ranked.brewId,
@@ -195,6 +205,17 @@ export async function deviationRowsOf(db: DbOrTx, brewIds: readonly number[]): P
     .from(ranked)
     .where(or(eq(ranked.kind, 'temperature'), eq(ranked.rank, 1)))
     .orderBy(asc(ranked.takenAt), asc(ranked.id));
+};
+
+/**
+ * The rows fermentation's deviations need, for many brew days in one statement: temperature
+ * readings narrow, and of the gravity readings only those that first show a snapshot, so a long
+ * log sends its temperatures and a handful of snapshots, never thousands of whole rows.
+ */
+export async function deviationRowsOf(db: DbOrTx, brewIds: readonly number[]): Promise<Map<number, DeviationRow[]>> {
+  const byBrew = new Map<number, DeviationRow[]>();
+  if (brewIds.length === 0) return byBrew;
+  const rows = await prepared(db, deviationRows).execute({ brewIds });
   for (const row of rows) {
     const { snapshot, ...rest } = row;
     // The driver hands a JSON document back parsed or as text, depending on how MariaDB typed the CASE.
@@ -243,14 +264,14 @@ const CURSOR_TAG = 'fermentation-readings';
 export async function fermentationReadingPage(db: DbOrTx, stored: StoredBrew, query: { cursor?: string; pageSize: number }): Promise<FermentationReadingPage> {
   const brewId = stored.row.id;
   const before = query.cursor ? decodeTimeCursor(CURSOR_TAG, query.cursor) : null;
-  const where: SQL[] = [eq(fermentationReadings.brewId, brewId)];
-  if (before) where.push(beforeTimeKey(fermentationReadings.takenAt, fermentationReadings.id, before));
-  const rows = await db
-    .select()
-    .from(fermentationReadings)
-    .where(and(...where))
-    .orderBy(desc(fermentationReadings.takenAt), desc(fermentationReadings.id))
-    .limit(query.pageSize + 1);
+  const rows = before
+    ? await db
+        .select()
+        .from(fermentationReadings)
+        .where(and(eq(fermentationReadings.brewId, brewId), beforeTimeKey(fermentationReadings.takenAt, fermentationReadings.id, before)))
+        .orderBy(desc(fermentationReadings.takenAt), desc(fermentationReadings.id))
+        .limit(query.pageSize + 1)
+    : await prepared(db, latestFermentationReadings).execute({ brewId, limit: query.pageSize + 1 });
   const page = rows.slice(0, query.pageSize).reverse();
   const first = page[0];
   return {
@@ -288,10 +309,8 @@ export async function assembleLog(db: DbOrTx, actor: Actor, stored: StoredBrew, 
     options.allReadings ? allReadingsPage(db, stored) : fermentationReadingPage(db, stored, { pageSize: READINGS_WINDOW }),
     derivedRows(db, brewId),
     ogReading(db, brewId),
-    db.select().from(packagingRecords).where(eq(packagingRecords.brewId, brewId)),
-    isOwner
-      ? db.select().from(fermentationReminders).where(eq(fermentationReminders.brewId, brewId)).orderBy(asc(fermentationReminders.dueAt))
-      : Promise.resolve([]),
+    prepared(db, packagingOfBrew).execute({ brewId }),
+    isOwner ? prepared(db, remindersOfBrew).execute({ brewId }) : Promise.resolve([]),
     isOwner ? remindersEnabledFor(db, actor.id) : Promise.resolve(null),
   ]);
   const brew = brewOf(actor, stored, ogRead);

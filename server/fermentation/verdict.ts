@@ -11,6 +11,7 @@ import type { InstrumentSnapshot } from '@shared/schemas/instruments';
 import type { RecipeTargets } from '@shared/schemas/recipes';
 import type { StoredBrew } from '../brews/service';
 import type { DbOrTx } from '../db/client';
+import { prepared } from '../db/prepared';
 import { fermentationReadings, type FermentationReadingRow } from '../db/schema';
 
 const iso = (d: Date) => d.toISOString();
@@ -43,8 +44,9 @@ export function verdictFor(rows: readonly DerivedRow[], pitchedAt: Date | null, 
   return fermentationVerdict(gravity, pitchedAt, now, { expectedFgSg });
 }
 
-export async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRow[]> {
-  return db
+/** derivedRows' statement, built once per database handle (server/db/prepared.ts). */
+const derivedRowsOfBrew = (db: DbOrTx) =>
+  db
     .select({
       id: fermentationReadings.id,
       kind: fermentationReadings.kind,
@@ -56,8 +58,11 @@ export async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRo
       resolutionSg: sql<number | null>`CASE WHEN ${fermentationReadings.kind} = 'gravity' THEN CAST(JSON_VALUE(${fermentationReadings.instrumentSnapshot}, '$.resolutionSg') AS DOUBLE) END`,
     })
     .from(fermentationReadings)
-    .where(eq(fermentationReadings.brewId, brewId))
+    .where(eq(fermentationReadings.brewId, sql.placeholder('brewId')))
     .orderBy(asc(fermentationReadings.takenAt), asc(fermentationReadings.id));
+
+export async function derivedRows(db: DbOrTx, brewId: number): Promise<DerivedRow[]> {
+  return prepared(db, derivedRowsOfBrew).execute({ brewId });
 }
 
 export function rangeOf(brew: FermentationBrew): { minC: number; maxC: number } | null {
