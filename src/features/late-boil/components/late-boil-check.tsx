@@ -244,15 +244,13 @@ function Inputs(props: InputsProps) {
  * one whose value or message changed renders again.
  */
 function samePanel(names: readonly string[]) {
+  const fields = names.map((name) => [name, name.split('.')] as const);
   return (prev: InputsProps, next: InputsProps) =>
     prev.units === next.units &&
     prev.onValue === next.onValue &&
     prev.onTouch === next.onTouch &&
     prev.dispatch === next.dispatch &&
-    names.every((name) => {
-      const path = name.split('.');
-      return Object.is(getIn(prev.values, path), getIn(next.values, path)) && prev.errors[name] === next.errors[name];
-    });
+    fields.every(([name, path]) => Object.is(getIn(prev.values, path), getIn(next.values, path)) && prev.errors[name] === next.errors[name]);
 }
 
 function fieldProps({ values, errors, onValue, onTouch }: InputsProps, name: string) {
