@@ -38,6 +38,15 @@ import { databaseUrl, dataRoot, ensureDatabase, ensureMariadb, projectRoot } fro
 const KEYSTROKES = Number(process.env.BENCH_KEYSTROKES ?? 40);
 const LOAD_ROUNDS = Number(process.env.BENCH_ROUNDS ?? 2);
 const CPU_THROTTLE = 4;
+const traceCategories = [
+  'devtools.timeline',
+  'disabled-by-default-devtools.timeline',
+  'disabled-by-default-devtools.timeline.frame',
+  'v8.execute',
+  'disabled-by-default-v8.cpu_profiler',
+  'blink.user_timing',
+  'toplevel',
+];
 const jwtSecret = 'bench-only-secret-of-at-least-thirty-two-characters';
 
 
@@ -189,7 +198,9 @@ async function main() {
     await pool.end();
 
     console.log('building the Wortwise client and the floor app…');
-    execFileSync('npx', ['vite', 'build', '--logLevel', 'error', '--outDir', wwDist, '--emptyOutDir'], { cwd: projectRoot, stdio: 'inherit' });
+    // A traced run (BENCH_TRACE) builds unminified, so the profile names our functions.
+    const traceBuild = process.env.BENCH_TRACE ? ['--minify', 'false'] : [];
+    execFileSync('npx', ['vite', 'build', '--logLevel', 'error', '--outDir', wwDist, '--emptyOutDir', ...traceBuild], { cwd: projectRoot, stdio: 'inherit' });
     await build({
       root: path.join(import.meta.dirname, 'floor-app'),
       configFile: false,
@@ -269,7 +280,19 @@ async function main() {
         await cdp.send('Emulation.setCPUThrottlingRate', { rate: CPU_THROTTLE });
         // Two unmeasured keystrokes first, so neither side is timed cold.
         await keystrokeLatency(page, field, 2);
-        return await keystrokeLatency(page, field, KEYSTROKES);
+        // BENCH_TRACE=file.json saves a Chromium performance trace (with a CPU profile) of the
+        // check's measured keystrokes, for DevTools or scripts/bench/trace-summary.ts. Tracing
+        // slows the page: the figures of such a run are for finding where the time goes, not for comparing.
+        const trace = process.env.BENCH_TRACE && urlPath !== '/' ? path.resolve(process.env.BENCH_TRACE) : null;
+        if (trace) await browser!.startTracing(page, { path: trace, categories: traceCategories });
+        try {
+          return await keystrokeLatency(page, field, KEYSTROKES);
+        } finally {
+          if (trace) {
+            await browser!.stopTracing();
+            console.log(`trace of the late-boil keystrokes saved to ${trace}`);
+          }
+        }
       } finally {
         await context.close();
       }

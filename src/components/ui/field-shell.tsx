@@ -87,7 +87,13 @@ export function DecimalInput({ id, name, text, onText, onBlur, error, hint, plac
       onChange={(e) => onText(e.target.value)}
       onBlur={onBlur}
       {...fieldAria(id, { invalid: Boolean(error), hint })}
-      className={inputClass(Boolean(error), `py-2 pl-3 ${withUnit ? 'pr-16' : 'pr-3'} tabular-nums ${size === 'large' ? 'min-h-16 text-3xl font-bold' : 'min-h-touch text-base'}`)}
+      // Laid out on its own (size and layout contained), so a keystroke does not lay out the page
+      // around it again; its height is therefore set, never taken from the text: one line and the
+      // padding, at least a touch target, whatever the font size.
+      className={inputClass(
+        Boolean(error),
+        `relative [contain:size_layout] py-2 pl-3 ${withUnit ? 'pr-16' : 'pr-3'} tabular-nums ${size === 'large' ? 'min-h-[max(4rem,calc(3.25rem+2px))] text-3xl font-bold' : 'min-h-[max(44px,calc(2.5rem+2px))] text-base'}`,
+      )}
     />
   );
 }

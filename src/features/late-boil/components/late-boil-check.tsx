@@ -58,9 +58,16 @@ const extractLabels: Record<(typeof EXTRACT_KINDS)[number], string> = {
  * and sees, as they type, where the wort is heading and what to do about it. Everything is
  * worked out in the browser with the shared brewing math, so it keeps working on a lost connection.
  */
-export function LateBoilCheck({ initialValues, units: unitsOverride, onChoose, nudge, renderAfterOptions, renderBeforeOptions, recipe }: LateBoilCheckProps) {
+export function LateBoilCheck({ units, ...props }: LateBoilCheckProps) {
   const userUnits = useUnits();
-  const units = unitsOverride ?? userUnits;
+  return <CheckForm {...props} units={units ?? userUnits} />;
+}
+
+/**
+ * The form and its answer: what renders on each keystroke. The signed-in user's units are read
+ * once, above it, so a keystroke does not run the session query's hook again.
+ */
+function CheckForm({ initialValues, units, onChoose, nudge, renderAfterOptions, renderBeforeOptions, recipe }: Omit<LateBoilCheckProps, 'units'> & { units: Units }) {
   // Later changes to initialValues are ignored, as a form's starting values are: what is typed stays.
   const [state, dispatch] = useReducer(reducer, initialValues, (initial): FormState => ({ values: toFormValues(initial), touched: {} }));
   // Checked once per change: the verdict under each field and the answer come from this one run.
@@ -165,6 +172,52 @@ function Panel({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
+// The radios and checkboxes are memoised apart from the number fields: React writes an input's
+// name and type again whenever it renders it, so rendering them on each keystroke costs DOM work.
+const ReadingKindChoice = memo(function ReadingKindChoice({ kind: value, dispatch }: { kind: ReadingKind; dispatch: (action: FormAction) => void }) {
+  return (
+    <div role="radiogroup" aria-label="Read with" className="grid grid-cols-2 gap-2">
+      {(
+        [
+          ['refractometer', 'Refractometer'],
+          ['hydrometer', 'Hydrometer (cooled sample)'],
+        ] as const
+      ).map(([kind, label]) => (
+        <label
+          key={kind}
+          className={`flex min-h-touch cursor-pointer items-center justify-center rounded-lg px-2 py-2 text-center text-sm font-semibold ring-1 ${value === kind ? 'bg-cellar-700 text-white ring-cellar-700' : 'bg-white text-cellar-700 ring-cellar-300'}`}
+        >
+          <input type="radio" name="reading.kind" value={kind} checked={value === kind} onChange={() => dispatch({ type: 'kind', kind })} className="sr-only" />
+          {label}
+        </label>
+      ))}
+    </div>
+  );
+});
+
+const ExtractsOnHand = memo(function ExtractsOnHand({ onHand, dispatch }: { onHand: ExtractKind[]; dispatch: (action: FormAction) => void }) {
+  return (
+    <fieldset>
+      <legend className="mb-1 text-sm font-semibold text-ink-soft">Extracts on hand</legend>
+      <div className="grid grid-cols-2 gap-2">
+        {EXTRACT_KINDS.map((kind) => (
+          <label key={kind} className="flex min-h-touch cursor-pointer items-center gap-2 rounded-lg px-2 ring-1 ring-cellar-100">
+            <input
+              type="checkbox"
+              name="extractsOnHand"
+              value={kind}
+              checked={onHand.includes(kind)}
+              onChange={(e) => dispatch({ type: 'extract', kind, on: e.target.checked })}
+              className="size-5 accent-cellar-700"
+            />
+            <span className="text-sm">{extractLabels[kind]}</span>
+          </label>
+        ))}
+      </div>
+    </fieldset>
+  );
+});
+
 interface InputsProps {
   values: LateBoilFormValues;
   errors: Partial<Record<string, string>>;
@@ -174,114 +227,120 @@ interface InputsProps {
   dispatch: (action: FormAction) => void;
 }
 
-function Inputs({ values, errors, units, onValue, onTouch, dispatch }: InputsProps) {
-  // Each field is memoised: only the one whose value or message changed renders again.
-  const field = (name: string) => ({ name, value: getIn(values, name.split('.')) as NumberValue, error: errors[name], onValue, onTouch });
+function Inputs(props: InputsProps) {
+  return (
+    <div className="min-w-0 space-y-4">
+      {hotWortCaution}
+      <ReadingPanel {...props} />
+      <KettlePanel {...props} />
+      <TargetPanel {...props} />
+    </div>
+  );
+}
+
+/**
+ * Each panel renders again only when one of its own fields changed (value or message), so a
+ * keystroke renders the panel typed in, not the whole form. Each field is memoised too: only the
+ * one whose value or message changed renders again.
+ */
+function samePanel(names: readonly string[]) {
+  const fields = names.map((name) => [name, name.split('.')] as const);
+  return (prev: InputsProps, next: InputsProps) =>
+    prev.units === next.units &&
+    prev.onValue === next.onValue &&
+    prev.onTouch === next.onTouch &&
+    prev.dispatch === next.dispatch &&
+    fields.every(([name, path]) => Object.is(getIn(prev.values, path), getIn(next.values, path)) && prev.errors[name] === next.errors[name]);
+}
+
+function fieldProps({ values, errors, onValue, onTouch }: InputsProps, name: string) {
+  return { name, value: getIn(values, name.split('.')) as NumberValue, error: errors[name], onValue, onTouch };
+}
+
+const ReadingPanel = memo(function ReadingPanel(props: InputsProps) {
+  const { values, units, dispatch } = props;
+  const field = (name: string) => fieldProps(props, name);
   const hydrometer = values.reading.kind === 'hydrometer';
+  return (
+    <Panel title="Reading">
+      <ReadingKindChoice kind={values.reading.kind} dispatch={dispatch} />
+      {hydrometer ? (
+        <>
+          <p className="text-sm text-ink-soft">A hydrometer cannot be read in hot wort: cool a sample in a covered jar first.</p>
+          <CheckQuantityField {...field('reading.sg')} kind="gravity" label="Hydrometer reading" size="large" units={units} />
+          <div className="grid grid-cols-2 gap-3">
+            <CheckQuantityField {...field('reading.sampleTempC')} kind="temperature" label="Sample temperature" units={units} />
+            <CheckQuantityField {...field('reading.calibrationTempC')} kind="temperature" label="Calibrated at" units={units} />
+          </div>
+        </>
+      ) : (
+        <div className="grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-3">
+          <CheckNumberField {...field('reading.brix')} label="Brix" unit="°Bx" size="large" />
+          <CheckNumberField {...field('reading.wcf')} label="Wort correction factor" hint="About 1.04 is common." />
+        </div>
+      )}
+    </Panel>
+  );
+}, samePanel(['reading.kind', 'reading.brix', 'reading.wcf', 'reading.sg', 'reading.sampleTempC', 'reading.calibrationTempC']));
+
+const KettlePanel = memo(function KettlePanel(props: InputsProps) {
+  const { units } = props;
+  const field = (name: string) => fieldProps(props, name);
+  return (
+    <Panel title="Kettle now">
+      <CheckQuantityField {...field('volumeL')} kind="volume" label="Wort in the kettle (hot)" size="large" units={units} />
+      <div className="grid grid-cols-2 gap-3">
+        <CheckNumberField {...field('minutesLeft')} label="Minutes left" unit="min" />
+        <CheckQuantityField {...field('boilOffLPerHour')} kind="rate" label="Boil-off rate" units={units} />
+      </div>
+    </Panel>
+  );
+}, samePanel(['volumeL', 'minutesLeft', 'boilOffLPerHour']));
+
+const TargetPanel = memo(function TargetPanel(props: InputsProps) {
+  const { values, units, dispatch } = props;
+  const field = (name: string) => fieldProps(props, name);
   // Potentials read in points per pound per US gallon in US units: 1 ppg = 8.3454 points·L/kg.
   const ppgScale = KG_PER_LB / LITRES_PER_US_GALLON;
   const us = units.unitSystem === 'us';
   return (
-    <div className="min-w-0 space-y-4">
-      {hotWortCaution}
-
-      <Panel title="Reading">
-        <div role="radiogroup" aria-label="Read with" className="grid grid-cols-2 gap-2">
-          {(
-            [
-              ['refractometer', 'Refractometer'],
-              ['hydrometer', 'Hydrometer (cooled sample)'],
-            ] as const
-          ).map(([kind, label]) => (
-            <label
-              key={kind}
-              className={`flex min-h-touch cursor-pointer items-center justify-center rounded-lg px-2 py-2 text-center text-sm font-semibold ring-1 ${values.reading.kind === kind ? 'bg-cellar-700 text-white ring-cellar-700' : 'bg-white text-cellar-700 ring-cellar-300'}`}
-            >
-              <input type="radio" name="reading.kind" value={kind} checked={values.reading.kind === kind} onChange={() => dispatch({ type: 'kind', kind })} className="sr-only" />
-              {label}
-            </label>
-          ))}
-        </div>
-        {hydrometer ? (
-          <>
-            <p className="text-sm text-ink-soft">A hydrometer cannot be read in hot wort: cool a sample in a covered jar first.</p>
-            <CheckQuantityField {...field('reading.sg')} kind="gravity" label="Hydrometer reading" size="large" units={units} />
-            <div className="grid grid-cols-2 gap-3">
-              <CheckQuantityField {...field('reading.sampleTempC')} kind="temperature" label="Sample temperature" units={units} />
-              <CheckQuantityField {...field('reading.calibrationTempC')} kind="temperature" label="Calibrated at" units={units} />
-            </div>
-          </>
-        ) : (
-          <div className="grid grid-cols-[minmax(0,3fr)_minmax(0,2fr)] gap-3">
-            <CheckNumberField {...field('reading.brix')} label="Brix" unit="°Bx" size="large" />
-            <CheckNumberField {...field('reading.wcf')} label="Wort correction factor" hint="About 1.04 is common." />
+    <Panel title="Recipe target">
+      <div className="grid grid-cols-2 gap-3">
+        <CheckQuantityField {...field('targetSg')} kind="gravity" label="Target OG" units={units} />
+        <CheckQuantityField {...field('targetVolumeL')} kind="volume" label="Into the fermenter" hint="Optional" units={units} />
+      </div>
+      <ExtractsOnHand onHand={values.extractsOnHand} dispatch={dispatch} />
+      <details className="group">
+        {moreSettingsSummary}
+        <div className="mt-2 space-y-4">
+          <div className="grid grid-cols-2 gap-3">
+            <CheckQuantityField {...field('targetFg')} kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
+            <CheckQuantityField {...field('kettleCapacityL')} kind="volume" label="Kettle size" hint="Optional" units={units} />
           </div>
-        )}
-      </Panel>
-
-      <Panel title="Kettle now">
-        <CheckQuantityField {...field('volumeL')} kind="volume" label="Wort in the kettle (hot)" size="large" units={units} />
-        <div className="grid grid-cols-2 gap-3">
-          <CheckNumberField {...field('minutesLeft')} label="Minutes left" unit="min" />
-          <CheckQuantityField {...field('boilOffLPerHour')} kind="rate" label="Boil-off rate" units={units} />
-        </div>
-      </Panel>
-
-      <Panel title="Recipe target">
-        <div className="grid grid-cols-2 gap-3">
-          <CheckQuantityField {...field('targetSg')} kind="gravity" label="Target OG" units={units} />
-          <CheckQuantityField {...field('targetVolumeL')} kind="volume" label="Into the fermenter" hint="Optional" units={units} />
-        </div>
-        <fieldset>
-          <legend className="mb-1 text-sm font-semibold text-ink-soft">Extracts on hand</legend>
-          <div className="grid grid-cols-2 gap-2">
-            {EXTRACT_KINDS.map((kind) => (
-              <label key={kind} className="flex min-h-touch cursor-pointer items-center gap-2 rounded-lg px-2 ring-1 ring-cellar-100">
-                <input
-                  type="checkbox"
-                  name="extractsOnHand"
-                  value={kind}
-                  checked={values.extractsOnHand.includes(kind)}
-                  onChange={(e) => dispatch({ type: 'extract', kind, on: e.target.checked })}
-                  className="size-5 accent-cellar-700"
+          <div className="grid grid-cols-2 gap-3">
+            <CheckNumberField {...field('coolingShrinkage')} label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
+            <CheckQuantityField {...field('kettleLossL')} kind="volume" label="Left in the kettle" hint="Trub loss plus dead space" units={units} />
+          </div>
+          <fieldset>
+            <legend className="mb-1 text-sm font-semibold text-ink-soft">Extract potentials, if yours differ ({us ? 'points per lb per gallon' : 'points × litres per kg'})</legend>
+            <div className="grid grid-cols-2 gap-3">
+              {EXTRACT_KINDS.map((kind) => (
+                <CheckNumberField
+                  key={kind}
+                  {...field(`potentials.${kind}`)}
+                  label={extractLabels[kind]}
+                  unit={us ? 'ppg' : 'pts·L/kg'}
+                  scale={us ? ppgScale : 1}
+                  placeholder={(EXTRACT_POTENTIALS_POINTS_L_PER_KG[kind] * (us ? ppgScale : 1)).toFixed(0)}
                 />
-                <span className="text-sm">{extractLabels[kind]}</span>
-              </label>
-            ))}
-          </div>
-        </fieldset>
-        <details className="group">
-          {moreSettingsSummary}
-          <div className="mt-2 space-y-4">
-            <div className="grid grid-cols-2 gap-3">
-              <CheckQuantityField {...field('targetFg')} kind="gravity" label="Target FG" hint="For ABV; optional" units={units} />
-              <CheckQuantityField {...field('kettleCapacityL')} kind="volume" label="Kettle size" hint="Optional" units={units} />
+              ))}
             </div>
-            <div className="grid grid-cols-2 gap-3">
-              <CheckNumberField {...field('coolingShrinkage')} label="Shrinkage on cooling" unit="%" scale={100} hint="Hot wort is about 4 % bigger than cold." />
-              <CheckQuantityField {...field('kettleLossL')} kind="volume" label="Left in the kettle" hint="Trub loss plus dead space" units={units} />
-            </div>
-            <fieldset>
-              <legend className="mb-1 text-sm font-semibold text-ink-soft">Extract potentials, if yours differ ({us ? 'points per lb per gallon' : 'points × litres per kg'})</legend>
-              <div className="grid grid-cols-2 gap-3">
-                {EXTRACT_KINDS.map((kind) => (
-                  <CheckNumberField
-                    key={kind}
-                    {...field(`potentials.${kind}`)}
-                    label={extractLabels[kind]}
-                    unit={us ? 'ppg' : 'pts·L/kg'}
-                    scale={us ? ppgScale : 1}
-                    placeholder={(EXTRACT_POTENTIALS_POINTS_L_PER_KG[kind] * (us ? ppgScale : 1)).toFixed(0)}
-                  />
-                ))}
-              </div>
-            </fieldset>
-          </div>
-        </details>
-      </Panel>
-    </div>
+          </fieldset>
+        </div>
+      </details>
+    </Panel>
   );
-}
+}, samePanel(['targetSg', 'targetVolumeL', 'extractsOnHand', 'targetFg', 'kettleCapacityL', 'coolingShrinkage', 'kettleLossL', ...EXTRACT_KINDS.map((kind) => `potentials.${kind}`)]));
 
 /**
  * The answer beside (or, on a phone, below) the inputs. The summary of where the wort is heading
