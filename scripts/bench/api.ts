@@ -354,6 +354,8 @@ async function main() {
     }
     console.log(`\nbaseline for growth rows = the same request with small data; load average ${os.loadavg().map((l) => l.toFixed(2)).join(' ')} on ${os.cpus().length} cores; ${((Date.now() - started) / 1000).toFixed(0)} s`);
   } finally {
+    // Requests autocannon left in flight finish first, rather than meeting a closed pool (and logging 503s).
+    await new Promise((r) => setTimeout(r, 1500));
     for (const c of children) if (c.exitCode === null) c.kill('SIGTERM');
     await Promise.all(children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)));
     await pool.query(`drop database if exists \`${dbName}\``);
