@@ -399,10 +399,7 @@ const Answer = memo(function Answer({
 
   return (
     <div className="min-w-0 space-y-4">
-      {/* Skipped by the browser while off screen (a phone, typing above it): a keystroke then lays out
-          only what is in view. Still in the accessibility tree, so the status is announced. The
-          padding, taken back by the margin, keeps the cards' rings and focus outlines inside its paint clip. */}
-      <div ref={resultsRef} id="late-boil-answer" className="-m-2 scroll-mt-2 p-2 [contain-intrinsic-size:auto_40rem] [content-visibility:auto]">
+      <div ref={resultsRef} id="late-boil-answer" className="scroll-mt-4">
         {check.ok ? (
           <div className="space-y-4">
             <CheckSummary input={check.input} outcome={check.outcome} units={units} recipe={recipe} />
