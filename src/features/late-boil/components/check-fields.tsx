@@ -25,22 +25,17 @@ interface CommonProps {
   placeholder?: string;
 }
 
-/**
- * The text typed, or the stored value re-shown when it was changed from outside (a unit switch).
- * The field owns what is typed in it: its panel does not render again for each keystroke, so the
- * value passed in may lag behind the one last typed, and is shown again only when it differs from
- * both the value passed before and the one typed (a change from outside).
- */
+/** The text typed, or the stored value re-shown when it was changed from outside (a unit switch). */
 function useShownText(value: NumberValue, show: (value: NumberValue) => string, showKey: string) {
-  const [state, setState] = useState(() => ({ text: show(value), value, prop: value, showKey }));
-  if (state.showKey !== showKey || (!Object.is(state.prop, value) && !Object.is(state.value, value))) {
-    const next = { text: show(value), value, prop: value, showKey };
+  const [state, setState] = useState(() => ({ text: show(value), value, showKey }));
+  if (!Object.is(state.value, value) || state.showKey !== showKey) {
+    const next = { text: show(value), value, showKey };
     setState(next);
     return [next.text, setState] as const;
   }
-  if (!Object.is(state.prop, value)) setState({ ...state, prop: value });
   return [state.text, setState] as const;
 }
+
 const parseTyped = (text: string) => parseDecimal(text) ?? null;
 
 /** A number without a unit system behind it (°Brix, minutes, a percentage, a correction factor). */
@@ -63,7 +58,7 @@ export const CheckNumberField = memo(function CheckNumberField({
   function onChange(next: string) {
     const shown = parseTyped(next);
     const stored: NumberValue = shown === null ? '' : !Number.isFinite(shown) ? Number.NaN : shown / scale;
-    setState((prev) => ({ ...prev, text: next, value: stored, showKey: String(scale) }));
+    setState({ text: next, value: stored, showKey: String(scale) });
     onValue(name, stored);
   }
   const shownError = error ?? null;
@@ -107,7 +102,7 @@ export const CheckQuantityField = memo(function CheckQuantityField({ name, value
         }
       }
     }
-    setState((prev) => ({ ...prev, text: next, value: stored, showKey: unitKey }));
+    setState({ text: next, value: stored, showKey: unitKey });
     setConversion(conversionError ? { text: next, error: conversionError } : null);
     onValue(name, stored);
   }

@@ -79,10 +79,10 @@ export const CheckSummary = memo(function CheckSummary({ input, outcome, units, 
   );
 });
 
-/** One figure of the summary, the same size throughout; rendered again only when its text changed (a keystroke moves two or three of them). */
-const Stat = memo(function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
+/** One figure of the summary, the same size throughout. */
+function Stat({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
   return <Figure className="min-w-0" labelStyle="plain" size="xl" label={label} value={value} hint={note} valueTestId={testId} />;
-});
+}
 
 export function NotReady({ missing, problems }: { missing: string[]; problems: { path: string; message: string }[] }): ReactNode {
   return (

@@ -239,19 +239,18 @@ function Inputs(props: InputsProps) {
 }
 
 /**
- * Each panel renders again only when one of its fields' messages, its choices or the units
- * changed, not for a number typed: each number field keeps what is typed in it (check-fields.tsx),
- * so a keystroke renders the field typed in, not its panel or the whole form.
+ * Each panel renders again only when one of its own fields changed (value or message), so a
+ * keystroke renders the panel typed in, not the whole form. Each field is memoised too: only the
+ * one whose value or message changed renders again.
  */
-function samePanel(numberNames: readonly string[], choiceNames: readonly string[] = []) {
-  const choices = choiceNames.map((name) => name.split('.'));
+function samePanel(names: readonly string[]) {
+  const fields = names.map((name) => [name, name.split('.')] as const);
   return (prev: InputsProps, next: InputsProps) =>
     prev.units === next.units &&
     prev.onValue === next.onValue &&
     prev.onTouch === next.onTouch &&
     prev.dispatch === next.dispatch &&
-    choices.every((path) => Object.is(getIn(prev.values, path), getIn(next.values, path))) &&
-    numberNames.every((name) => prev.errors[name] === next.errors[name]);
+    fields.every(([name, path]) => Object.is(getIn(prev.values, path), getIn(next.values, path)) && prev.errors[name] === next.errors[name]);
 }
 
 function fieldProps({ values, errors, onValue, onTouch }: InputsProps, name: string) {
@@ -282,7 +281,7 @@ const ReadingPanel = memo(function ReadingPanel(props: InputsProps) {
       )}
     </Panel>
   );
-}, samePanel(['reading.brix', 'reading.wcf', 'reading.sg', 'reading.sampleTempC', 'reading.calibrationTempC'], ['reading.kind']));
+}, samePanel(['reading.kind', 'reading.brix', 'reading.wcf', 'reading.sg', 'reading.sampleTempC', 'reading.calibrationTempC']));
 
 const KettlePanel = memo(function KettlePanel(props: InputsProps) {
   const { units } = props;
@@ -341,7 +340,7 @@ const TargetPanel = memo(function TargetPanel(props: InputsProps) {
       </details>
     </Panel>
   );
-}, samePanel(['targetSg', 'targetVolumeL', 'targetFg', 'kettleCapacityL', 'coolingShrinkage', 'kettleLossL', ...EXTRACT_KINDS.map((kind) => `potentials.${kind}`)], ['extractsOnHand']));
+}, samePanel(['targetSg', 'targetVolumeL', 'extractsOnHand', 'targetFg', 'kettleCapacityL', 'coolingShrinkage', 'kettleLossL', ...EXTRACT_KINDS.map((kind) => `potentials.${kind}`)]));
 
 /**
  * The answer beside (or, on a phone, below) the inputs. The summary of where the wort is heading
