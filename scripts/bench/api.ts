@@ -165,6 +165,9 @@ async function load(target: { url: string; method: string; body?: string; cookie
   return { rps: result.requests.average, p99: result.latency.p99, cpuMsPerReq: cpuMs / requests, errors: result.non2xx + result.errors };
 }
 
+/** Lets the requests autocannon left in flight finish before the bench deletes rows or stops the servers. */
+const settle = () => new Promise((r) => setTimeout(r, 1500));
+
 async function main() {
   const started = Date.now();
   const running = await ensureMariadb();
@@ -316,6 +319,7 @@ async function main() {
           await runBare();
           await runWw();
         }
+        if (name === 'write') await settle();
         if (name === 'write') await pool.query('delete from brew_readings where brew_id = ? and id > (select m from (select min(id) m from brew_readings where brew_id = ?) x)', [writeBrew, writeBrew]);
       }
     }
@@ -354,8 +358,7 @@ async function main() {
     }
     console.log(`\nbaseline for growth rows = the same request with small data; load average ${os.loadavg().map((l) => l.toFixed(2)).join(' ')} on ${os.cpus().length} cores; ${((Date.now() - started) / 1000).toFixed(0)} s`);
   } finally {
-    // Requests autocannon left in flight finish first, rather than meeting a closed pool (and logging 503s).
-    await new Promise((r) => setTimeout(r, 1500));
+    await settle();
     for (const c of children) if (c.exitCode === null) c.kill('SIGTERM');
     await Promise.all(children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)));
     await pool.query(`drop database if exists \`${dbName}\``);

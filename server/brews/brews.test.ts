@@ -3,6 +3,7 @@ import { eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { brewReadings, brews, recipes } from '../db/schema';
 import { createHarness, type TestHarness } from '../../tests/support/api';
+import { brewDayChange } from './service';
 import { makeInstrument, makeScene, startBrewDay, testRecipe, type Scene } from './test-scene';
 
 let h: TestHarness;
@@ -348,5 +349,14 @@ describe('notes', () => {
     expect(empty.body.fields).toEqual({ body: 'Write the note.' });
     await scene.owner.agent.delete(`/api/brews/${id}/notes/${note.body.id}`).expect(204);
     expect((await scene.owner.agent.get(`/api/brews/${id}`).expect(200)).body.log).toEqual([]);
+  });
+});
+
+describe('a write whose brew day is deleted before the answer is read', () => {
+  it('answers 404 with words, not a crash', async () => {
+    const scene = await makeScene(h);
+    const id = await startBrewDay(scene);
+    await h.ctx.db.delete(brews).where(eq(brews.id, id));
+    await expect(brewDayChange(h.ctx.db, id)).rejects.toMatchObject({ status: 404, message: 'This brew day was deleted.' });
   });
 });

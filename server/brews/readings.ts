@@ -97,7 +97,9 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
   const { corrected, correction, warnings } = correct(snapshot, raw, takenAt, unitSystemOf(actor));
   const stage = readingStage[body.kind];
 
-  const id = await db.transaction(async (tx) => {
+  // The stored row is read back inside the transaction: a delete arriving right after the commit
+  // cannot leave the answer without its reading.
+  const row = await db.transaction(async (tx) => {
     // The brew row first (inside lockAndCheckReadingLimit): the stage and updatedAt written below
     // would otherwise deadlock with a reading posted at the same moment (see server/db/locks.ts).
     await lockAndCheckReadingLimit(tx, brewId, 'brew');
@@ -124,10 +126,10 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
     if (body.kind === 'pitch_temp' && body.pitched && !stored.row.pitchedAt) {
       await tx.update(brews).set({ pitchedAt: takenAt }).where(and(eq(brews.id, brewId), isNull(brews.pitchedAt)));
     }
-    return id;
+    const [saved] = await prepared(tx, readingById).execute({ id });
+    return saved;
   });
-  const [[row], brewDay] = await Promise.all([prepared(db, readingById).execute({ id }), brewDayChange(db, brewId)]);
-  return { ...toReading(row), brewDay };
+  return { ...toReading(row), brewDay: await brewDayChange(db, brewId) };
 }
 
 export async function loadReading(db: Db, brewId: number, readingId: number) {

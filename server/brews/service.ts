@@ -337,6 +337,8 @@ export async function brewDayChange(db: DbOrTx, brewId: number): Promise<BrewDay
     judgedReadings(db, brewId),
     prepared(db, decisionsOfBrew).execute({ id: brewId }),
   ]);
+  // Deleted (by its owner elsewhere) between the write and this answer.
+  if (!row) throw new NotFound('This brew day was deleted.');
   return {
     ...ogFigures(judged.readings),
     readingCount: judged.count,

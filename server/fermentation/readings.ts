@@ -112,6 +112,8 @@ async function assembleChange(db: DbOrTx, actor: Actor, stored: StoredBrew, read
     ogReading(db, brewId),
     db.select().from(fermentationReminders).where(eq(fermentationReminders.brewId, brewId)).orderBy(asc(fermentationReminders.dueAt)),
   ]);
+  // Deleted (on another device) between the write and this answer.
+  if (!row) throw new NotFound('That reading was deleted just after it was saved.');
   const brew = brewOf(actor, stored, ogRead);
   return {
     reading: toFermentationReading(row, stored.row.pitchedAt),
