@@ -97,9 +97,7 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
   const { corrected, correction, warnings } = correct(snapshot, raw, takenAt, unitSystemOf(actor));
   const stage = readingStage[body.kind];
 
-  // The stored row is read back inside the transaction: a delete arriving right after the commit
-  // cannot leave the answer without its reading.
-  const row = await db.transaction(async (tx) => {
+  const id = await db.transaction(async (tx) => {
     // The brew row first (inside lockAndCheckReadingLimit): the stage and updatedAt written below
     // would otherwise deadlock with a reading posted at the same moment (see server/db/locks.ts).
     await lockAndCheckReadingLimit(tx, brewId, 'brew');
@@ -126,10 +124,13 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
     if (body.kind === 'pitch_temp' && body.pitched && !stored.row.pitchedAt) {
       await tx.update(brews).set({ pitchedAt: takenAt }).where(and(eq(brews.id, brewId), isNull(brews.pitchedAt)));
     }
-    const [saved] = await prepared(tx, readingById).execute({ id });
-    return saved;
+    return id;
   });
-  return { ...toReading(row), brewDay: await brewDayChange(db, brewId) };
+  // Read after the commit, so the brew row's lock is not held for it.
+  const [[row], brewDay] = await Promise.all([prepared(db, readingById).execute({ id }), brewDayChange(db, brewId)]);
+  // Deleted (on another device) between the commit and this read.
+  if (!row) throw new NotFound('That reading was deleted just after it was saved.');
+  return { ...toReading(row), brewDay };
 }
 
 export async function loadReading(db: Db, brewId: number, readingId: number) {
