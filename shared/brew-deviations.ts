@@ -13,7 +13,7 @@ import { sgToPlato } from './brewmath/gravity';
 import { MASH_PH_TARGET, mashPhVerdict } from './brewmath/mash';
 import { formatGravity, formatTemperature, formatVolume, type GravityUnit, type UnitSystem } from './brewmath/format';
 import type { InstrumentSnapshot } from './schemas/instruments';
-import type { BrewDeviation, ReadingKind } from './schemas/brews';
+import { readingStage, type BrewDeviation, type ReadingKind } from './schemas/brews';
 import { DAY_MS } from './dates';
 
 export const MASH_TEMP_TOLERANCE_C = 1;
@@ -119,16 +119,6 @@ export function instrumentDeviation(reading: DeviationReading, stage: BrewDeviat
   }
 }
 
-const stageOf: Record<ReadingKind, BrewDeviation['stage']> = {
-  mash_temp: 'mash',
-  mash_ph: 'mash',
-  souring_ph: 'souring',
-  pre_boil_gravity: 'boil',
-  late_boil_gravity: 'boil',
-  pitch_temp: 'chill',
-  og: 'og',
-};
-
 /** An instrument is called out once per code: the first reading that shows it. */
 const instrumentKey = (d: BrewDeviation, r: DeviationReading) => `${d.code}:${r.instrument?.instrumentId ?? `default-${r.instrument?.kind ?? r.kind}`}`;
 
@@ -137,7 +127,7 @@ const instrumentKey = (d: BrewDeviation, r: DeviationReading) => `${d.code}:${r.
  * nothing: stored with each reading, so the first reading of each can be found by index.
  */
 export function instrumentNoteKey(r: DeviationReading): string {
-  const found = instrumentDeviation(r, stageOf[r.kind]);
+  const found = instrumentDeviation(r, readingStage[r.kind]);
   return found ? instrumentKey(found, r) : '';
 }
 
@@ -152,7 +142,7 @@ export function findDeviations(input: {
   const flaggedInstruments = new Set<string>();
 
   for (const r of input.readings) {
-    const stage = stageOf[r.kind];
+    const stage = readingStage[r.kind];
     const at = { stage, readingId: r.id, decisionId: null, instrumentName: null } as const;
     switch (r.kind) {
       case 'mash_ph': {
