@@ -79,6 +79,7 @@ describe('the fermentation readings list', () => {
     await waitFor(() => expect(shownNotes()).toHaveLength(110));
     expect(shownNotes().at(-1)).toBe('reading 1');
     expect(screen.queryByRole('button', { name: 'Show older readings' })).toBeNull();
+    expect(screen.getByRole('status')).toHaveTextContent('All 110 readings shown.');
     await userEvent.click(screen.getByRole('button', { name: 'Show the latest only' }));
     expect(shownNotes()).toHaveLength(6);
     expect(fetch).toHaveBeenCalledTimes(2);

@@ -89,7 +89,9 @@ export function ReadingsList({ log, canEdit }: { log: Pick<FermentationLog, 'bre
       {(older.hasNextPage || limit > SHOWN) && (
         <div className="mt-2 flex flex-col gap-2 sm:flex-row sm:flex-wrap sm:items-center">
           <p className="text-sm text-ink-soft" role="status">
-            Showing the latest {shown.length.toLocaleString('en')} of {loaded.total.toLocaleString('en')} readings.
+            {shown.length >= loaded.total
+              ? `All ${loaded.total.toLocaleString('en')} readings shown.`
+              : `Showing the latest ${shown.length.toLocaleString('en')} of ${loaded.total.toLocaleString('en')} readings.`}
           </p>
           <ShowMore pages={older} label="Show older readings" />
           {limit > SHOWN && (
