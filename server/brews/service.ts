@@ -231,6 +231,42 @@ const judgedKinds = ['mash_temp', 'mash_ph', 'og', 'pitch_temp'] as const;
 /** drizzle's raw rows give TIMESTAMP columns as 'YYYY-MM-DD HH:MM:SS.fff' in UTC (the pool's timezone). */
 const fromDbTimestamp = (value: string | Date) => (value instanceof Date ? value : new Date(`${value.replace(' ', 'T')}Z`));
 
+const judgedColumns = {
+  id: brewReadings.id,
+  brewId: brewReadings.brewId,
+  kind: brewReadings.kind,
+  corrected: brewReadings.correctedValue,
+  volumeL: brewReadings.volumeL,
+  instrument: brewReadings.instrumentSnapshot,
+  takenAt: brewReadings.takenAt,
+  note: brewReadings.instrumentNote,
+};
+
+/** Judged readings of brew days with no call-out note: every judged kind, and readings stored before notes were kept. */
+const judgedRowsUnnoted = (db: DbOrTx) =>
+  db
+    .select(judgedColumns)
+    .from(brewReadings)
+    .where(and(inList(brewReadings.brewId, 'brewIds'), or(inArray(brewReadings.kind, judgedKinds), isNull(brewReadings.instrumentNote))))
+    .orderBy(asc(brewReadings.brewId), asc(brewReadings.takenAt), asc(brewReadings.id));
+
+/** As judgedRowsUnnoted, and the readings at each call-out's first time (`firsts`: a list of (brew, note, time) rows). */
+const judgedRowsWithFirsts = (db: DbOrTx) =>
+  db
+    .select(judgedColumns)
+    .from(brewReadings)
+    .where(
+      and(
+        inList(brewReadings.brewId, 'brewIds'),
+        or(
+          inArray(brewReadings.kind, judgedKinds),
+          isNull(brewReadings.instrumentNote),
+          sql`(${brewReadings.brewId}, ${brewReadings.instrumentNote}, ${brewReadings.takenAt}) in (${sql.placeholder('firsts')})`,
+        ),
+      ),
+    )
+    .orderBy(asc(brewReadings.brewId), asc(brewReadings.takenAt), asc(brewReadings.id));
+
 /**
  * The readings that decide the brew day's deviations, OG and fermenter volume, and how many
  * readings there are, sending back a handful of rows however long the log: every reading of a
@@ -248,20 +284,14 @@ export async function judgedReadings(db: DbOrTx, brewId: number): Promise<{ read
  * statements: the groups of every brew day in one pass, then their rows.
  */
 export async function judgedReadingsOf(db: DbOrTx, brewIds: readonly number[]): Promise<Map<number, { readings: JudgedReading[]; count: number }>> {
-  const r = brewReadings;
   const judged = new Map<number, { readings: JudgedReading[]; count: number }>();
   if (brewIds.length === 0) return judged;
   const groups = await prepared(db, readingGroups).execute({ brewIds });
   if (groups.length === 0) return judged;
-  const where: SQL[] = [inArray(r.kind, judgedKinds)];
-  const wholeLogs = [...new Set(groups.filter((g) => g.note === null).map((g) => g.brewId))];
-  if (wholeLogs.length > 0) where.push(and(inArray(r.brewId, wholeLogs), isNull(r.instrumentNote))!);
-  for (const g of groups) if (g.note) where.push(and(eq(r.brewId, g.brewId), eq(r.instrumentNote, g.note), eq(r.takenAt, fromDbTimestamp(g.firstAt)))!);
-  const rows = await db
-    .select({ id: r.id, brewId: r.brewId, kind: r.kind, corrected: r.correctedValue, volumeL: r.volumeL, instrument: r.instrumentSnapshot, takenAt: r.takenAt, note: r.instrumentNote })
-    .from(r)
-    .where(and(inArray(r.brewId, brewIds), or(...where)))
-    .orderBy(asc(r.brewId), asc(r.takenAt), asc(r.id));
+  // Each call-out's first reading, as (brew, note, time) rows: one list placeholder keeps the
+  // statement's text the same whatever the number of groups, so it is prepared once.
+  const firsts = groups.filter((g) => g.note !== null).map((g) => [g.brewId, g.note, fromDbTimestamp(g.firstAt)]);
+  const rows = firsts.length > 0 ? await prepared(db, judgedRowsWithFirsts).execute({ brewIds, firsts }) : await prepared(db, judgedRowsUnnoted).execute({ brewIds });
   for (const g of groups) {
     const entry = judged.get(g.brewId) ?? { readings: [], count: 0 };
     entry.count += Number(g.n);
