@@ -5,6 +5,7 @@
  * stored recipe has moved on, so nobody's edits are overwritten silently.
  */
 import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { unionAll } from 'drizzle-orm/mysql-core';
 import {
   type ListRecipesQuery,
   type Recipe,
@@ -159,22 +160,6 @@ function decodeRecipeCursor(sort: RecipeSort, cursor: string): { value: SortKey;
   });
 }
 
-/** drizzle's raw rows give TIMESTAMP columns as 'YYYY-MM-DD HH:MM:SS.fff' in UTC (the pool's timezone). */
-const fromDbTimestamp = (value: string | Date) => (value instanceof Date ? value : new Date(`${value.replace(' ', 'T')}Z`));
-
-interface ListRow {
-  id: number;
-  name: string;
-  style: string;
-  owner_id: number;
-  owner_name: string;
-  version: number;
-  batch_volume_l: number;
-  target_og: number;
-  target_fg: number;
-  updated_at: string | Date;
-  sort_key: SortKey | Date;
-}
 
 /**
  * Recipes the actor may read, a page at a time: their own and those shared with their clubs are
@@ -187,46 +172,93 @@ interface ListRow {
 const sharesOfRecipes = (db: DbOrTx) =>
   db.select({ recipeId: recipeClubShares.recipeId, clubId: recipeClubShares.clubId }).from(recipeClubShares).where(inList(recipeClubShares.recipeId, 'ids')).orderBy(asc(recipeClubShares.clubId));
 
+/** What decides a recipe-list statement's text; everything else is a placeholder value. */
+interface ListShape {
+  sort: RecipeSort;
+  dir: 'asc' | 'desc';
+  mine: boolean;
+  shared: boolean;
+  search: boolean;
+  cursor: boolean;
+}
+
+function buildRecipeList(db: DbOrTx, shape: ListShape) {
+  const key = sortColumns[shape.sort];
+  const order = shape.dir === 'asc' ? asc : desc;
+  const filters: SQL[] = [];
+  if (shape.search) filters.push(sql`(${recipes.name} like ${sql.placeholder('pattern')} or ${recipes.style} like ${sql.placeholder('pattern')})`);
+  if (shape.cursor) {
+    const [value, id] = [sql.placeholder('cursorValue'), sql.placeholder('cursorId')];
+    filters.push(shape.dir === 'asc' ? sql`(${key} > ${value} or (${key} = ${value} and ${recipes.id} > ${id}))` : sql`(${key} < ${value} or (${key} = ${value} and ${recipes.id} < ${id}))`);
+  }
+  const branch = (who: SQL) =>
+    db
+      .select({
+        id: recipes.id,
+        name: recipes.name,
+        style: recipes.style,
+        ownerId: recipes.ownerId,
+        ownerName: users.displayName,
+        version: recipes.version,
+        batchVolumeL: recipes.batchVolumeL,
+        targetOg: recipes.targetOg,
+        targetFg: recipes.targetFg,
+        updatedAt: recipes.updatedAt,
+        sortKey: sql<SortKey>`${key}`.as('sort_key'),
+      })
+      .from(recipes)
+      .innerJoin(users, eq(users.id, recipes.ownerId))
+      .where(and(who, ...filters))
+      .orderBy(order(key), order(recipes.id))
+      .limit(sql.placeholder('take'));
+  const mine = branch(sql`${recipes.ownerId} = ${sql.placeholder('actorId')}`);
+  // A subquery, not a join, so a recipe shared with two of my clubs is listed once.
+  const shared = branch(
+    sql`${recipes.id} in (select ${recipeClubShares.recipeId} from ${recipeClubShares} where ${inList(recipeClubShares.clubId, 'clubIds')}) and ${recipes.ownerId} <> ${sql.placeholder('actorId')}`,
+  );
+  if (!shape.shared) return mine;
+  if (!shape.mine) return shared;
+  // The union is ordered by its own column name (a raw chunk: drizzle rewrites column chunks here).
+  return unionAll(mine, shared)
+    .orderBy(sql.raw(`sort_key ${shape.dir}, id ${shape.dir}`))
+    .limit(sql.placeholder('take'));
+}
+
+/**
+ * One builder per statement shape, made on first use, so server/db/prepared.ts builds each
+ * shape's SQL once: at most 5 sorts × 2 directions × 3 branch sets × search × cursor.
+ */
+const recipeListBuilders = new Map<string, (db: DbOrTx) => ReturnType<typeof buildRecipeList>>();
+function recipeListQuery(db: DbOrTx, shape: ListShape) {
+  const id = `${shape.sort} ${shape.dir} ${shape.mine} ${shape.shared} ${shape.search} ${shape.cursor}`;
+  let build = recipeListBuilders.get(id);
+  if (!build) recipeListBuilders.set(id, (build = (handle: DbOrTx) => buildRecipeList(handle, shape)));
+  return prepared(db, build);
+}
+
 export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<typeof listRecipesQuerySchema>): Promise<RecipeList> {
-  const key = sortColumns[query.sort];
   const dir = query.dir ?? (query.sort === 'updated' ? 'desc' : 'asc');
   const cursor = query.cursor ? decodeRecipeCursor(query.sort, query.cursor) : null;
-  const take = query.pageSize + 1;
-  const filters: SQL[] = [];
-  if (query.q) {
-    const pattern = likePattern(query.q);
-    filters.push(sql`(${recipes.name} like ${pattern} or ${recipes.style} like ${pattern})`);
-  }
-  if (cursor) {
-    const value = query.sort === 'updated' ? new Date(cursor.value as string) : cursor.value;
-    if (value instanceof Date && Number.isNaN(value.getTime())) throw new BadRequest(BAD_CURSOR, { cursor: BAD_CURSOR });
-    filters.push(
-      dir === 'asc'
-        ? sql`(${key} > ${value} or (${key} = ${value} and ${recipes.id} > ${cursor.id}))`
-        : sql`(${key} < ${value} or (${key} = ${value} and ${recipes.id} < ${cursor.id}))`,
-    );
-  }
-  const order = dir === 'asc' ? sql`asc` : sql`desc`;
-  const branch = (who: SQL) => sql`(select ${recipes.id} as id, ${recipes.name} as name, ${recipes.style} as style, ${recipes.ownerId} as owner_id,
-      ${users.displayName} as owner_name, ${recipes.version} as version, ${recipes.batchVolumeL} as batch_volume_l,
-      ${recipes.targetOg} as target_og, ${recipes.targetFg} as target_fg, ${recipes.updatedAt} as updated_at, ${key} as sort_key
-    from ${recipes} inner join ${users} on ${users.id} = ${recipes.ownerId}
-    where ${sql.join([who, ...filters], sql` and `)}
-    order by ${key} ${order}, ${recipes.id} ${order} limit ${take})`;
+  const cursorValue = cursor && (query.sort === 'updated' ? new Date(cursor.value as string) : cursor.value);
+  if (cursorValue instanceof Date && Number.isNaN(cursorValue.getTime())) throw new BadRequest(BAD_CURSOR, { cursor: BAD_CURSOR });
   const clubIds = actor.memberships.map((m) => m.clubId);
-  const branches: SQL[] = [];
-  if (query.scope !== 'shared') branches.push(branch(sql`${recipes.ownerId} = ${actor.id}`));
-  if (query.scope !== 'mine' && clubIds.length > 0) {
-    branches.push(
-      branch(
-        // A subquery, not a join, so a recipe shared with two of my clubs is listed once.
-        sql`${recipes.id} in (select ${recipeClubShares.recipeId} from ${recipeClubShares} where ${inArray(recipeClubShares.clubId, clubIds)}) and ${recipes.ownerId} <> ${actor.id}`,
-      ),
-    );
-  }
-  if (branches.length === 0) return { items: [], nextCursor: null, pageSize: query.pageSize };
-  const [result] = await db.execute(sql`${sql.join(branches, sql` union all `)} order by sort_key ${order}, id ${order} limit ${take}`);
-  const rows = result as unknown as ListRow[];
+  const shape: ListShape = {
+    sort: query.sort,
+    dir,
+    mine: query.scope !== 'shared',
+    shared: query.scope !== 'mine' && clubIds.length > 0,
+    search: Boolean(query.q),
+    cursor: cursor !== null,
+  };
+  if (!shape.mine && !shape.shared) return { items: [], nextCursor: null, pageSize: query.pageSize };
+  const rows = await recipeListQuery(db, shape).execute({
+    actorId: actor.id,
+    clubIds,
+    take: query.pageSize + 1,
+    pattern: query.q ? likePattern(query.q) : null,
+    cursorValue,
+    cursorId: cursor?.id ?? null,
+  });
   const page = rows.slice(0, query.pageSize);
   const shares =
     page.length > 0
@@ -236,23 +268,23 @@ export async function listRecipes(db: DbOrTx, actor: Actor, query: z.output<type
     id: r.id,
     name: r.name,
     style: r.style,
-    ownerId: r.owner_id,
-    ownerName: r.owner_name,
-    isOwner: r.owner_id === actor.id,
+    ownerId: r.ownerId,
+    ownerName: r.ownerName,
+    isOwner: r.ownerId === actor.id,
     version: r.version,
-    batchVolumeL: r.batch_volume_l,
-    targetOg: r.target_og,
-    targetFg: r.target_fg,
-    abvPercent: targetAbv(r.target_og, r.target_fg)?.abvPercent ?? 0,
+    batchVolumeL: r.batchVolumeL,
+    targetOg: r.targetOg,
+    targetFg: r.targetFg,
+    abvPercent: targetAbv(r.targetOg, r.targetFg)?.abvPercent ?? 0,
     sharedWithClubIds: visibleClubIds(
       actor,
-      r.owner_id,
+      r.ownerId,
       shares.filter((s) => s.recipeId === r.id).map((s) => s.clubId),
     ),
-    updatedAt: fromDbTimestamp(r.updated_at).toISOString(),
+    updatedAt: r.updatedAt.toISOString(),
   }));
   const last = page[page.length - 1];
-  const lastKey = last && (query.sort === 'updated' ? fromDbTimestamp(last.updated_at).toISOString() : (last.sort_key as SortKey));
+  const lastKey = last && (query.sort === 'updated' ? last.updatedAt.toISOString() : last.sortKey);
   const nextCursor = rows.length > query.pageSize && last ? encodeCursor([query.sort, query.sort === 'og' || query.sort === 'abv' ? Number(lastKey) : String(lastKey), last.id]) : null;
   return { items, nextCursor, pageSize: query.pageSize };
 }
