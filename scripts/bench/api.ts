@@ -47,6 +47,13 @@ interface Statement {
 }
 let recording: Statement[] | null = null;
 
+/**
+ * A statement's values as the baseline will send them after a trip through JSON: a Date (which
+ * mysql2 writes in the pool's UTC) becomes the same literal text, in lists too.
+ */
+const replayable = (value: unknown): unknown =>
+  value instanceof Date ? value.toISOString().replace('T', ' ').replace('Z', '') : Array.isArray(value) ? value.map(replayable) : value;
+
 /** Wraps the pool so every statement (outside or inside a transaction) is seen; works on any version of server/db/client.ts. */
 function recordOn(pool: Pool) {
   const wrap = (target: { query: (...a: never[]) => unknown; execute: (...a: never[]) => unknown }) => {
@@ -55,7 +62,7 @@ function recordOn(pool: Pool) {
       (target as Record<string, unknown>)[method] = (...args: unknown[]) => {
         const first = args[0] as string | { sql: string };
         const sql = typeof first === 'string' ? first : first.sql;
-        if (recording && !/^(begin|commit|rollback|start transaction|set )/i.test(sql.trim())) recording.push({ sql, params: (args[1] as unknown[]) ?? [] });
+        if (recording && !/^(begin|commit|rollback|start transaction|set )/i.test(sql.trim())) recording.push({ sql, params: ((args[1] as unknown[]) ?? []).map(replayable) });
         return original(...args);
       };
     }

@@ -84,6 +84,27 @@ async function snapshotFor(db: Db, actor: Actor, kind: InstrumentKind, instrumen
 /** The stored reading a write answers with, built once per database handle (server/db/prepared.ts). */
 const readingById = (db: DbOrTx) => db.select().from(brewReadings).where(eq(brewReadings.id, sql.placeholder('id')));
 
+/** A new brew-day reading, every column a placeholder (the values pass through each column's own encoding). */
+const insertReading = (db: DbOrTx) =>
+  db
+    .insert(brewReadings)
+    .values({
+      brewId: sql.placeholder('brewId'),
+      stage: sql.placeholder('stage'),
+      kind: sql.placeholder('kind'),
+      instrumentId: sql.placeholder('instrumentId'),
+      instrumentSnapshot: sql.placeholder('instrumentSnapshot'),
+      raw: sql.placeholder('raw'),
+      correctedValue: sql.placeholder('correctedValue'),
+      correction: sql.placeholder('correction'),
+      warnings: sql.placeholder('warnings'),
+      volumeL: sql.placeholder('volumeL'),
+      takenAt: sql.placeholder('takenAt'),
+      note: sql.placeholder('note'),
+      instrumentNote: sql.placeholder('instrumentNote'),
+    })
+    .$returningId();
+
 export async function addReading(db: Db, actor: Actor, brewId: number, body: ReadingBody): Promise<ReadingCreated> {
   const stored = await loadBrewForActor(db, actor, brewId, 'update');
   if (body.kind === 'souring_ph' && stored.row.targetsSnapshot.souringTargetPh == null) {
@@ -101,24 +122,21 @@ export async function addReading(db: Db, actor: Actor, brewId: number, body: Rea
     // The brew row first (inside lockAndCheckReadingLimit): the stage and updatedAt written below
     // would otherwise deadlock with a reading posted at the same moment (see server/db/locks.ts).
     await lockAndCheckReadingLimit(tx, brewId, 'brew');
-    const [{ id }] = await tx
-      .insert(brewReadings)
-      .values({
-        brewId,
-        stage,
-        kind: body.kind,
-        instrumentId: snapshot.instrumentId,
-        instrumentSnapshot: snapshot,
-        raw,
-        correctedValue: corrected,
-        correction,
-        warnings,
-        volumeL,
-        takenAt,
-        note: body.note,
-        instrumentNote: instrumentNoteKey({ id: 0, kind: body.kind, corrected, volumeL, instrument: snapshot, takenAt: takenAt.toISOString() }),
-      })
-      .$returningId();
+    const [{ id }] = await prepared(tx, insertReading).execute({
+      brewId,
+      stage,
+      kind: body.kind,
+      instrumentId: snapshot.instrumentId,
+      instrumentSnapshot: snapshot,
+      raw,
+      correctedValue: corrected,
+      correction,
+      warnings,
+      volumeL,
+      takenAt,
+      note: body.note ?? null,
+      instrumentNote: instrumentNoteKey({ id: 0, kind: body.kind, corrected, volumeL, instrument: snapshot, takenAt: takenAt.toISOString() }),
+    });
     await touchStage(tx, brewId, stage, takenAt);
     // The yeast went in: fermentation counts its days from here (the first pitch wins).
     if (body.kind === 'pitch_temp' && body.pitched && !stored.row.pitchedAt) {

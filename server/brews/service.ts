@@ -573,15 +573,19 @@ export async function setStage(db: DbOrTx, actor: Actor, id: number, stage: Brew
   });
 }
 
-/** A reading or decision in a stage starts that stage, if it was not started yet. The caller holds the brew row lock (lockBrewRow). */
-export async function touchStage(tx: DbOrTx, brewId: number, stage: BrewStage, at: Date) {
-  const [row] = await tx
+const stageOfBrew = (db: DbOrTx) =>
+  db
     .select()
     .from(brewStagesTable)
-    .where(and(eq(brewStagesTable.brewId, brewId), eq(brewStagesTable.stage, stage)));
+    .where(and(eq(brewStagesTable.brewId, sql.placeholder('brewId')), eq(brewStagesTable.stage, sql.placeholder('stage'))));
+const touchBrew = (db: DbOrTx) => db.update(brews).set({ updatedAt: sql`${sql.placeholder('at')}` }).where(eq(brews.id, sql.placeholder('brewId')));
+
+/** A reading or decision in a stage starts that stage, if it was not started yet. The caller holds the brew row lock (lockBrewRow). */
+export async function touchStage(tx: DbOrTx, brewId: number, stage: BrewStage, at: Date) {
+  const [row] = await prepared(tx, stageOfBrew).execute({ brewId, stage });
   if (!row) await tx.insert(brewStagesTable).values({ brewId, stage, startedAt: at });
   else if (!row.startedAt) await tx.update(brewStagesTable).set({ startedAt: at }).where(and(eq(brewStagesTable.brewId, brewId), eq(brewStagesTable.stage, stage)));
-  await tx.update(brews).set({ updatedAt: at }).where(eq(brews.id, brewId));
+  await prepared(tx, touchBrew).execute({ brewId, at });
 }
 
 /**

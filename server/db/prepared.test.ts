@@ -2,6 +2,7 @@ import { eq, sql } from 'drizzle-orm';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createHarness, type TestHarness } from '../../tests/support/api';
 import type { DbOrTx } from './client';
+import { createDb } from './client';
 import { makeUser } from './factories';
 import { inList, prepared } from './prepared';
 import { users } from './schema';
@@ -15,7 +16,7 @@ const userById = (db: DbOrTx) => db.select({ id: users.id, name: users.displayNa
 const usersByIds = (db: DbOrTx) => db.select({ id: users.id }).from(users).where(inList(users.id, 'ids')).orderBy(users.id);
 
 describe('prepared queries (server/db/prepared.ts)', () => {
-  it('builds a query once per database handle and fills its placeholders on each run', async () => {
+  it('builds a query once per handle and fills its placeholders on each run', async () => {
     const [a, b] = [await makeUser(h.ctx.db, { displayName: 'Prepared A' }), await makeUser(h.ctx.db, { displayName: 'Prepared B' })];
     expect(prepared(h.ctx.db, userById)).toBe(prepared(h.ctx.db, userById));
     expect(await prepared(h.ctx.db, userById).execute({ id: a.id })).toEqual([{ id: a.id, name: 'Prepared A' }]);
@@ -46,8 +47,25 @@ describe('prepared queries (server/db/prepared.ts)', () => {
     expect(seen).toEqual([expect.objectContaining({ name: 'Only in the transaction' })]);
   });
 
+  it('runs on each handle’s own pool, and its logger sees the statement', async () => {
+    const u = await makeUser(h.ctx.db, { displayName: 'Seen by the other handle' });
+    await prepared(h.ctx.db, userById).execute({ id: u.id });
+    const logged: string[] = [];
+    const other = createDb(h.ctx.env.DATABASE_URL, { poolSize: 1, logger: { logQuery: (query) => void logged.push(query) } });
+    try {
+      expect(prepared(other.db, userById)).not.toBe(prepared(h.ctx.db, userById));
+      expect(await prepared(other.db, userById).execute({ id: u.id })).toEqual([{ id: u.id, name: 'Seen by the other handle' }]);
+      expect(logged).toHaveLength(1);
+      expect(logged[0]).toMatch(/^select .* from `users` where `users`.`id` = \?$/);
+    } finally {
+      await other.pool.end();
+    }
+    // Ending the other pool leaves this handle's query working.
+    expect(await prepared(h.ctx.db, userById).execute({ id: u.id })).toHaveLength(1);
+  });
+
   it('refuses a builder made per call, which would grow the cache without end', () => {
-    const db = {} as DbOrTx;
+    const db = { session: {} } as unknown as DbOrTx;
     const fake = () => ({ prepare: () => ({}) });
     expect(() => {
       for (let i = 0; i < 1000; i++) prepared(db, () => fake());
