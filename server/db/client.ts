@@ -27,6 +27,9 @@ export function createDb(url: string, options: DbOptions = {}) {
     connectTimeout: 5_000,
     // DATETIME/TIMESTAMP values are UTC on both sides.
     timezone: 'Z',
+    // Dates and times arrive as text, as drizzle's own per-field typeCast makes them; prepared
+    // queries (prepared.ts) rely on this to skip that per-field call.
+    dateStrings: ['TIMESTAMP', 'DATETIME', 'DATE'],
     enableKeepAlive: true,
     trace: options.trace ?? true,
   });

@@ -13,6 +13,7 @@ beforeAll(async () => {
 });
 
 const userById = (db: DbOrTx) => db.select({ id: users.id, name: users.displayName }).from(users).where(eq(users.id, sql.placeholder('id')));
+const userCreatedAt = (db: DbOrTx) => db.select({ createdAt: users.createdAt }).from(users).where(eq(users.id, sql.placeholder('id')));
 const usersByIds = (db: DbOrTx) => db.select({ id: users.id }).from(users).where(inList(users.id, 'ids')).orderBy(users.id);
 
 describe('prepared queries (server/db/prepared.ts)', () => {
@@ -22,6 +23,16 @@ describe('prepared queries (server/db/prepared.ts)', () => {
     expect(await prepared(h.ctx.db, userById).execute({ id: a.id })).toEqual([{ id: a.id, name: 'Prepared A' }]);
     expect(await prepared(h.ctx.db, userById).execute({ id: b.id })).toEqual([{ id: b.id, name: 'Prepared B' }]);
     expect(await prepared(h.ctx.db, userById).execute({ id: -1 })).toEqual([]);
+  });
+
+  it('reads date and time columns as the unprepared query does (the pool gives them as text, drizzle maps them)', async () => {
+    const u = await makeUser(h.ctx.db);
+    const [plain] = await h.ctx.db.select({ createdAt: users.createdAt }).from(users).where(eq(users.id, u.id));
+    const [viaPrepared] = await prepared(h.ctx.db, userCreatedAt).execute({ id: u.id });
+    expect(plain.createdAt).toBeInstanceOf(Date);
+    expect(viaPrepared.createdAt).toEqual(plain.createdAt);
+    // Written a moment ago: read back as UTC, not shifted by a time zone.
+    expect(Math.abs(viaPrepared.createdAt.getTime() - Date.now())).toBeLessThan(10 * 60_000);
   });
 
   it('writes a list placeholder as an IN list of one or many ids', async () => {

@@ -26,6 +26,23 @@ const bound = new WeakMap<SessionState, Map<unknown, unknown>>();
 /** Far more than the queries in the code: more builders than this means one is made per call. */
 const MAX_BUILDERS = 500;
 
+/**
+ * drizzle asks mysql2 to call a typeCast function for every field of every row, only so that date
+ * and time columns arrive as text; the pool reads those as text itself (`dateStrings`, in
+ * client.ts), so a prepared query leaves the per-field call out and gets the same values.
+ */
+function withoutTypeCast<P extends object>(query: P): P {
+  const q = query as { query?: { typeCast?: unknown }; rawQuery?: { typeCast?: unknown } };
+  for (const key of ['query', 'rawQuery'] as const) {
+    const options = q[key];
+    if (options && typeof options.typeCast === 'function') {
+      const { typeCast: _drop, ...rest } = options;
+      q[key] = rest;
+    }
+  }
+  return query;
+}
+
 export function prepared<P extends object>(db: DbOrTx, build: (db: DbOrTx) => { prepare(): P }): P {
   const session = sessionOf(db);
   let byBuild = bound.get(session);
@@ -35,7 +52,7 @@ export function prepared<P extends object>(db: DbOrTx, build: (db: DbOrTx) => { 
   const template = templates.get(build) as P | undefined;
   if (!template) {
     if (templates.size >= MAX_BUILDERS) throw new Error('prepared(): `build` must be a module-level function, not one made per call');
-    query = build(db).prepare();
+    query = withoutTypeCast(build(db).prepare());
     templates.set(build, query);
   } else {
     // The same statement on another handle: a copy that runs on that handle's connection.
