@@ -2,7 +2,8 @@ import type { CookieOptions, NextFunction, Request, RequestHandler, Response } f
 import jwt from 'jsonwebtoken';
 import { createSecretKey, randomBytes, type KeyObject } from 'node:crypto';
 import { asc, eq, lt, sql, type SQL } from 'drizzle-orm';
-import type { Db } from '../db/client';
+import type { Db, DbOrTx } from '../db/client';
+import { prepared } from '../db/prepared';
 import { clubMemberships, clubs, revokedSessions, users, type User } from '../db/schema';
 import type { Env } from '../env';
 import { Unauthorized } from '../lib/errors';
@@ -81,9 +82,9 @@ export function clearSession(res: Response, env: Env) {
 /**
  * The user, their clubs and (given a session id) whether that session was signed out, in one
  * query, without the password hash. It runs on every signed-in request, so its SQL is built once
- * per database handle (Drizzle's prepared queries, with placeholders) rather than per request.
+ * (server/db/prepared.ts) rather than per request.
  */
-function buildSessionQuery(db: Db, revoked: SQL<number>) {
+function buildSessionQuery(db: DbOrTx, revoked: SQL<number>) {
   return db
     .select({
       id: users.id,
@@ -104,22 +105,14 @@ function buildSessionQuery(db: Db, revoked: SQL<number>) {
     .leftJoin(clubMemberships, eq(clubMemberships.userId, users.id))
     .leftJoin(clubs, eq(clubs.id, clubMemberships.clubId))
     .where(eq(users.id, sql.placeholder('userId')))
-    .orderBy(asc(clubs.name))
-    .prepare();
+    .orderBy(asc(clubs.name));
 }
-
-const sessionQueries = new WeakMap<Db, { withSession: ReturnType<typeof buildSessionQuery>; withoutSession: ReturnType<typeof buildSessionQuery> }>();
+const sessionWithId = (db: DbOrTx) =>
+  buildSessionQuery(db, sql<number>`exists(select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${sql.placeholder('sessionId')})`);
+const sessionWithoutId = (db: DbOrTx) => buildSessionQuery(db, sql<number>`0`);
 
 async function loadSessionRows(db: Db, userId: number, sessionId: string | null) {
-  let queries = sessionQueries.get(db);
-  if (!queries) {
-    queries = {
-      withSession: buildSessionQuery(db, sql<number>`exists(select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${sql.placeholder('sessionId')})`),
-      withoutSession: buildSessionQuery(db, sql<number>`0`),
-    };
-    sessionQueries.set(db, queries);
-  }
-  return sessionId === null ? queries.withoutSession.execute({ userId }) : queries.withSession.execute({ userId, sessionId });
+  return sessionId === null ? prepared(db, sessionWithoutId).execute({ userId }) : prepared(db, sessionWithId).execute({ userId, sessionId });
 }
 
 function toSessionUser(rows: Awaited<ReturnType<typeof loadSessionRows>>): SessionUser | null {
