@@ -39,74 +39,79 @@ async function findKey(db: Db, userId: number, key: string) {
 }
 
 export function idempotency(db: Db): RequestHandler {
-  return async (req: Request, res: Response, next: NextFunction) => {
+  // Most requests carry no key: they pass straight on, without an async step.
+  return (req: Request, res: Response, next: NextFunction) => {
     const key = req.get('Idempotency-Key');
     if (req.method !== 'POST' || key === undefined || !req.user) return next();
-    if (!KEY_PATTERN.test(key)) throw new BadRequest('The Idempotency-Key header must be 1 to 200 visible ASCII characters.');
-    const userId = req.user.id;
-    const request = `${req.method} ${req.originalUrl.split('?')[0]}`.slice(0, 300);
-    const now = new Date();
-
-    for (const deadline = Date.now() + WAIT_FOR_FIRST_MS; ; ) {
-      const row = await findKey(db, userId, key);
-      if (row && row.expiresAt.getTime() <= now.getTime()) {
-        await db.delete(idempotencyKeys).where(eq(idempotencyKeys.id, row.id));
-        continue;
-      }
-      if (row) {
-        if (row.request !== request) throw new KeyReused();
-        if (row.status !== null) {
-          res.set('Idempotent-Replayed', 'true');
-          if (row.status === 204 || row.body === null) res.status(row.status).end();
-          else res.status(row.status).json(row.body);
-          return;
-        }
-        if (Date.now() > deadline) throw new StillRunning();
-        await sleep(100);
-        continue;
-      }
-      try {
-        await db.insert(idempotencyKeys).values({ userId, key, request, expiresAt: new Date(now.getTime() + IDEMPOTENCY_TTL_MS) });
-        break;
-      } catch (error) {
-        if (!isDuplicateKey(error)) throw error;
-        // Another request with the key claimed it a moment ago: wait for its answer.
-      }
-    }
-    // Now and then, drop expired keys (any instance may do it).
-    if (Math.random() < 0.01) void db.delete(idempotencyKeys).where(lt(idempotencyKeys.expiresAt, now)).catch(() => {});
-
-    let settled = false;
-    const forget = () => db.delete(idempotencyKeys).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)));
-    const keep = (status: number) => status < 500 && status !== 429;
-    // The answer is stored before it is sent, so a retry never finds the key without it.
-    const send = res.json.bind(res);
-    res.json = (body: unknown) => {
-      if (settled) return send(body);
-      settled = true;
-      const status = res.statusCode;
-      const store = keep(status)
-        ? db.update(idempotencyKeys).set({ status, body: body ?? null }).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)))
-        : forget();
-      store.then(
-        () => send(body),
-        () => send(body),
-      );
-      return res;
-    };
-    res.on('finish', () => {
-      if (settled) return;
-      settled = true;
-      // Answered without JSON (204 and the like): keep the status, or free the key for a retry.
-      const status = res.statusCode;
-      void (keep(status) ? db.update(idempotencyKeys).set({ status, body: null }).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key))) : forget()).catch(() => {});
-    });
-    res.on('close', () => {
-      if (!settled) {
-        settled = true;
-        void forget().catch(() => {});
-      }
-    });
-    next();
+    return claimKey(db, key, req.user.id, req, res, next);
   };
+}
+
+/** Claims `key` for this request (or answers with what the first request with it got). */
+async function claimKey(db: Db, key: string, userId: number, req: Request, res: Response, next: NextFunction) {
+  if (!KEY_PATTERN.test(key)) throw new BadRequest('The Idempotency-Key header must be 1 to 200 visible ASCII characters.');
+  const request = `${req.method} ${req.originalUrl.split('?')[0]}`.slice(0, 300);
+  const now = new Date();
+
+  for (const deadline = Date.now() + WAIT_FOR_FIRST_MS; ; ) {
+    const row = await findKey(db, userId, key);
+    if (row && row.expiresAt.getTime() <= now.getTime()) {
+      await db.delete(idempotencyKeys).where(eq(idempotencyKeys.id, row.id));
+      continue;
+    }
+    if (row) {
+      if (row.request !== request) throw new KeyReused();
+      if (row.status !== null) {
+        res.set('Idempotent-Replayed', 'true');
+        if (row.status === 204 || row.body === null) res.status(row.status).end();
+        else res.status(row.status).json(row.body);
+        return;
+      }
+      if (Date.now() > deadline) throw new StillRunning();
+      await sleep(100);
+      continue;
+    }
+    try {
+      await db.insert(idempotencyKeys).values({ userId, key, request, expiresAt: new Date(now.getTime() + IDEMPOTENCY_TTL_MS) });
+      break;
+    } catch (error) {
+      if (!isDuplicateKey(error)) throw error;
+      // Another request with the key claimed it a moment ago: wait for its answer.
+    }
+  }
+  // Now and then, drop expired keys (any instance may do it).
+  if (Math.random() < 0.01) void db.delete(idempotencyKeys).where(lt(idempotencyKeys.expiresAt, now)).catch(() => {});
+
+  let settled = false;
+  const forget = () => db.delete(idempotencyKeys).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)));
+  const keep = (status: number) => status < 500 && status !== 429;
+  // The answer is stored before it is sent, so a retry never finds the key without it.
+  const send = res.json.bind(res);
+  res.json = (body: unknown) => {
+    if (settled) return send(body);
+    settled = true;
+    const status = res.statusCode;
+    const store = keep(status)
+      ? db.update(idempotencyKeys).set({ status, body: body ?? null }).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)))
+      : forget();
+    store.then(
+      () => send(body),
+      () => send(body),
+    );
+    return res;
+  };
+  res.on('finish', () => {
+    if (settled) return;
+    settled = true;
+    // Answered without JSON (204 and the like): keep the status, or free the key for a retry.
+    const status = res.statusCode;
+    void (keep(status) ? db.update(idempotencyKeys).set({ status, body: null }).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key))) : forget()).catch(() => {});
+  });
+  res.on('close', () => {
+    if (!settled) {
+      settled = true;
+      void forget().catch(() => {});
+    }
+  });
+  next();
 }
