@@ -1,5 +1,6 @@
 import type { CookieOptions, NextFunction, Request, RequestHandler, Response } from 'express';
 import jwt from 'jsonwebtoken';
+import { LRUCache } from 'lru-cache';
 import { createSecretKey, randomBytes, type KeyObject } from 'node:crypto';
 import { asc, eq, lt, sql, type SQL } from 'drizzle-orm';
 import type { Db, DbOrTx } from '../db/client';
@@ -140,6 +141,34 @@ export async function loadSessionUser(db: Db, userId: number): Promise<SessionUs
 
 const SESSION_ID = /^[A-Za-z0-9_-]{22}$/;
 
+/** Far more signed-in devices than one instance serves at once; an evicted token is only checked again. */
+const VERIFIED_TOKENS = 10_000;
+
+/**
+ * Checks a session token's signature and expiry, remembering the tokens that passed until they
+ * expire: the same token text always gives the same answer with the same key, and checking it
+ * (decoding, HMAC, claims) cost more than the rest of a signed-in request's own work (issue 14).
+ * Only a token that passed is kept, and its expiry is checked again on every use; the database
+ * check after it (token version, signed-out session) still runs on every request, so signing out
+ * takes effect at once. Null for a token that fails.
+ */
+function tokenVerifier(env: Env): (token: string) => TokenPayload | null {
+  const key = sessionKey(env);
+  const passed = new LRUCache<string, TokenPayload>({ max: VERIFIED_TOKENS });
+  return (token) => {
+    const known = passed.get(token);
+    if (known) return typeof known.exp === 'number' && known.exp * 1000 > Date.now() ? known : null;
+    let payload: TokenPayload;
+    try {
+      payload = jwt.verify(token, key, { algorithms: ['HS256'] }) as TokenPayload;
+    } catch {
+      return null;
+    }
+    if (typeof payload.exp === 'number') passed.set(token, payload, { ttl: Math.max(1, payload.exp * 1000 - Date.now()) });
+    return payload;
+  };
+}
+
 /**
  * Reads the signed cookie and loads the user. The token carries the id, a version (bumped to
  * sign out everywhere) and a session id (listed when this device signs out), so any instance can
@@ -147,14 +176,13 @@ const SESSION_ID = /^[A-Za-z0-9_-]{22}$/;
  * one is needed), never a 500.
  */
 export function loadUser(db: Db, env: Env): RequestHandler {
+  const verify = tokenVerifier(env);
   return async (req: Request, res: Response, next: NextFunction) => {
     req.user = null;
     const token = req.cookies?.[SESSION_COOKIE];
     if (typeof token !== 'string') return next();
-    let payload: TokenPayload;
-    try {
-      payload = jwt.verify(token, sessionKey(env), { algorithms: ['HS256'] }) as TokenPayload;
-    } catch {
+    const payload = verify(token);
+    if (!payload) {
       clearSession(res, env);
       return next();
     }

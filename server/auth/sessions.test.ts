@@ -1,6 +1,6 @@
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { makeUser } from '../db/factories';
 import { createHarness, type TestHarness } from '../../tests/support/api';
 import { SESSION_COOKIE } from './session';
@@ -60,5 +60,37 @@ describe('signing out', () => {
     }
     // The same secret with a proper subject is a session (the test secret is the configured one).
     expect((await me(sign({ tv: 0 }, { subject: String(user.id) }))).status).toBe(200);
+  });
+});
+
+describe('checking the token (remembered once it passed)', () => {
+  afterEach(() => {
+    vi.useRealTimers();
+  });
+
+  const sign = (payload: object, secret: string, options: jwt.SignOptions = {}) =>
+    `${SESSION_COOKIE}=${jwt.sign(payload, secret, { algorithm: 'HS256', expiresIn: '1h', ...options })}`;
+
+  it('still refuses a token once it expires, though it passed before', async () => {
+    const user = await makeUser(h.ctx.db);
+    const cookie = sign({ tv: 0 }, h.ctx.env.JWT_SECRET, { subject: String(user.id) });
+    expect((await me(cookie)).status).toBe(200);
+    expect((await me(cookie)).status).toBe(200);
+    // Only the clock moves: an hour and a second later the same token is no session.
+    vi.useFakeTimers({ toFake: ['Date'], now: Date.now() + 3_601_000 });
+    const res = await me(cookie);
+    expect(res.status).toBe(401);
+    expect(String(res.headers['set-cookie'])).toContain(`${SESSION_COOKIE}=;`);
+  });
+
+  it('refuses a token altered after one like it passed, or signed with another secret', async () => {
+    const user = await makeUser(h.ctx.db);
+    const cookie = sign({ tv: 0 }, h.ctx.env.JWT_SECRET, { subject: String(user.id) });
+    expect((await me(cookie)).status).toBe(200);
+    const [head, body, signature] = cookie.split('.');
+    const otherUser = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(body, 'base64url').toString()), sub: String(user.id + 1) })).toString('base64url');
+    expect((await me([head, otherUser, signature].join('.'))).status).toBe(401);
+    expect((await me(sign({ tv: 0 }, 'another-secret-of-at-least-thirty-two-chars', { subject: String(user.id) }))).status).toBe(401);
+    expect((await me(cookie)).status).toBe(200);
   });
 });
