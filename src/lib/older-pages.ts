@@ -1,9 +1,33 @@
 /**
  * A log that opens with its latest entries and pages back on request (brew-day readings,
  * fermentation readings): the entries on screen from the log's own and the older pages of its
- * `useInfiniteQuery`, each once, in time order. Each feature keeps its own query options.
+ * `useInfiniteQuery`, each once, in time order. Each feature names its own query key and fetch.
  */
+import { infiniteQueryOptions, type InfiniteData, type QueryClient } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
+
+/**
+ * The older pages of a log, newest page first, from `from` (where the log's own entries start:
+ * part of the key, so a reloaded log starts its older pages afresh). Fetched only when the brewer
+ * asks: the log opens with its latest entries.
+ */
+export function olderPagesQueryOptions<T>(key: readonly unknown[], from: string | null, fetchPage: (cursor: string | undefined, signal: AbortSignal) => Promise<Page<T>>) {
+  return infiniteQueryOptions({
+    queryKey: [...key, from],
+    queryFn: ({ signal, pageParam }) => fetchPage(pageParam ?? undefined, signal),
+    initialPageParam: from,
+    getNextPageParam: (last) => last.nextCursor,
+    enabled: false,
+  });
+}
+
+/** Takes entry `id` out of every older page cached under `key` (after the server deleted it), instead of fetching them again. */
+export function dropFromOlderPages(queryClient: QueryClient, key: readonly unknown[], id: number) {
+  queryClient.setQueriesData<InfiniteData<Page<{ id: number }>>>(
+    { queryKey: key },
+    (older) => older && { ...older, pages: older.pages.map((p) => ({ ...p, items: p.items.filter((r) => r.id !== id) })) },
+  );
+}
 
 /** What this needs of a `useInfiniteQuery` result over pages of `T`. */
 export interface OlderPagesQuery<T> {

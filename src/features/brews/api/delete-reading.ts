@@ -1,6 +1,7 @@
-import { useMutation, useQueryClient, type InfiniteData } from '@tanstack/react-query';
-import type { BrewDetail, BrewReadingPage, ReadingDeleted } from '@shared/schemas/brews';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { BrewDetail, ReadingDeleted } from '@shared/schemas/brews';
 import { api } from '@/lib/api-client';
+import { dropFromOlderPages } from '@/lib/older-pages';
 import { brewKeys } from './keys';
 
 export const deleteReading = (brewId: number, readingId: number) => api.delete<ReadingDeleted>(`/api/brews/${brewId}/readings/${readingId}`);
@@ -21,10 +22,7 @@ export function useDeleteReading(brewId: number) {
       const had = queryClient.getQueryData<BrewDetail>(brewKeys.detail(brewId));
       if (had) queryClient.setQueryData(brewKeys.detail(brewId), withoutReading(had, deleted));
       else void queryClient.invalidateQueries({ queryKey: brewKeys.detail(brewId) });
-      queryClient.setQueriesData<InfiniteData<BrewReadingPage>>(
-        { queryKey: brewKeys.olderReadings(brewId) },
-        (older) => older && { ...older, pages: older.pages.map((p) => ({ ...p, items: p.items.filter((r) => r.id !== deleted.readingId) })) },
-      );
+      dropFromOlderPages(queryClient, brewKeys.olderReadings(brewId), deleted.readingId);
       return queryClient.invalidateQueries({ queryKey: brewKeys.lists() });
     },
   });

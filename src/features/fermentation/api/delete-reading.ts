@@ -1,6 +1,7 @@
-import { useMutation, useQueryClient, type InfiniteData, type QueryClient } from '@tanstack/react-query';
-import type { FermentationLog, FermentationReadingDeleted, FermentationReadingPage } from '@shared/schemas/fermentation';
+import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { FermentationLog, FermentationReadingDeleted } from '@shared/schemas/fermentation';
 import { api } from '@/lib/api-client';
+import { dropFromOlderPages } from '@/lib/older-pages';
 import { fermentationKeys } from './keys';
 
 export const deleteFermentationReading = (brewId: number, readingId: number) =>
@@ -16,10 +17,7 @@ export function withoutFermentationReading(log: FermentationLog, deleted: Fermen
 /** Drops the reading wherever the page holds it (the log's latest readings, its series, an older page), instead of reloading the log. */
 function applyDeleted(queryClient: QueryClient, brewId: number, deleted: FermentationReadingDeleted) {
   queryClient.setQueryData<FermentationLog>(fermentationKeys.log(brewId), (log) => log && withoutFermentationReading(log, deleted));
-  queryClient.setQueriesData<InfiniteData<FermentationReadingPage>>(
-    { queryKey: fermentationKeys.olderReadings(brewId) },
-    (older) => older && { ...older, pages: older.pages.map((p) => ({ ...p, items: p.items.filter((r) => r.id !== deleted.readingId) })) },
-  );
+  dropFromOlderPages(queryClient, fermentationKeys.olderReadings(brewId), deleted.readingId);
 }
 
 export function useDeleteFermentationReading(brewId: number) {

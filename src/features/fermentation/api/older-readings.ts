@@ -1,26 +1,18 @@
-import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
+import { useInfiniteQuery } from '@tanstack/react-query';
 import { READINGS_WINDOW } from '@shared/schemas/brews';
 import type { FermentationLog, FermentationReading, FermentationReadingPage, FermentationReadingsQuery } from '@shared/schemas/fermentation';
 import { api, toQuery } from '@/lib/api-client';
-import { withOlderPages, type LoadedLog } from '@/lib/older-pages';
+import { olderPagesQueryOptions, withOlderPages, type LoadedLog } from '@/lib/older-pages';
 import { fermentationKeys } from './keys';
 
 export const listFermentationReadings = (brewId: number, query: FermentationReadingsQuery, signal?: AbortSignal) =>
   api.get<FermentationReadingPage>(`/api/brews/${brewId}/fermentation/readings${toQuery({ ...query })}`, { signal });
 
-/**
- * The readings before those the log came with, a page at a time, newest page first. Keyed by
- * where the log's own readings start, so a reloaded log starts its older pages afresh.
- */
+/** The readings before those the log came with, a page at a time (src/lib/older-pages.ts). */
 export const olderFermentationReadingsQueryOptions = (brewId: number, from: string | null) =>
-  infiniteQueryOptions({
-    queryKey: [...fermentationKeys.olderReadings(brewId), from] as const,
-    queryFn: ({ signal, pageParam }) => listFermentationReadings(brewId, { cursor: pageParam ?? undefined, pageSize: READINGS_WINDOW }, signal),
-    initialPageParam: from,
-    getNextPageParam: (last) => last.nextCursor,
-    // Asked for only when the brewer wants older readings: the log opens with the latest ones.
-    enabled: false,
-  });
+  olderPagesQueryOptions(fermentationKeys.olderReadings(brewId), from, (cursor, signal) =>
+    listFermentationReadings(brewId, { cursor, pageSize: READINGS_WINDOW }, signal),
+  );
 
 /** The readings on screen: the log's latest, and the older pages the brewer asked for (each reading once). */
 export type LoadedFermentationReadings = LoadedLog<FermentationReading>;
