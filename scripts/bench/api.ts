@@ -6,7 +6,9 @@
  *   bare node:http + mysql2 process (scripts/bench/bare-server.ts) on free loopback ports.
  * - The baseline runs the very statements Wortwise ran for the same request on the same rows
  *   (recorded here by wrapping the mysql2 pool), one after the other; the public calculation's
- *   baseline calls the same shared function.
+ *   baseline calls the same shared function. A third process, the smallest Express app serving
+ *   that calculation (scripts/bench/express-floor.ts), is measured beside them as a reference row:
+ *   what the framework alone costs against the same baseline.
  * - autocannon, 50 connections, runs interleaved (Wortwise, baseline, baseline, Wortwise…); CPU per
  *   request is read from /proc for each server process.
  * - Growth: median of sequential requests with small and large data (100,000 recipes of other
@@ -282,6 +284,17 @@ async function main() {
     const bareBase = `http://127.0.0.1:${barePort}`;
     await waitFor(`${wwBase}/api/health`, ww);
     await waitFor(`${bareBase}/replay/health`, bare);
+    // The public calculation is also run on the smallest Express app that serves it: a reference
+    // row showing what the framework alone costs against the same bare baseline.
+    const floorPort = await freePort();
+    const expressFloor = spawn(process.execPath, ['--import', 'tsx', path.join(import.meta.dirname, 'express-floor.ts')], {
+      cwd: projectRoot,
+      env: { ...childEnv, PORT: String(floorPort) },
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
+    children.push(expressFloor);
+    const floorBase = `http://127.0.0.1:${floorPort}`;
+    await waitFor(`${floorBase}/ready`, expressFloor);
     local.close();
 
     // --- Growth: small data first (before the 100,000 recipes arrive).
@@ -308,24 +321,22 @@ async function main() {
     growth.recipes.large = await timed(brewer, '/api/recipes?pageSize=20');
 
     // --- Throughput, interleaved.
-    const results: Record<string, { ww: RunResult[]; bare: RunResult[] }> = {};
+    const results: Record<string, { ww: RunResult[]; bare: RunResult[]; express: RunResult[] }> = {};
     // BENCH_ONLY=write,queue limits the throughput runs (the growth checks always run).
     const only = process.env.BENCH_ONLY?.split(',');
     const measured = Object.entries(endpoints).filter(([name]) => !only || only.includes(name));
     for (const [name, e] of measured) {
-      results[name] = { ww: [], bare: [] };
+      results[name] = { ww: [], bare: [], express: [] };
       const bareTarget = 'bare' in e ? e.bare : { method: e.method, url: `/replay/${name}` };
       const body = 'body' in e ? JSON.stringify(e.body) : undefined;
       for (let round = 0; round < ROUNDS; round++) {
         const runWw = async () => results[name].ww.push(await load({ url: `${wwBase}${e.url}`, method: e.method, body, cookie: e.client.cookie }, ww.pid!));
         const runBare = async () => results[name].bare.push(await load({ url: `${bareBase}${bareTarget.url}`, method: bareTarget.method, body }, bare.pid!));
-        if (round % 2 === 0) {
-          await runWw();
-          await runBare();
-        } else {
-          await runBare();
-          await runWw();
-        }
+        const runExpress = async () => {
+          if (name === 'calc') results[name].express.push(await load({ url: `${floorBase}/calc`, method: 'POST', body }, expressFloor.pid!));
+        };
+        const order = [runWw, runBare, runExpress];
+        for (const run of round % 2 === 0 ? order : order.reverse()) await run();
         if (name === 'write') await settle();
         if (name === 'write') await pool.query('delete from brew_readings where brew_id = ? and id > (select m from (select min(id) m from brew_readings where brew_id = ?) x)', [writeBrew, writeBrew]);
       }
@@ -350,7 +361,12 @@ async function main() {
       const cpu = avg(r.ww, 'cpuMsPerReq');
       const baseCpu = avg(r.bare, 'cpuMsPerReq');
       rows.push([`${name} CPU ms/request`, cpu.toFixed(3), baseCpu.toFixed(3), (cpu / baseCpu).toFixed(2), '', '']);
-      const errors = avg(r.ww, 'errors') + avg(r.bare, 'errors');
+      if (r.express.length > 0) {
+        const floorRatio = avg(r.express, 'rps') / baseRps;
+        rows.push([`${name} req/s, smallest Express app (reference)`, avg(r.express, 'rps').toFixed(0), baseRps.toFixed(0), floorRatio.toFixed(2), '', 'info']);
+        rows.push([`${name} CPU ms/request, smallest Express app`, avg(r.express, 'cpuMsPerReq').toFixed(3), baseCpu.toFixed(3), (avg(r.express, 'cpuMsPerReq') / baseCpu).toFixed(2), '', '']);
+      }
+      const errors = avg(r.ww, 'errors') + avg(r.bare, 'errors') + (r.express.length ? avg(r.express, 'errors') : 0);
       if (errors > 0) rows.push([`${name} errors (non-2xx)`, avg(r.ww, 'errors').toFixed(0), avg(r.bare, 'errors').toFixed(0), '', '0', 'FAIL']);
     }
     for (const g of Object.values(growth)) {
