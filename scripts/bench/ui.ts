@@ -100,6 +100,8 @@ interface Transfer {
   bytes: number;
   scripts: number;
   encodings: Set<string>;
+  /** Of `bytes`, the framework chunk's (React, React Router, TanStack Query: vite.config.ts's `framework` group). */
+  frameworkBytes: number;
 }
 
 /** Loads urlPath cold in the page and sums the encoded body size of every script response until the network is idle. */
@@ -124,15 +126,18 @@ async function scriptTransfer(page: Page, urlPath: string, ready: (page: Page) =
   await page.waitForLoadState('networkidle');
   await cdp.detach();
   let bytes = 0;
+  let frameworkBytes = 0;
   const listed: [string, number][] = [];
   for (const id of scripts.keys()) {
     const body = Math.max(0, (sizes.get(id) ?? 0) - (headerBytes.get(id) ?? 0));
+    const pathname = new URL(urls.get(id) ?? '', 'http://x').pathname;
     bytes += body;
-    listed.push([new URL(urls.get(id) ?? '', 'http://x').pathname, body]);
+    if (/^\/assets\/framework-[\w-]+\.js$/.test(pathname)) frameworkBytes += body;
+    listed.push([pathname, body]);
   }
   // BENCH_LIST_SCRIPTS=1 prints each script of the load with its bytes on the wire, largest first.
   if (process.env.BENCH_LIST_SCRIPTS) console.log(`\n${urlPath}:\n${listed.sort((a, b) => b[1] - a[1]).map(([u, n]) => `  ${(n / 1000).toFixed(1).padStart(6)} kB  ${u}`).join('\n')}`);
-  return { bytes, scripts: scripts.size, encodings: new Set(scripts.values()) };
+  return { bytes, scripts: scripts.size, encodings: new Set(scripts.values()), frameworkBytes };
 }
 
 /**
@@ -324,6 +329,10 @@ async function main() {
       const ratio = kb / floorKb;
       rows.push([`${what} (${transfers[name][0].scripts} scripts)`, kb.toFixed(1), floorKb.toFixed(1), ratio.toFixed(2), `≤ ${limit}`, verdict(ratio <= limit, ratio)]);
     }
+    // A reference row: Wortwise's framework chunk alone against the whole floor app, so a reader
+    // can see how much of each page's budget is left for Wortwise's own code.
+    const frameworkKb = transfers.first.reduce((n, t) => n + t.frameworkBytes, 0) / transfers.first.length / 1000;
+    rows.push(['JS gzipped kB, of which the framework chunk (reference)', frameworkKb.toFixed(1), floorKb.toFixed(1), (frameworkKb / floorKb).toFixed(2), '', 'info']);
     const keyRow = (what: string, q: number, limit: number) => {
       const ms = quantile(checkKeys, q);
       const base = quantile(floorKeys, q);
