@@ -4,7 +4,7 @@
  * @type {import('tailwindcss').Config}
  */
 export default {
-  content: ['./index.html', './src/**/*.{ts,tsx}'],
+  content: ['./index.html', './late-boil-check.html', './src/**/*.{ts,tsx}'],
   theme: {
     extend: {
       fontFamily: {

@@ -78,8 +78,10 @@ export default defineConfig({
       },
       workbox: {
         // The shell, every route chunk, styles and the Latin and Latin Extended fonts; not source maps or other scripts' fonts.
+        // Not the public check's own page either: once the worker is installed, every page, that
+        // one included, opens in the app (the navigation fallback), signed in or not and offline.
         globPatterns: ['**/*.{js,css,html,svg,png,webmanifest}', 'assets/*-latin-*.woff2'],
-        globIgnores: ['**/*.map', '.vite/**'],
+        globIgnores: ['**/*.map', '.vite/**', 'late-boil-check.html'],
         navigateFallback: '/index.html',
         navigateFallbackDenylist: [/^\/api\//],
         // The first install takes the open page at once (nothing to swap under it); later versions wait for "reload".
@@ -108,15 +110,17 @@ export default defineConfig({
     sourcemap: 'hidden',
     manifest: true,
     rolldownOptions: {
+      // Two pages: the app, and the public late-boil check's own page for visitors without a session
+      // (src/public-check.tsx, decision 0026), which leaves the router and the app shell out.
+      input: { index: path.resolve(import.meta.dirname, 'index.html'), 'late-boil-check': path.resolve(import.meta.dirname, 'late-boil-check.html') },
       output: {
         codeSplitting: {
           groups: [
-            // Every page needs the framework: one chunk, cached once, instead of pieces spread over
-            // whichever shared chunks happened to import them first.
-            { name: 'framework', test: /node_modules[\\/](react|react-dom|scheduler|react-router|@tanstack[\\/](query-core|react-query))[\\/]/, priority: 2 },
-            // The app shell every page starts with (router, layout, api client), as one chunk rather than
-            // several small ones: fewer requests, and gzip compresses one file better than five.
-            { name: 'shell', tags: ['$initial'], priority: 1 },
+            // Every page needs the framework: chunks cached once, instead of pieces spread over
+            // whichever shared chunks happened to import them first. The router is a chunk of its
+            // own, since the public check's page needs React and the query cache only.
+            { name: 'framework', test: /node_modules[\\/](react|react-dom|scheduler|@tanstack[\\/](query-core|react-query))[\\/]/, priority: 3 },
+            { name: 'router', test: /node_modules[\\/]react-router[\\/]/, priority: 2 },
           ],
         },
       },

@@ -9,7 +9,7 @@ import helmet from 'helmet';
 import { adminRouter } from './admin/router';
 import { authRouter } from './auth/router';
 import { brewsRouter } from './brews/router';
-import { loadUser } from './auth/session';
+import { loadUser, SESSION_COOKIE } from './auth/session';
 import type { AppContext, RouterContext } from './context';
 import { clubsRouter, invitationsRouter } from './clubs/router';
 import { calcRouter } from './calc/router';
@@ -27,6 +27,9 @@ import { recipesRouter } from './recipes/router';
 import { brewReviewRouter, commentsRouter, reviewsRouter } from './reviews/router';
 
 const defaultClientDist = path.resolve(import.meta.dirname, '..', 'dist');
+
+/** Whether a request's Cookie header carries the session cookie (whatever its value). */
+const hasSessionCookie = (header: string | undefined) => header !== undefined && header.split(';').some((part) => part.trimStart().startsWith(`${SESSION_COOKIE}=`));
 
 export function createApp(ctx: AppContext) {
   const { env, db } = ctx;
@@ -101,6 +104,16 @@ export function createApp(ctx: AppContext) {
       expressStaticGzip(path.join(clientDist, 'assets'), { ...precompressed, serveStatic: { immutable: true, maxAge: '1y', index: false, fallthrough: false } }),
     );
     app.use(expressStaticGzip(clientDist, { ...precompressed, serveStatic: { maxAge: '1h', index: false } }));
+    // A visitor without a session gets the public late-boil check as its own small page (no router,
+    // no app shell: decision 0026); with a session cookie, the app's page. Two pages at one address:
+    // caches keep them apart by the cookie, and neither is ever answered "not modified" for the other.
+    if (existsSync(path.join(clientDist, 'late-boil-check.html'))) {
+      app.get('/late-boil-check', (req, res) => {
+        const page = hasSessionCookie(req.headers.cookie) ? 'index.html' : 'late-boil-check.html';
+        res.vary('Cookie');
+        res.set('Cache-Control', 'no-cache').sendFile(page, { root: clientDist, lastModified: false });
+      });
+    }
     app.get('/{*path}', (_req, res) => {
       res.set('Cache-Control', 'no-cache').sendFile('index.html', { root: clientDist });
     });

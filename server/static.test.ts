@@ -12,6 +12,7 @@ const dist = mkdtempSync(path.join(tmpdir(), 'wortwise-dist-'));
 const js = `export const answer = ${JSON.stringify('x'.repeat(4000))};\n`;
 mkdirSync(path.join(dist, 'assets'));
 writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Wortwise</title><div id="root"></div>');
+writeFileSync(path.join(dist, 'late-boil-check.html'), '<!doctype html><title>Late-boil check · Wortwise</title><div id="root"></div>');
 writeFileSync(path.join(dist, 'assets', 'app-abc123.js'), js);
 writeFileSync(path.join(dist, 'assets', 'app-abc123.js.br'), brotliCompressSync(js));
 writeFileSync(path.join(dist, 'assets', 'app-abc123.js.gz'), gzipSync(js));
@@ -60,6 +61,29 @@ describe('serving the built client', () => {
     // Pages get helmet's default policy (helmet's README: "default-src 'self'" first).
     expect(page.headers['content-security-policy']).toMatch(/^default-src 'self'/);
     expect(page.headers['x-content-type-options']).toBe('nosniff');
+  });
+
+  it('gives a visitor without a session the public check’s own page, and a signed-in brewer the app', async () => {
+    const visitor = await request(h.app).get('/late-boil-check').expect(200);
+    expect(visitor.text).toContain('<title>Late-boil check · Wortwise</title>');
+    expect(visitor.headers['cache-control']).toBe('no-cache');
+    expect(visitor.headers['content-security-policy']).toMatch(/^default-src 'self'/);
+    // Other cookies do not make a visitor a brewer.
+    const other = await request(h.app).get('/late-boil-check').set('Cookie', 'theme=dark; wortwise_sessionx=1').expect(200);
+    expect(other.text).toContain('<title>Late-boil check · Wortwise</title>');
+
+    // The same address answers two pages: caches must key them by the cookie and not revalidate one
+    // with the other's date.
+    expect(visitor.headers['vary']).toMatch(/Cookie/);
+    expect(visitor.headers['last-modified']).toBeUndefined();
+
+    const user = await makeUser(h.ctx.db);
+    const agent = await h.signIn(user.email);
+    const app = await agent.get('/late-boil-check').set('If-Modified-Since', new Date(Date.now() + 60_000).toUTCString()).expect(200);
+    expect(app.text).toContain('<title>Wortwise</title>');
+    expect(app.headers['vary']).toMatch(/Cookie/);
+    // Any other path is the app's, with or without a session.
+    expect((await request(h.app).get('/late-boil-check/more').expect(200)).text).toContain('<title>Wortwise</title>');
   });
 
   it('compresses larger API answers for clients that accept it', async () => {

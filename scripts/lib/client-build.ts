@@ -8,7 +8,7 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
-const inputs = ['src', 'shared', 'public', 'index.html', 'vite.config.ts', 'tsconfig.json', 'tailwind.config.js', 'package-lock.json'];
+const inputs = ['src', 'shared', 'public', 'index.html', 'late-boil-check.html', 'vite.config.ts', 'tsconfig.json', 'tailwind.config.js', 'package-lock.json'];
 
 function filesUnder(root: string, rel: string): string[] {
   const full = path.join(root, rel);

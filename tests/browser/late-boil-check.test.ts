@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { newPage, useBrowser } from '../support/browser';
+import { demoPassword, demoPeople } from '../../server/db/seed';
+import { newPage, signInViaApi, useBrowser } from '../support/browser';
 
 const b = useBrowser();
 
@@ -73,6 +74,37 @@ describe('the public late-boil check, on a phone-sized window', () => {
     await page.getByRole('alert').filter({ hasText: 'Brix 60 is outside 0 to 40 °Bx' }).waitFor();
     await expect(page.getByRole('article').count()).resolves.toBe(0);
     await expect(page.getByLabel('Wort in the kettle (hot)').inputValue()).resolves.toBe('26');
+    await context.close();
+  });
+
+  it('serves a visitor the check as its own page, without the router, with links into the app; a brewer gets it inside the app', async () => {
+    const { page, context, errors } = await newPage(b.browser);
+    const scripts: string[] = [];
+    page.on('response', (r) => {
+      if (r.request().resourceType() === 'script') scripts.push(new URL(r.url()).pathname);
+    });
+    await page.goto('/late-boil-check');
+    await page.getByRole('heading', { name: 'Late-boil check', level: 1 }).waitFor();
+    await page.waitForLoadState('networkidle');
+    await expect(page.title()).resolves.toBe('Late-boil check · Wortwise');
+    // The check runs on React and the query cache; the router's chunk is never fetched.
+    expect(scripts.some((s) => /^\/assets\/framework-/.test(s))).toBe(true);
+    expect(scripts.filter((s) => /^\/assets\/router-/.test(s))).toEqual([]);
+    // Its links are plain links into the app.
+    await page.getByRole('banner').getByRole('link', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'Sign in to Wortwise', level: 1 }).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+
+    // Signed in, the same address is the app's page: its navigation, the brewer's own units.
+    await signInViaApi(context, demoPeople.brewer.email, demoPassword);
+    await page.goto('/late-boil-check');
+    await page.getByRole('heading', { name: 'Late-boil check', level: 1 }).waitFor();
+    await expect(page.title()).resolves.toBe('Wortwise');
+    // The app's header: the brewer's sections behind the phone's menu button, no "Sign in".
+    await expect(page.getByRole('banner').getByRole('button', { name: 'Menu' }).count()).resolves.toBe(1);
+    await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('radio', { name: 'Litres, kg' }).count()).resolves.toBe(0);
+    expect(errors.filter((e) => !/Failed to load resource/.test(e))).toEqual([]);
     await context.close();
   });
 });

@@ -13,7 +13,7 @@ import { instrumentsQueryOptions } from '@/features/instruments/api/list-instrum
 import type { LateBoilInitialValues } from '@/features/late-boil/components/form-values';
 import { OfflineStatus } from '@/components/offline/offline-status';
 import { QueuedList } from '@/components/offline/queued-list';
-import { ButtonLink } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Loading, PageHeader } from '@/components/ui/page';
 
 // The late-boil check shows on the boil stage only: a brew day opened at another stage does not load it.

@@ -6,7 +6,8 @@ import { BrewLog } from '@/features/brews/components/brew-log';
 import { BrewMissing } from '@/features/brews/components/brew-missing';
 import { BrewComments } from '@/features/reviews/components/brew-comments';
 import { QueuedList } from '@/components/offline/queued-list';
-import { Button, ButtonLink } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Loading, PageHeader } from '@/components/ui/page';
 
 export function loader(queryClient: QueryClient) {

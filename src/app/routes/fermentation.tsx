@@ -18,7 +18,8 @@ import { RemindersToggle } from '@/features/fermentation/components/reminders-to
 import { TemperaturePanel } from '@/features/fermentation/components/temperature-panel';
 import { VerdictBanner } from '@/features/fermentation/components/verdict-banner';
 import { shortDateTime } from '@/features/fermentation/components/words';
-import { buttonClass, ButtonLink } from '@/components/ui/button';
+import { buttonClass } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Notice } from '@/components/ui/notice';
 import { Card, Loading, PageHeader } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';

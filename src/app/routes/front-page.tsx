@@ -1,6 +1,6 @@
 import { BookOpen, FlaskConical, Gauge, MessageSquareText, Thermometer } from 'lucide-react';
 import { Link } from 'react-router';
-import { ButtonLink } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 
 const points = [
   { icon: BookOpen, title: 'Recipes with targets', text: 'Original and final gravity, volumes, boil-off, mash pH and temperatures: what every brew day is judged against.' },

@@ -1,7 +1,7 @@
 import { BookOpen, Flame, FlaskConical, Gauge } from 'lucide-react';
 import { Link, useLocation } from 'react-router';
 import { useBrews } from '@/features/brews/api/list-brews';
-import { ButtonLink } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Card, Loading, PageHeader } from '@/components/ui/page';
 import { useMe } from '@/lib/auth';
 import { useUnits } from '@/lib/units';

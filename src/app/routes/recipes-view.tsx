@@ -13,7 +13,8 @@ import { recipeQueryOptions, useRecipe } from '@/features/recipes/api/get-recipe
 import { describeFilePath } from '@/features/recipes/components/import-panel';
 import { RecipeView } from '@/features/recipes/components/recipe-view';
 import { SharingPanel } from '@/features/recipes/components/sharing-panel';
-import { Button, ButtonLink, buttonClass } from '@/components/ui/button';
+import { Button, buttonClass } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Notice } from '@/components/ui/notice';
 import { Card, Loading, PageHeader } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';

@@ -6,7 +6,8 @@ import { recipeScopes, recipeSorts, type ListRecipesQuery, type RecipeScope, typ
 import { recipePagesQueryOptions } from '@/features/recipes/api/list-recipes';
 import { ImportPanel } from '@/features/recipes/components/import-panel';
 import { RECIPES_PAGE_SIZE, RecipeList } from '@/features/recipes/components/recipe-list';
-import { Button, ButtonLink } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Card, PageHeader } from '@/components/ui/page';
 
 /** The list's query lives in the URL, so back, reload and a shared link all show the same page. */

@@ -1,7 +1,8 @@
 import { useNavigate, useParams } from 'react-router';
 import { useResetLink } from '@/features/auth/api/reset-password';
 import { ResetPasswordForm } from '@/features/auth/components/reset-password-form';
-import { Button, ButtonLink } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Notice } from '@/components/ui/notice';
 import { Card, Loading } from '@/components/ui/page';
 import { ApiError } from '@/lib/api-client';

@@ -10,7 +10,7 @@ import { CommentThread } from '@/features/reviews/components/comment-thread';
 import { fermentationEntries, type ReviewEntry } from '@/features/reviews/components/fermentation-entries';
 import { ReviewDeviations } from '@/features/reviews/components/review-deviations';
 import { TargetComments } from '@/features/reviews/components/target-comments';
-import { ButtonLink } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { Card, Loading, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';

@@ -3,8 +3,8 @@ import { lazy, Suspense, useEffect, useRef, useState } from 'react';
 import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
 import { useMe } from '@/lib/auth';
 import { UpdatePrompt } from '@/components/offline/update-prompt';
-import { buttonClass } from '@/components/ui/button';
 import { Loading } from '@/components/ui/page';
+import { Brand, brandClass, createAccountClass, headerBarClass, headerClass, mainClass, navClass, navItemClass, navListClass, signInClass, SiteFooter } from '@/components/ui/site-frame';
 import { navItems } from '../nav';
 
 // A signed-in brewer's header parts, one chunk fetched only once someone is signed in.
@@ -37,11 +37,10 @@ export function RootLayout() {
   }, [menuOpen]);
   return (
     <div className="flex min-h-screen flex-col">
-      <header className="no-print bg-cellar-700 text-white">
-        <div className="mx-auto flex max-w-5xl items-center gap-2 px-3 py-1 sm:px-6">
-          <Link to="/" className="flex min-h-touch items-center gap-2 text-xl font-bold tracking-tight">
-            <img src="/favicon.svg" alt="" className="size-7" />
-            Wortwise
+      <header className={headerClass}>
+        <div className={headerBarClass}>
+          <Link to="/" className={brandClass}>
+            <Brand />
           </Link>
           <div className="ml-auto flex items-center gap-1">
             {me && (
@@ -69,10 +68,10 @@ export function RootLayout() {
               </Suspense>
             ) : (
               <>
-                <Link to="/sign-in" className="flex min-h-touch items-center rounded-lg px-3 hover:bg-cellar-900">
+                <Link to="/sign-in" className={signInClass}>
                   Sign in
                 </Link>
-                <Link to="/sign-up" className={buttonClass('secondary', 'hidden sm:inline-flex')}>
+                <Link to="/sign-up" className={createAccountClass}>
                   Create account
                 </Link>
               </>
@@ -80,16 +79,14 @@ export function RootLayout() {
           </div>
         </div>
         {items.length > 0 && (
-          <nav id="main-nav" aria-label="Main" className={`mx-auto max-w-5xl px-2 pb-2 sm:block sm:px-4 sm:pb-0 ${menuOpen || items.length === 1 ? 'block' : 'hidden'}`}>
-            <ul className="grid grid-cols-2 gap-1 sm:flex sm:flex-wrap">
+          <nav id="main-nav" aria-label="Main" className={`${navClass} ${menuOpen || items.length === 1 ? 'block' : 'hidden'}`}>
+            <ul className={navListClass}>
               {items.map(({ to, label, icon: Icon }) => (
                 <li key={to}>
                   <NavLink
                     to={to}
                     end={to === '/'}
-                    className={({ isActive }) =>
-                      `flex min-h-touch items-center gap-1.5 whitespace-nowrap rounded-lg px-3 text-sm font-semibold sm:rounded-b-none sm:rounded-t-lg ${isActive ? 'bg-paper text-cellar-900' : 'text-cellar-100 hover:bg-cellar-900'}`
-                    }
+                    className={({ isActive }) => navItemClass(isActive)}
                   >
                     <Icon aria-hidden className="size-4" />
                     {label}
@@ -101,14 +98,12 @@ export function RootLayout() {
         )}
       </header>
       <UpdatePrompt />
-      <main className="mx-auto w-full max-w-5xl flex-1 px-3 py-6 sm:px-6" aria-busy={navigation.state === 'loading'}>
+      <main className={mainClass} aria-busy={navigation.state === 'loading'}>
         <Suspense fallback={<Loading />}>
           <Outlet />
         </Suspense>
       </main>
-      <footer className="no-print border-t border-cellar-100 px-3 py-4 text-center text-sm text-ink-faint">
-        Wortwise helps you measure and decide; brewing and drinking rules differ by place, so follow your local law.
-      </footer>
+      <SiteFooter />
     </div>
   );
 }

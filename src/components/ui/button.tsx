@@ -1,22 +1,25 @@
+/**
+ * Buttons, and the class a link takes to look like one. The router's link that looks like a button
+ * is in button-link.tsx, so a page without the router (the public check's own page) can use these.
+ */
 import type { ButtonHTMLAttributes, ReactNode } from 'react';
-import { Link, type LinkProps } from 'react-router';
 import { LoaderCircle } from 'lucide-react';
 
-type Variant = 'primary' | 'secondary' | 'quiet' | 'danger';
+export type ButtonVariant = 'primary' | 'secondary' | 'quiet' | 'danger';
 
-const variants: Record<Variant, string> = {
+const variants: Record<ButtonVariant, string> = {
   primary: 'bg-cellar-700 text-white hover:bg-cellar-900 disabled:bg-cellar-300',
   secondary: 'bg-white text-cellar-700 ring-1 ring-inset ring-cellar-300 hover:bg-cellar-50',
   quiet: 'text-cellar-700 hover:bg-cellar-50',
   danger: 'bg-alert-500 text-white hover:bg-alert-700',
 };
 
-export function buttonClass(variant: Variant = 'primary', extra = '') {
+export function buttonClass(variant: ButtonVariant = 'primary', extra = '') {
   return `inline-flex min-h-touch min-w-touch items-center justify-center gap-2 rounded-lg px-4 py-2 text-base font-semibold transition-colors disabled:cursor-not-allowed ${variants[variant]} ${extra}`;
 }
 
 interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
-  variant?: Variant;
+  variant?: ButtonVariant;
   busy?: boolean;
   icon?: ReactNode;
 }
@@ -28,8 +31,4 @@ export function Button({ variant = 'primary', busy = false, icon, className = ''
       {children}
     </button>
   );
-}
-
-export function ButtonLink({ variant = 'primary', className = '', ...rest }: LinkProps & { variant?: Variant }) {
-  return <Link className={buttonClass(variant, className)} {...rest} />;
 }

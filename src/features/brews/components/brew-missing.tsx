@@ -1,4 +1,4 @@
-import { ButtonLink } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button-link';
 import { ApiError } from '@/lib/api-client';
 
 /** Not found and not shared with you look the same: nobody learns another brewer's brew day exists. */

@@ -1,12 +1,13 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { MemoryRouter } from 'react-router';
+import { Link, MemoryRouter } from 'react-router';
 import { describe, expect, it, vi } from 'vitest';
 import { meQueryOptions } from '@/lib/auth';
 import { unitsFor, type Units } from '@/lib/units';
 import type { LateBoilInitialValues } from './form-values';
 import { LateBoilCheck, type LateBoilCheckProps } from './late-boil-check';
+import { SignUpNudge } from './public-check';
 
 const metric = unitsFor({ unitSystem: 'metric', gravityUnit: 'sg' });
 const us = unitsFor({ unitSystem: 'us', gravityUnit: 'sg' });
@@ -143,7 +144,7 @@ describe('LateBoilCheck', { timeout: 30_000 }, () => {
   });
 
   it('without onChoose, invites a visitor to sign up instead of saving', async () => {
-    renderCheck();
+    renderCheck({ nudge: <SignUpNudge Link={({ to, className, children }) => <Link to={to} className={className}>{children}</Link>} /> });
     await enterWorkedExample();
     expect(screen.queryByRole('button', { name: 'Choose this' })).not.toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Sign up to keep a log of your brew days' })).toHaveAttribute('href', '/sign-up');

@@ -1,5 +1,4 @@
 import { lazy, memo, Suspense, useCallback, useDeferredValue, useEffect, useMemo, useReducer, useRef, useState, type ReactNode } from 'react';
-import { Link } from 'react-router';
 import { ArrowDown, ChevronRight } from 'lucide-react';
 import type { BalanceRecipe, BoilCheckOutcome, FeasibleOption } from '@shared/boil-check';
 import { gapInWords, optionAction } from '@shared/boil-check/words';
@@ -31,7 +30,7 @@ export interface LateBoilCheckProps {
    * Without it, the nudge is shown in place of the "Choose this" buttons.
    */
   onChoose?: (choice: LateBoilChoice) => Promise<unknown> | void;
-  /** Shown below the options when there is no onChoose; a sign-up invitation by default. */
+  /** Shown below the options when there is no onChoose (the public page's sign-up invitation). */
   nudge?: ReactNode;
   /** Rendered after the options, with the current check (or null while it cannot run). */
   renderAfterOptions?: (check: { input: BoilCheckParsed; result: BoilCheckOutcome } | null) => ReactNode;
@@ -414,7 +413,7 @@ const Answer = memo(function Answer({
       </div>
       {check.ok && answerBelow && <AnswerBar outcome={check.outcome} units={units} onShow={() => resultsRef.current?.scrollIntoView({ behavior: 'smooth' })} />}
       {renderAfterOptions?.(check.ok ? { input: check.input, result: check.outcome } : null)}
-      {!onChoose && (nudge ?? signUpNudge)}
+      {!onChoose && nudge}
     </div>
   );
 });
@@ -467,15 +466,3 @@ function AnswerBar({ outcome, units, onShow }: { outcome: BoilCheckOutcome; unit
   );
 }
 
-const signUpNudge = <SignUpNudge />;
-
-function SignUpNudge() {
-  return (
-    <p className="rounded-xl bg-malt-50 p-4 text-malt-700">
-      <Link to="/sign-up" className="font-semibold underline">
-        Sign up to keep a log of your brew days
-      </Link>{' '}
-      — every reading and every choice, with its reasons, for you and your mentor.
-    </p>
-  );
-}
