@@ -30,11 +30,11 @@ class StillRunning extends HttpError {
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
+/** The row of one brewer's key (keys are per user). */
+const keyOf = (userId: number, key: string) => and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key));
+
 async function findKey(db: Db, userId: number, key: string) {
-  const [row] = await db
-    .select()
-    .from(idempotencyKeys)
-    .where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)));
+  const [row] = await db.select().from(idempotencyKeys).where(keyOf(userId, key));
   return row ?? null;
 }
 
@@ -83,7 +83,8 @@ async function claimKey(db: Db, key: string, userId: number, req: Request, res: 
   if (Math.random() < 0.01) void db.delete(idempotencyKeys).where(lt(idempotencyKeys.expiresAt, now)).catch(() => {});
 
   let settled = false;
-  const forget = () => db.delete(idempotencyKeys).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)));
+  const thisKey = keyOf(userId, key);
+  const forget = () => db.delete(idempotencyKeys).where(thisKey);
   const keep = (status: number) => status < 500 && status !== 429;
   // The answer is stored before it is sent, so a retry never finds the key without it.
   const send = res.json.bind(res);
@@ -92,7 +93,7 @@ async function claimKey(db: Db, key: string, userId: number, req: Request, res: 
     settled = true;
     const status = res.statusCode;
     const store = keep(status)
-      ? db.update(idempotencyKeys).set({ status, body: body ?? null }).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key)))
+      ? db.update(idempotencyKeys).set({ status, body: body ?? null }).where(thisKey)
       : forget();
     store.then(
       () => send(body),
@@ -105,7 +106,7 @@ async function claimKey(db: Db, key: string, userId: number, req: Request, res: 
     settled = true;
     // Answered without JSON (204 and the like): keep the status, or free the key for a retry.
     const status = res.statusCode;
-    void (keep(status) ? db.update(idempotencyKeys).set({ status, body: null }).where(and(eq(idempotencyKeys.userId, userId), eq(idempotencyKeys.key, key))) : forget()).catch(() => {});
+    void (keep(status) ? db.update(idempotencyKeys).set({ status, body: null }).where(thisKey) : forget()).catch(() => {});
   });
   res.on('close', () => {
     if (!settled) {

@@ -2,8 +2,8 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { FlaskConical } from 'lucide-react';
 import { useEffect, useState } from 'react';
 import { registerSW } from 'virtual:pwa-register';
-import { Brand, brandClass, createAccountClass, headerBarClass, headerClass, mainClass, navClass, navItemClass, navListClass, signInClass, SiteFooter } from '@/components/ui/site-frame';
-import { PublicCheck, type PageLink } from '@/features/late-boil/components/public-check';
+import { mainClass, MainNav, navItemClass, SignedOutLinks, SiteFooter, SiteHeader, type PageLink } from '@/components/ui/site-frame';
+import { PublicCheck } from '@/features/late-boil/components/public-check';
 import { createQueryClient } from '@/lib/query-client';
 
 /** Links into the app: a full page load, which the app's own page answers. */
@@ -22,31 +22,20 @@ export function PublicCheckPage() {
   return (
     <QueryClientProvider client={queryClient}>
       <div className="flex min-h-screen flex-col">
-        <header className={headerClass}>
-          <div className={headerBarClass}>
-            <a href="/" className={brandClass}>
-              <Brand />
-            </a>
-            <div className="ml-auto flex items-center gap-1">
-              <a href="/sign-in" className={signInClass}>
-                Sign in
-              </a>
-              <a href="/sign-up" className={createAccountClass}>
-                Create account
-              </a>
-            </div>
-          </div>
-          <nav id="main-nav" aria-label="Main" className={`${navClass} block`}>
-            <ul className={navListClass}>
+        <SiteHeader
+          Link={PlainLink}
+          actions={<SignedOutLinks Link={PlainLink} />}
+          nav={
+            <MainNav shown>
               <li>
                 <a href="/late-boil-check" aria-current="page" className={navItemClass(true)}>
                   <FlaskConical aria-hidden className="size-4" />
                   Late-boil check
                 </a>
               </li>
-            </ul>
-          </nav>
-        </header>
+            </MainNav>
+          }
+        />
         <main className={mainClass}>
           <PublicCheck Link={PlainLink} />
         </main>

@@ -1,10 +1,11 @@
 import { Menu, X } from 'lucide-react';
 import { lazy, Suspense, useEffect, useRef, useState } from 'react';
-import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
+import { NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router';
 import { useMe } from '@/lib/auth';
 import { UpdatePrompt } from '@/components/offline/update-prompt';
 import { Loading } from '@/components/ui/page';
-import { Brand, brandClass, createAccountClass, headerBarClass, headerClass, mainClass, navClass, navItemClass, navListClass, signInClass, SiteFooter } from '@/components/ui/site-frame';
+import { mainClass, MainNav, navItemClass, SignedOutLinks, SiteFooter, SiteHeader } from '@/components/ui/site-frame';
+import { RouterLink } from '../router-link';
 import { navItems } from '../nav';
 
 // A signed-in brewer's header parts, one chunk fetched only once someone is signed in.
@@ -37,12 +38,10 @@ export function RootLayout() {
   }, [menuOpen]);
   return (
     <div className="flex min-h-screen flex-col">
-      <header className={headerClass}>
-        <div className={headerBarClass}>
-          <Link to="/" className={brandClass}>
-            <Brand />
-          </Link>
-          <div className="ml-auto flex items-center gap-1">
+      <SiteHeader
+        Link={RouterLink}
+        actions={
+          <>
             {me && (
               <Suspense fallback={null}>
                 <OfflineSync />
@@ -67,36 +66,25 @@ export function RootLayout() {
                 <PreferencesMenu me={me} onSignedOut={() => navigate('/sign-in')} />
               </Suspense>
             ) : (
-              <>
-                <Link to="/sign-in" className={signInClass}>
-                  Sign in
-                </Link>
-                <Link to="/sign-up" className={createAccountClass}>
-                  Create account
-                </Link>
-              </>
+              <SignedOutLinks Link={RouterLink} />
             )}
-          </div>
-        </div>
-        {items.length > 0 && (
-          <nav id="main-nav" aria-label="Main" className={`${navClass} ${menuOpen || items.length === 1 ? 'block' : 'hidden'}`}>
-            <ul className={navListClass}>
+          </>
+        }
+        nav={
+          items.length > 0 && (
+            <MainNav shown={menuOpen || items.length === 1}>
               {items.map(({ to, label, icon: Icon }) => (
                 <li key={to}>
-                  <NavLink
-                    to={to}
-                    end={to === '/'}
-                    className={({ isActive }) => navItemClass(isActive)}
-                  >
+                  <NavLink to={to} end={to === '/'} className={({ isActive }) => navItemClass(isActive)}>
                     <Icon aria-hidden className="size-4" />
                     {label}
                   </NavLink>
                 </li>
               ))}
-            </ul>
-          </nav>
-        )}
-      </header>
+            </MainNav>
+          )
+        }
+      />
       <UpdatePrompt />
       <main className={mainClass} aria-busy={navigation.state === 'loading'}>
         <Suspense fallback={<Loading />}>

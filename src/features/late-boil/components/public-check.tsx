@@ -3,18 +3,16 @@
  * `/late-boil-check` route and by the check's own small page (src/public-check.tsx, decision
  * 0026), which differ only in how a link is followed: through the router, or as a plain link.
  */
-import { useState, type ComponentType, type ReactNode } from 'react';
+import { useState } from 'react';
 import type { GravityUnit, UnitSystem } from '@shared/brewmath';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page';
 import { SegmentedControl } from '@/components/ui/segmented-control';
+import type { PageLink } from '@/components/ui/site-frame';
 import { useMe } from '@/lib/auth';
 import { unitsFor, useUnits, type UnitPrefs } from '@/lib/units';
 import type { LateBoilInitialValues } from './form-values';
 import { LateBoilCheck } from './late-boil-check';
-
-/** A link to one of the app's pages, as the page rendering the check follows links. */
-export type PageLink = ComponentType<{ to: string; className?: string; children: ReactNode }>;
 
 const storageKey = 'wortwise.visitor-units';
 
