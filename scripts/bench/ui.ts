@@ -304,8 +304,16 @@ async function main() {
     };
     const floorKeys = await throttled(floorBase, '/', async () => '#floor-input');
     const checkKeys = await throttled(wwBase, '/late-boil-check', async (page) => {
-      await page.getByRole('radio', { name: 'Litres, kg' }).click();
-      await page.getByText('Refractometer', { exact: true }).click();
+      // By keyboard, as the floor's input is filled: a click would leave Playwright's pointer over
+      // the page, and Chromium then hit-tests under it for hover at the start of each frame after
+      // the layout changed (style, layout and pre-paint before requestAnimationFrame), which the
+      // floor's page never pays and a phone, with no pointer hovering, does not either.
+      for (const name of ['Litres, kg', 'Refractometer']) {
+        const radio = page.getByRole('radio', { name, exact: true });
+        await radio.focus();
+        await page.keyboard.press('Space');
+        if (!(await radio.isChecked())) throw new Error(`the ${name} choice did not take`);
+      }
       await page.getByLabel('Wort in the kettle (hot)').fill('26');
       await page.getByLabel('Boil-off rate').fill('4');
       await page.getByLabel('Target OG').fill('1.050');
