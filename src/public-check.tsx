@@ -8,14 +8,11 @@
  */
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { PublicCheckPage } from './app/public-check-page';
 import './index.css';
 
-// The page itself is a chunk of its own: only this file is the entry's, so the build's shell group
-// (vite.config.ts) never pulls the check's code into the app's first page, or the app's into this one.
-void import('./app/public-check-page').then(({ PublicCheckPage }) => {
-  createRoot(document.getElementById('root')!).render(
-    <StrictMode>
-      <PublicCheckPage />
-    </StrictMode>,
-  );
-});
+createRoot(document.getElementById('root')!).render(
+  <StrictMode>
+    <PublicCheckPage />
+  </StrictMode>,
+);

@@ -5,7 +5,7 @@ import { useMe } from '@/lib/auth';
 import { UpdatePrompt } from '@/components/offline/update-prompt';
 import { Loading } from '@/components/ui/page';
 import { mainClass, MainNav, navItemClass, SignedOutLinks, SiteFooter, SiteHeader } from '@/components/ui/site-frame';
-import { RouterLink } from '../router-link';
+import { RouterLink } from '@/components/ui/router-link';
 import { navItems } from '../nav';
 
 // A signed-in brewer's header parts, one chunk fetched only once someone is signed in.

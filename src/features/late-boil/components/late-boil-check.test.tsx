@@ -1,8 +1,9 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { Link, MemoryRouter } from 'react-router';
+import { MemoryRouter } from 'react-router';
 import { describe, expect, it, vi } from 'vitest';
+import { RouterLink } from '@/components/ui/router-link';
 import { meQueryOptions } from '@/lib/auth';
 import { unitsFor, type Units } from '@/lib/units';
 import type { LateBoilInitialValues } from './form-values';
@@ -144,7 +145,7 @@ describe('LateBoilCheck', { timeout: 30_000 }, () => {
   });
 
   it('without onChoose, invites a visitor to sign up instead of saving', async () => {
-    renderCheck({ nudge: <SignUpNudge Link={({ to, className, children }) => <Link to={to} className={className}>{children}</Link>} /> });
+    renderCheck({ nudge: <SignUpNudge Link={RouterLink} /> });
     await enterWorkedExample();
     expect(screen.queryByRole('button', { name: 'Choose this' })).not.toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Sign up to keep a log of your brew days' })).toHaveAttribute('href', '/sign-up');

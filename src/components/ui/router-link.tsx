@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import type { PageLink } from '@/components/ui/site-frame';
+import type { PageLink } from './site-frame';
 
 /** Links followed by the router, for the parts shared with the public check's own page. */
 export const RouterLink: PageLink = ({ to, className, children }) => (
