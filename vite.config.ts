@@ -121,6 +121,10 @@ export default defineConfig({
             // own, since the public check's page needs React and the query cache only.
             { name: 'framework', test: /node_modules[\\/](react|react-dom|scheduler|@tanstack[\\/](query-core|react-query))[\\/]/, priority: 3 },
             { name: 'router', test: /node_modules[\\/]react-router[\\/]/, priority: 2 },
+            // The form libraries of our fixed choices, each a chunk of its own so a page's bill shows what
+            // they cost (bench:ui's reference rows); both already arrive whole, as one piece each.
+            { name: 'zod', test: /node_modules[\\/]zod[\\/]/, priority: 1 },
+            { name: 'formik', test: /node_modules[\\/](formik|lodash-es|deepmerge|react-fast-compare|hoist-non-react-statics|react-is|tiny-warning)[\\/]/, priority: 1 },
           ],
         },
       },

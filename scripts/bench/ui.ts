@@ -102,6 +102,8 @@ interface Transfer {
   encodings: Set<string>;
   /** Of `bytes`, the framework chunks' (React, TanStack Query and React Router: vite.config.ts's `framework` and `router` groups). */
   frameworkBytes: number;
+  /** Of `bytes`, the form libraries' (zod and Formik with its helpers: vite.config.ts's `zod` and `formik` groups). */
+  formBytes: number;
 }
 
 /** Loads urlPath cold in the page and sums the encoded body size of every script response until the network is idle. */
@@ -127,17 +129,19 @@ async function scriptTransfer(page: Page, urlPath: string, ready: (page: Page) =
   await cdp.detach();
   let bytes = 0;
   let frameworkBytes = 0;
+  let formBytes = 0;
   const listed: [string, number][] = [];
   for (const id of scripts.keys()) {
     const body = Math.max(0, (sizes.get(id) ?? 0) - (headerBytes.get(id) ?? 0));
     const pathname = new URL(urls.get(id) ?? '', 'http://x').pathname;
     bytes += body;
     if (/^\/assets\/(framework|router)-[\w-]+\.js$/.test(pathname)) frameworkBytes += body;
+    if (/^\/assets\/(zod|formik)-[\w-]+\.js$/.test(pathname)) formBytes += body;
     listed.push([pathname, body]);
   }
   // BENCH_LIST_SCRIPTS=1 prints each script of the load with its bytes on the wire, largest first.
   if (process.env.BENCH_LIST_SCRIPTS) console.log(`\n${urlPath}:\n${listed.sort((a, b) => b[1] - a[1]).map(([u, n]) => `  ${(n / 1000).toFixed(1).padStart(6)} kB  ${u}`).join('\n')}`);
-  return { bytes, scripts: scripts.size, encodings: new Set(scripts.values()), frameworkBytes };
+  return { bytes, scripts: scripts.size, encodings: new Set(scripts.values()), frameworkBytes, formBytes };
 }
 
 /**
@@ -342,6 +346,10 @@ async function main() {
     // budget is left for Wortwise's own code.
     const frameworkKb = transfers.first.reduce((n, t) => n + t.frameworkBytes, 0) / transfers.first.length / 1000;
     rows.push(['JS gzipped kB, of which the framework chunks (reference)', frameworkKb.toFixed(1), floorKb.toFixed(1), (frameworkKb / floorKb).toFixed(2), '', 'info']);
+    // And on a brew day, the framework plus the form libraries our stack fixes (zod, Formik): what
+    // the page spends before any of Wortwise's own code, against the same floor.
+    const brewFixedKb = transfers.brew.reduce((n, t) => n + t.frameworkBytes + t.formBytes, 0) / transfers.brew.length / 1000;
+    rows.push(['JS gzipped kB, brew day: framework, zod and Formik (reference)', brewFixedKb.toFixed(1), floorKb.toFixed(1), (brewFixedKb / floorKb).toFixed(2), '', 'info']);
     const keyRow = (what: string, q: number, limit: number) => {
       const ms = quantile(checkKeys, q);
       const base = quantile(floorKeys, q);
